@@ -1,0 +1,129 @@
+package org.wurtzkit.material;
+
+/**
+ * Every scalar parameter of a wurtzite material, with its SI unit, the unit used in parameter-set
+ * files, and the factor that converts the file unit to SI.
+ *
+ * <p>The {@link #key()} is the name used in parameter-set files ({@code GaN.C13 = 106}).
+ * Energies stay in eV (the trade's unit); masses are relative to the free electron mass m0;
+ * permittivities are relative to epsilon_0.
+ */
+public enum MaterialParameter {
+    /** In-plane lattice constant a. */
+    LATTICE_A("a", "m", "Angstrom", 1e-10),
+    /** Lattice constant c along the c axis. */
+    LATTICE_C("c", "m", "Angstrom", 1e-10),
+    /** Elastic stiffness C11. */
+    C11("C11", "Pa", "GPa", 1e9),
+    /** Elastic stiffness C12. */
+    C12("C12", "Pa", "GPa", 1e9),
+    /** Elastic stiffness C13. */
+    C13("C13", "Pa", "GPa", 1e9),
+    /** Elastic stiffness C33. */
+    C33("C33", "Pa", "GPa", 1e9),
+    /** Elastic stiffness C44. */
+    C44("C44", "Pa", "GPa", 1e9),
+    /** Piezoelectric constant e31. */
+    E31("e31", "C/m^2", "C/m^2", 1),
+    /** Piezoelectric constant e33. */
+    E33("e33", "C/m^2", "C/m^2", 1),
+    /** Piezoelectric constant e15 (shear; not used for c-plane strain, kept for completeness). */
+    E15("e15", "C/m^2", "C/m^2", 1),
+    /** Spontaneous polarization along [0001] (negative for all three nitrides in the BFV convention). */
+    SPONTANEOUS_POLARIZATION("Psp", "C/m^2", "C/m^2", 1),
+    /**
+     * Nonlinear (bowing) part of the spontaneous polarization of an alloy, sum of b_ij x_i x_j
+     * (Bernardini &amp; Fiorentini, Phys. Rev. B 64, 085207 (2001)); zero for a binary. The linear
+     * model uses {@link #SPONTANEOUS_POLARIZATION} alone, the nonlinear model adds this term.
+     */
+    SPONTANEOUS_POLARIZATION_BOWING("Psp_bowing", "C/m^2", "C/m^2", 1),
+    /**
+     * Linear coefficient of the nonlinear piezoelectric polarization P = a1 eps + a2 eps^2 with
+     * eps the basal strain (Bernardini &amp; Fiorentini 2001; Ambacher et al. 2002).
+     */
+    PIEZO_NONLINEAR_LINEAR("Ppz_nl_1", "C/m^2", "C/m^2", 1),
+    /** Quadratic coefficient of the nonlinear piezoelectric polarization for eps &gt; 0 (tensile). */
+    PIEZO_NONLINEAR_QUADRATIC_TENSILE("Ppz_nl_2_tensile", "C/m^2", "C/m^2", 1),
+    /** Quadratic coefficient of the nonlinear piezoelectric polarization for eps &lt; 0 (compressive). */
+    PIEZO_NONLINEAR_QUADRATIC_COMPRESSIVE("Ppz_nl_2_compressive", "C/m^2", "C/m^2", 1),
+    /** Band gap at 0 K. */
+    BAND_GAP_0K("Eg0", "eV", "eV", 1),
+    /** Varshni alpha: Eg(T) = Eg(0) - alpha T^2 / (T + beta). */
+    VARSHNI_ALPHA("varshni_alpha", "eV/K", "meV/K", 1e-3),
+    /** Varshni beta. */
+    VARSHNI_BETA("varshni_beta", "K", "K", 1),
+    /** Electron effective mass parallel to c (relative to m0). */
+    ELECTRON_MASS_PARALLEL("me_par", "m0", "m0", 1),
+    /** Electron effective mass perpendicular to c (relative to m0). */
+    ELECTRON_MASS_PERPENDICULAR("me_perp", "m0", "m0", 1),
+    /** Heavy-hole effective mass parallel to c (relative to m0). */
+    HEAVY_HOLE_MASS_PARALLEL("mhh_par", "m0", "m0", 1),
+    /** Heavy-hole effective mass perpendicular to c (relative to m0). */
+    HEAVY_HOLE_MASS_PERPENDICULAR("mhh_perp", "m0", "m0", 1),
+    /** Static relative permittivity (along c, the direction that matters for c-plane stacks). */
+    PERMITTIVITY_STATIC("eps_static", "1", "1", 1),
+    /** High-frequency relative permittivity. */
+    PERMITTIVITY_HIGH_FREQUENCY("eps_inf", "1", "1", 1),
+    /**
+     * Unstrained valence-band maximum on a common energy scale whose zero is the GaN valence-band
+     * maximum (eV). The valence-band offset of any pair is the difference of these.
+     */
+    VALENCE_BAND_EDGE("Ev", "eV", "eV", 1),
+    /** Conduction-band deformation potential along c, a_cz (a_c parallel). */
+    DEFORMATION_CB_PARALLEL("a_cz", "eV", "eV", 1),
+    /** Conduction-band deformation potential perpendicular to c, a_ct. */
+    DEFORMATION_CB_PERPENDICULAR("a_ct", "eV", "eV", 1),
+    /** Valence-band deformation potential D1. */
+    DEFORMATION_D1("D1", "eV", "eV", 1),
+    /** Valence-band deformation potential D2. */
+    DEFORMATION_D2("D2", "eV", "eV", 1),
+    /** Valence-band deformation potential D3. */
+    DEFORMATION_D3("D3", "eV", "eV", 1),
+    /** Valence-band deformation potential D4. */
+    DEFORMATION_D4("D4", "eV", "eV", 1);
+
+    private final String key;
+    private final String siUnit;
+    private final String fileUnit;
+    private final double fileToSi;
+
+    MaterialParameter(String key, String siUnit, String fileUnit, double fileToSi) {
+        this.key = key;
+        this.siUnit = siUnit;
+        this.fileUnit = fileUnit;
+        this.fileToSi = fileToSi;
+    }
+
+    /** @return the key in parameter-set files, e.g. "C13" */
+    public String key() {
+        return key;
+    }
+
+    /** @return the unit of {@link WurtziteMaterial#get(MaterialParameter)} */
+    public String siUnit() {
+        return siUnit;
+    }
+
+    /** @return the unit in which parameter-set files state the value */
+    public String fileUnit() {
+        return fileUnit;
+    }
+
+    /** @return the factor that converts a file value to the library unit */
+    public double fileToSi() {
+        return fileToSi;
+    }
+
+    /**
+     * @param key a file key such as "C13"
+     * @return the parameter, or null if no parameter has that key
+     */
+    public static MaterialParameter ofKey(String key) {
+        for (MaterialParameter p : values()) {
+            if (p.key.equals(key)) {
+                return p;
+            }
+        }
+        return null;
+    }
+}

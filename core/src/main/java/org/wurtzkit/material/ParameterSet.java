@@ -1,0 +1,50 @@
+package org.wurtzkit.material;
+
+import java.util.List;
+import org.wurtzkit.polarization.PolarizationModel;
+
+/**
+ * A named, published (or a team's own measured) set of wurtzite parameters: the three binaries,
+ * the alloy bowing parameters and the bibliography behind them.
+ *
+ * <p>Implementations must be immutable and thread-safe. The built-in sets live in the
+ * {@code materials-data} module; a team registers its own by implementing
+ * {@link ParameterSetProvider} and listing it in
+ * {@code META-INF/services/org.wurtzkit.material.ParameterSetProvider}. Find sets with
+ * {@link ParameterSets}.
+ */
+public interface ParameterSet {
+    /** @return the unique name by which the set is selected, e.g. "vurgaftman-meyer-2003" */
+    String name();
+
+    /** @return one sentence saying what the set follows */
+    String description();
+
+    /**
+     * @param binary GaN, AlN or InN
+     * @return that binary's parameters
+     */
+    WurtziteMaterial binary(Binary binary);
+
+    /** @return the bowing parameters of the three ternary pairs */
+    AlloyBowing bowing();
+
+    /**
+     * @return the polarization model that goes with the set's constants (used when a structure
+     *         does not name one)
+     */
+    PolarizationModel recommendedPolarizationModel();
+
+    /** @return every source cited by the set, without duplicates */
+    List<Source> sources();
+
+    /**
+     * Resolves an alloy by {@link AlloyRules}.
+     *
+     * @param composition the alloy
+     * @return its parameters
+     */
+    default WurtziteMaterial material(Composition composition) {
+        return AlloyRules.resolve(this, composition);
+    }
+}

@@ -1,0 +1,34 @@
+package org.wurtzkit.material;
+
+import java.util.List;
+
+/**
+ * Where a resolved parameter value comes from: the rule that produced it and the sources of the
+ * numbers the rule used.
+ *
+ * @param rule    e.g. "tabulated", "Vegard's law", "Vegard's law with bowing b = 0.7 eV"
+ * @param sources the sources of every number used (never empty)
+ */
+public record Provenance(String rule, List<Source> sources) {
+    /** Copies the list. */
+    public Provenance {
+        sources = List.copyOf(sources);
+    }
+
+    /**
+     * @param source the table the value was read from
+     * @return a "tabulated" provenance
+     */
+    public static Provenance tabulated(Source source) {
+        return new Provenance("tabulated", List.of(source));
+    }
+
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder(rule).append(" [");
+        for (int i = 0; i < sources.size(); i++) {
+            sb.append(i == 0 ? "" : "; ").append(sources.get(i).key());
+        }
+        return sb.append(']').toString();
+    }
+}

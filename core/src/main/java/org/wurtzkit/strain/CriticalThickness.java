@@ -1,0 +1,71 @@
+package org.wurtzkit.strain;
+
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.material.WurtziteMaterial;
+
+/**
+ * Matthews-Blakeslee estimate of the critical thickness of a strained layer (J. W. Matthews and
+ * A. E. Blakeslee, J. Cryst. Growth 27, 118 (1974)):
+ *
+ * <pre>
+ *   h_c = b (1 - nu cos^2 alpha) / (8 pi f (1 + nu) cos lambda) * [ln(h_c / b) + 1]
+ * </pre>
+ *
+ * with b the Burgers vector length (here the layer's lattice constant a, for a/3&lt;11-20&gt;
+ * dislocations), f = |eps_xx| the misfit strain, nu the Poisson ratio for biaxial c-plane strain
+ * C13/(C13 + C33), alpha the angle between dislocation line and Burgers vector and lambda the angle
+ * between the slip direction and the interface normal. The defaults alpha = lambda = 60 degrees are
+ * a common choice for a 60-degree dislocation (from memory).
+ *
+ * <p>This is an estimate only: AlGaN on GaN is observed to relax first by surface cracking at all
+ * compositions (S. R. Lee et al., Appl. Phys. Lett. 85, 6164 (2004), from memory), so the true
+ * limit can differ by a large factor. Use it as a warning threshold, not a growth rule.
+ *
+ * @param alphaDegrees  angle between dislocation line and Burgers vector (degrees), in (0, 90]
+ * @param lambdaDegrees angle between slip direction and interface normal (degrees), in [0, 90)
+ */
+public record CriticalThickness(double alphaDegrees, double lambdaDegrees) {
+    /** The default geometry, alpha = lambda = 60 degrees. */
+    public static final CriticalThickness MATTHEWS_BLAKESLEE_60 = new CriticalThickness(60, 60);
+
+    /** Validates the angles. */
+    public CriticalThickness {
+        Require.inRange("dislocation angle alpha (degrees)", alphaDegrees, 0, 90);
+        if (!(lambdaDegrees >= 0 && lambdaDegrees < 90)) {
+            throw new org.wurtzkit.errors.InvalidParameterException("slip angle lambda (degrees)",
+                    Double.toString(lambdaDegrees), "[0, 90)");
+        }
+    }
+
+    /**
+     * @param m      the layer material
+     * @param strain its strain
+     * @return the critical thickness (m); +infinity when unstrained; a value below the Burgers
+     *         vector length means the layer is unstable at any thickness
+     */
+    public double of(WurtziteMaterial m, Strain strain) {
+        double f = Math.abs(strain.xx());
+        if (f == 0) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double b = m.latticeA();
+        double nu = m.elastic().poissonRatio();
+        double cosA = Math.cos(Math.toRadians(alphaDegrees));
+        double cosL = Math.cos(Math.toRadians(lambdaDegrees));
+        double k = b * (1 - nu * cosA * cosA) / (8 * Math.PI * f * (1 + nu) * cosL);
+        if (k <= b) {
+            // h = k (ln(h/b) + 1) has no root above b: no thickness is stable
+            return k;
+        }
+        // Fixed-point iteration h <- k (ln(h/b) + 1); contracting for h > k (derivative k/h < 1).
+        double h = Math.max(10 * k, 10 * b);
+        for (int i = 0; i < 200; i++) {
+            double next = k * (Math.log(h / b) + 1);
+            if (Math.abs(next - h) <= 1e-14 * h) {
+                return next;
+            }
+            h = next;
+        }
+        return h;
+    }
+}

@@ -1,0 +1,119 @@
+package org.wurtzkit.structure;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.WurtziteMaterial;
+
+/**
+ * One epitaxial layer: name, material, thickness, doping, deep levels and relaxation. Immutable;
+ * the {@code with...} methods return modified copies.
+ *
+ * <pre>{@code
+ * Layer barrier = Layer.of("barrier", Composition.alGaN(0.25), 25 * Units.NM)
+ *         .withDopant(Dopant.donorsPerCm3(1e18, 0.03));
+ * }</pre>
+ *
+ * @param name       a name for reports (need not be unique)
+ * @param material   what the layer is made of
+ * @param thickness  thickness (m), &gt; 0 and at most 1 mm
+ * @param dopants    shallow dopants (uniform)
+ * @param deepLevels deep levels (uniform)
+ * @param deltaSheets delta-doping sheets inside the layer
+ * @param relaxation relaxation r in [0, 1] with respect to the layer below (0 = pseudomorphic)
+ */
+public record Layer(String name, LayerMaterial material, double thickness, List<Dopant> dopants,
+        List<DeepLevel> deepLevels, List<DeltaDoping> deltaSheets, double relaxation) {
+
+    /** Largest accepted layer thickness (m). */
+    public static final double MAX_THICKNESS = 1e-3;
+
+    /** Validates and copies the lists. */
+    public Layer {
+        Require.nonNull("layer name", name);
+        Require.nonNull("material of layer \"" + name + "\"", material);
+        if (!(thickness > 0 && thickness <= MAX_THICKNESS)) {
+            throw new InvalidParameterException("thickness of layer \"" + name + "\" (m)", Double.toString(thickness),
+                    "(0, " + MAX_THICKNESS + "]");
+        }
+        dopants = List.copyOf(dopants);
+        deepLevels = List.copyOf(deepLevels);
+        deltaSheets = List.copyOf(deltaSheets);
+        for (DeltaDoping d : deltaSheets) {
+            if (d.offsetFromLayerTop() > thickness) {
+                throw new InvalidParameterException("delta sheet offset in layer \"" + name + "\" (m)",
+                        Double.toString(d.offsetFromLayerTop()), "[0, " + thickness + "] (the layer's thickness)");
+            }
+        }
+        Require.inRange("relaxation of layer \"" + name + "\"", relaxation, 0, 1);
+    }
+
+    /**
+     * @param name        layer name
+     * @param composition alloy, resolved by the structure's parameter set
+     * @param thickness   thickness (m)
+     * @return an undoped pseudomorphic layer
+     */
+    public static Layer of(String name, Composition composition, double thickness) {
+        return new Layer(name, new LayerMaterial.Alloy(composition), thickness, List.of(), List.of(), List.of(), 0);
+    }
+
+    /**
+     * @param name      layer name
+     * @param material  a custom material
+     * @param thickness thickness (m)
+     * @return an undoped pseudomorphic layer
+     */
+    public static Layer of(String name, WurtziteMaterial material, double thickness) {
+        return new Layer(name, new LayerMaterial.Custom(material), thickness, List.of(), List.of(), List.of(), 0);
+    }
+
+    /**
+     * @param name      layer name
+     * @param bottom    composition at the layer's bottom
+     * @param top       composition at the layer's top
+     * @param thickness thickness (m)
+     * @return an undoped pseudomorphic layer graded linearly from bottom to top
+     */
+    public static Layer graded(String name, Composition bottom, Composition top, double thickness) {
+        return new Layer(name, new LayerMaterial.Graded(bottom, top), thickness, List.of(), List.of(), List.of(), 0);
+    }
+
+    /** @param d a dopant @return a copy with the dopant added */
+    public Layer withDopant(Dopant d) {
+        List<Dopant> l = new ArrayList<>(dopants);
+        l.add(Require.nonNull("dopant", d));
+        return new Layer(name, material, thickness, l, deepLevels, deltaSheets, relaxation);
+    }
+
+    /** @param d a deep level @return a copy with the level added */
+    public Layer withDeepLevel(DeepLevel d) {
+        List<DeepLevel> l = new ArrayList<>(deepLevels);
+        l.add(Require.nonNull("deep level", d));
+        return new Layer(name, material, thickness, dopants, l, deltaSheets, relaxation);
+    }
+
+    /** @param d a delta sheet @return a copy with the sheet added */
+    public Layer withDeltaDoping(DeltaDoping d) {
+        List<DeltaDoping> l = new ArrayList<>(deltaSheets);
+        l.add(Require.nonNull("delta doping", d));
+        return new Layer(name, material, thickness, dopants, deepLevels, l, relaxation);
+    }
+
+    /** @param r relaxation in [0, 1] @return a copy with that relaxation */
+    public Layer withRelaxation(double r) {
+        return new Layer(name, material, thickness, dopants, deepLevels, deltaSheets, r);
+    }
+
+    /** @param t thickness (m) @return a copy with that thickness */
+    public Layer withThickness(double t) {
+        return new Layer(name, material, t, dopants, deepLevels, deltaSheets, relaxation);
+    }
+
+    /** @return thickness (nm) */
+    public double thicknessNm() {
+        return thickness / org.wurtzkit.units.Units.NM;
+    }
+}

@@ -1,0 +1,409 @@
+package org.wurtzkit.structure;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.material.BandGap;
+import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.ParameterSet;
+import org.wurtzkit.material.WurtziteMaterial;
+import org.wurtzkit.polarization.Polarity;
+import org.wurtzkit.polarization.Polarization;
+import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.strain.BandEdgeShift;
+import org.wurtzkit.strain.CriticalThickness;
+import org.wurtzkit.strain.Strain;
+
+/**
+ * An immutable c-plane layer stack with everything a solver needs: the parameter set, the layers,
+ * the in-plane reference lattice, polarity, polarization model, temperature and the two boundaries.
+ * Thread-safe.
+ *
+ * <p>Build one with {@link #builder(ParameterSet)}; layers are added in growth order, bottom first:
+ *
+ * <pre>{@code
+ * Structure hemt = Structure.builder(ParameterSets.defaultSet())
+ *         .grow(Layer.of("buffer", Composition.GAN, 2000 * NM))   // first grown = bottom
+ *         .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
+ *         .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
+ *         .grow(Layer.of("cap", Composition.GAN, 2 * NM))          // last grown = top
+ *         .top(TopBoundary.schottky(1.0, 0.0))
+ *         .build();
+ * }</pre>
+ *
+ * <p>Coordinates: {@code depth} is measured from the top surface (0) into the stack. Polarization
+ * components "along growth" point from the substrate toward the surface (see {@link Polarity}).
+ *
+ * <p>Strain: each layer is grown on the actual in-plane lattice of the layer below it (the bottom
+ * layer on the reference lattice) and relaxes toward its own lattice constant by its relaxation r.
+ * The reference defaults to the bottom layer's own relaxed lattice constant (a relaxed buffer).
+ */
+public final class Structure {
+    private final ParameterSet parameters;
+    private final List<Layer> bottomUp;
+    private final List<LayerState> states; // top-down
+    private final double referenceLatticeA;
+    private final Polarity polarity;
+    private final PolarizationModel polarizationModel;
+    private final double temperatureK;
+    private final TopBoundary top;
+    private final BottomBoundary bottom;
+    private final double totalThickness;
+
+    private Structure(Builder b) {
+        this.parameters = b.parameters;
+        this.bottomUp = List.copyOf(b.layers);
+        this.polarity = b.polarity;
+        this.polarizationModel = b.polarizationModel != null ? b.polarizationModel
+                : parameters.recommendedPolarizationModel();
+        this.temperatureK = b.temperatureK;
+        this.top = b.top;
+        this.bottom = b.bottom;
+        Layer first = bottomUp.get(0);
+        this.referenceLatticeA = b.referenceLatticeA > 0 ? b.referenceLatticeA
+                : first.material().at(0, parameters).latticeA();
+        double t = 0;
+        for (Layer l : bottomUp) {
+            t += l.thickness();
+        }
+        this.totalThickness = t;
+        this.states = resolveStates();
+    }
+
+    private List<LayerState> resolveStates() {
+        int n = bottomUp.size();
+        LayerState[] out = new LayerState[n];
+        double below = referenceLatticeA;
+        double depthBottom = totalThickness;
+        for (int i = 0; i < n; i++) {
+            Layer l = bottomUp.get(i);
+            double depthTop = depthBottom - l.thickness();
+            if (i == n - 1) {
+                depthTop = 0; // exact zero at the surface despite round-off
+            }
+            PointState bot = point(l, 0, below);
+            PointState topState = l.material().isGraded() ? point(l, 1, below) : bot;
+            out[n - 1 - i] = new LayerState(l, n - 1 - i, depthTop, depthBottom, topState, bot);
+            below = topState.inPlaneLatticeA();
+            depthBottom = depthTop;
+        }
+        List<LayerState> list = new ArrayList<>(n);
+        Collections.addAll(list, out);
+        return Collections.unmodifiableList(list);
+    }
+
+    private PointState point(Layer l, double fromBottom, double inPlaneBelow) {
+        WurtziteMaterial m = l.material().at(fromBottom, parameters);
+        return pointFor(m, inPlaneBelow, l.relaxation());
+    }
+
+    private PointState pointFor(WurtziteMaterial m, double inPlaneBelow, double relaxation) {
+        Strain s = Strain.pseudomorphic(m, inPlaneBelow, relaxation);
+        Polarization p = Polarization.of(m, s, polarizationModel);
+        return new PointState(m, Strain.actualInPlaneLattice(m.latticeA(), inPlaneBelow, relaxation), s, p,
+                p.alongGrowth(polarity), BandEdgeShift.of(m, s));
+    }
+
+    /**
+     * @param set the parameter set that resolves every alloy of the stack
+     * @return a new builder
+     */
+    public static Builder builder(ParameterSet set) {
+        return new Builder(set);
+    }
+
+    /** @return a builder pre-filled with this structure, to derive a variant */
+    public Builder toBuilder() {
+        Builder b = new Builder(parameters);
+        b.layers.addAll(bottomUp);
+        b.referenceLatticeA = referenceLatticeA;
+        b.polarity = polarity;
+        b.polarizationModel = polarizationModel;
+        b.temperatureK = temperatureK;
+        b.top = top;
+        b.bottom = bottom;
+        return b;
+    }
+
+    /** @param t temperature (K) @return a copy at that temperature */
+    public Structure withTemperature(double t) {
+        return toBuilder().temperature(t).build();
+    }
+
+    /** @param boundary the new top boundary @return a copy with it */
+    public Structure withTop(TopBoundary boundary) {
+        Builder b = toBuilder();
+        b.top = Require.nonNull("top boundary", boundary);
+        return b.build();
+    }
+
+    /** @return the parameter set */
+    public ParameterSet parameters() {
+        return parameters;
+    }
+
+    /** @return the layers in growth order, bottom (first grown) first */
+    public List<Layer> layersBottomUp() {
+        return bottomUp;
+    }
+
+    /** @return the layers from the surface down, top first */
+    public List<Layer> layersTopDown() {
+        List<Layer> l = new ArrayList<>(bottomUp);
+        Collections.reverse(l);
+        return Collections.unmodifiableList(l);
+    }
+
+    /** @return every layer in place, from the surface down, with depths, strain and polarization */
+    public List<LayerState> layerStates() {
+        return states;
+    }
+
+    /** @return the in-plane lattice constant the bottom layer grows on (m) */
+    public double referenceLatticeA() {
+        return referenceLatticeA;
+    }
+
+    /** @return polarity */
+    public Polarity polarity() {
+        return polarity;
+    }
+
+    /** @return the polarization model in force */
+    public PolarizationModel polarizationModel() {
+        return polarizationModel;
+    }
+
+    /** @return temperature (K) */
+    public double temperatureK() {
+        return temperatureK;
+    }
+
+    /** @return the top boundary */
+    public TopBoundary top() {
+        return top;
+    }
+
+    /** @return the bottom boundary */
+    public BottomBoundary bottom() {
+        return bottom;
+    }
+
+    /** @return total thickness (m) */
+    public double totalThickness() {
+        return totalThickness;
+    }
+
+    /** @return depths of the internal interfaces below the surface, shallowest first (m) */
+    public double[] interfaceDepths() {
+        double[] d = new double[states.size() - 1];
+        for (int i = 0; i < d.length; i++) {
+            d[i] = states.get(i).depthBottom();
+        }
+        return d;
+    }
+
+    /**
+     * @param depth a depth in [0, total thickness] (m)
+     * @return the index from the top of the layer containing it (the upper layer at an interface)
+     */
+    public int layerIndexAt(double depth) {
+        Require.inRange("depth (m)", depth, 0, totalThickness);
+        for (int i = 0; i < states.size(); i++) {
+            if (depth <= states.get(i).depthBottom()) {
+                return i;
+            }
+        }
+        return states.size() - 1;
+    }
+
+    /**
+     * The state at a depth; inside a graded layer the composition is interpolated linearly.
+     *
+     * @param depth a depth in [0, total thickness] (m); at an interface the upper layer is used
+     * @return material, strain and polarization there
+     */
+    public PointState pointAt(double depth) {
+        LayerState s = states.get(layerIndexAt(depth));
+        if (!s.layer().material().isGraded()) {
+            return s.top();
+        }
+        double fromBottom = (s.depthBottom() - depth) / (s.depthBottom() - s.depthTop());
+        double below = s.indexFromTop() == states.size() - 1 ? referenceLatticeA
+                : states.get(s.indexFromTop() + 1).top().inPlaneLatticeA();
+        WurtziteMaterial m = s.layer().material().at(fromBottom, parameters);
+        return pointFor(m, below, s.layer().relaxation());
+    }
+
+    /**
+     * The bound sheet charges at the internal interfaces, shallowest first. Their sum equals
+     * P_z(bottom layer) - P_z(top layer) minus any bound charge inside graded layers.
+     *
+     * @return sigma = P_z(lower) - P_z(upper) at every interface
+     */
+    public List<InterfaceCharge> interfaceCharges() {
+        List<InterfaceCharge> out = new ArrayList<>();
+        for (int i = 0; i + 1 < states.size(); i++) {
+            LayerState up = states.get(i);
+            LayerState low = states.get(i + 1);
+            out.add(new InterfaceCharge(up.depthBottom(), up.layer().name(), low.layer().name(),
+                    low.top().alongGrowth() - up.bottom().alongGrowth()));
+        }
+        return Collections.unmodifiableList(out);
+    }
+
+    /** @return the bound charge at the top surface, sigma = P_z(top layer) - 0 */
+    public InterfaceCharge surfaceCharge() {
+        LayerState t = states.get(0);
+        return new InterfaceCharge(0, "vacuum", t.layer().name(), t.top().alongGrowth());
+    }
+
+    /**
+     * @param model the critical-thickness model
+     * @return the layers (from the top down) thicker than the critical thickness for their strain
+     */
+    public List<LayerState> layersBeyondCriticalThickness(CriticalThickness model) {
+        List<LayerState> out = new ArrayList<>();
+        for (LayerState s : states) {
+            PointState worst = Math.abs(s.top().strain().xx()) >= Math.abs(s.bottom().strain().xx()) ? s.top()
+                    : s.bottom();
+            if (s.layer().thickness() > model.of(worst.material(), worst.strain())) {
+                out.add(s);
+            }
+        }
+        return Collections.unmodifiableList(out);
+    }
+
+    /** @return the layers beyond the Matthews-Blakeslee thickness with the default 60-degree geometry */
+    public List<LayerState> layersBeyondCriticalThickness() {
+        return layersBeyondCriticalThickness(CriticalThickness.MATTHEWS_BLAKESLEE_60);
+    }
+
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("Structure[");
+        for (LayerState s : states) {
+            sb.append(s.layer().name()).append(' ').append(s.layer().material().describe()).append(' ')
+                    .append(String.format(java.util.Locale.ROOT, "%.3g nm", s.layer().thicknessNm())).append(" / ");
+        }
+        return sb.append(polarity).append(", ").append(temperatureK).append(" K]").toString();
+    }
+
+    /**
+     * Mutable builder; {@link #build()} validates everything and returns the immutable structure.
+     * Layers are added with {@link #grow(Layer)} in growth order: the first call is the bottom layer,
+     * each further call grows a layer on top of the previous one.
+     */
+    public static final class Builder {
+        private final ParameterSet parameters;
+        private final List<Layer> layers = new ArrayList<>();
+        private double referenceLatticeA = -1;
+        private Polarity polarity = Polarity.METAL_FACE;
+        private PolarizationModel polarizationModel;
+        private double temperatureK = 300;
+        private TopBoundary top;
+        private BottomBoundary bottom = new BottomBoundary.ZeroField();
+
+        private Builder(ParameterSet parameters) {
+            this.parameters = Require.nonNull("parameter set", parameters);
+        }
+
+        /**
+         * Grows a layer on top of those grown so far (the first call gives the bottom layer).
+         *
+         * @param layer the layer
+         * @return this builder
+         */
+        public Builder grow(Layer layer) {
+            layers.add(Require.nonNull("layer", layer));
+            return this;
+        }
+
+        /**
+         * The bottom layer grows on the relaxed lattice of this composition (a relaxed buffer or
+         * template). Default: the bottom layer's own lattice.
+         *
+         * @param composition the relaxed template
+         * @return this builder
+         */
+        public Builder onRelaxed(Composition composition) {
+            this.referenceLatticeA = parameters.material(composition).latticeA();
+            return this;
+        }
+
+        /**
+         * @param latticeA in-plane lattice constant the bottom layer grows on (m)
+         * @return this builder
+         */
+        public Builder onInPlaneLattice(double latticeA) {
+            this.referenceLatticeA = Require.inRange("in-plane reference lattice constant (m)", latticeA, 2.5e-10,
+                    4.0e-10);
+            return this;
+        }
+
+        /** @param p polarity (default metal-face) @return this builder */
+        public Builder polarity(Polarity p) {
+            this.polarity = Require.nonNull("polarity", p);
+            return this;
+        }
+
+        /**
+         * @param model the polarization model (default: the parameter set's recommended model)
+         * @return this builder
+         */
+        public Builder polarizationModel(PolarizationModel model) {
+            this.polarizationModel = Require.nonNull("polarization model", model);
+            return this;
+        }
+
+        /** @param t temperature in (0, 2000] K (default 300 K) @return this builder */
+        public Builder temperature(double t) {
+            this.temperatureK = BandGap.checkTemperature(t);
+            return this;
+        }
+
+        /**
+         * Sets the top boundary; setting it twice is an error, so that two contacts cannot be
+         * given by mistake.
+         *
+         * @param boundary a Schottky gate or a free surface
+         * @return this builder
+         */
+        public Builder top(TopBoundary boundary) {
+            Require.nonNull("top boundary", boundary);
+            if (top != null) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE,
+                        "the top boundary is already set to " + top + "; a stack has one top boundary, cannot also set "
+                                + boundary);
+            }
+            this.top = boundary;
+            return this;
+        }
+
+        /** @param boundary the bottom boundary (default zero field) @return this builder */
+        public Builder bottom(BottomBoundary boundary) {
+            this.bottom = Require.nonNull("bottom boundary", boundary);
+            return this;
+        }
+
+        /**
+         * @return the structure
+         * @throws WurtzkitException of kind INVALID_STRUCTURE for an empty stack or no top boundary
+         */
+        public Structure build() {
+            if (layers.isEmpty()) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE,
+                        "the stack is empty: number of layers = 0, allowed range [1, ...]; call grow(...) at least once");
+            }
+            if (top == null) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE,
+                        "no top boundary: call top(TopBoundary.schottky(...)) or top(TopBoundary.freeSurface(...))");
+            }
+            return new Structure(this);
+        }
+    }
+
+}

@@ -1,0 +1,68 @@
+package org.wurtzkit.structure;
+
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Units;
+
+/**
+ * The boundary condition at the top surface of the stack.
+ *
+ * <p>Energies are referred to the Fermi level of the bottom (grounded) end of the stack, which is
+ * 0 eV. A gate bias V on a Schottky contact puts the metal's Fermi level at -qV, so the
+ * conduction-band edge at the surface is E_c(0) = phi_B - qV (eV).
+ */
+public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.FreeSurface {
+
+    /**
+     * A Schottky (metal) gate: the conduction band at the surface is pinned at phi_B above the
+     * metal's Fermi level.
+     *
+     * @param barrierHeightEv phi_B (eV), in [0, 6]
+     * @param biasV           gate bias with respect to the bottom contact (V), in [-100, 20]
+     */
+    record Schottky(double barrierHeightEv, double biasV) implements TopBoundary {
+        /** Validates. */
+        public Schottky {
+            Require.inRange("Schottky barrier height (eV)", barrierHeightEv, 0, 6);
+            Require.inRange("gate bias (V)", biasV, -100, 20);
+        }
+
+        /** @param v bias (V) @return a copy at that bias */
+        public Schottky withBias(double v) {
+            return new Schottky(barrierHeightEv, v);
+        }
+    }
+
+    /**
+     * A free surface with a single level of donor-like surface states at E_D below the conduction
+     * band (the model of J. P. Ibbetson et al., Appl. Phys. Lett. 77, 250 (2000)); the states are
+     * positive when empty.
+     *
+     * @param donorEnergyBelowEcEv E_c - E_D at the surface (eV), in [0, 6]
+     * @param donorDensityPerM2    surface donor density (m^-2), in [0, 1e20]
+     */
+    record FreeSurface(double donorEnergyBelowEcEv, double donorDensityPerM2) implements TopBoundary {
+        /** Validates. */
+        public FreeSurface {
+            Require.inRange("surface donor energy below E_c (eV)", donorEnergyBelowEcEv, 0, 6);
+            Require.inRange("surface donor density (m^-2)", donorDensityPerM2, 0, 1e20);
+        }
+    }
+
+    /**
+     * @param barrierHeightEv phi_B (eV)
+     * @param biasV           gate bias (V)
+     * @return a Schottky gate
+     */
+    static Schottky schottky(double barrierHeightEv, double biasV) {
+        return new Schottky(barrierHeightEv, biasV);
+    }
+
+    /**
+     * @param donorEnergyBelowEcEv E_c - E_D (eV)
+     * @param densityPerCm2        surface donor density (cm^-2)
+     * @return a free surface with donor states
+     */
+    static FreeSurface freeSurface(double donorEnergyBelowEcEv, double densityPerCm2) {
+        return new FreeSurface(donorEnergyBelowEcEv, Units.perCm2ToPerM2(densityPerCm2));
+    }
+}

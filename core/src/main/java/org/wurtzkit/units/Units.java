@@ -1,0 +1,57 @@
+package org.wurtzkit.units;
+
+/**
+ * Conversions between the SI units used inside the library and the units the trade speaks
+ * (nm, Angstrom, cm^-2, cm^-3, GPa). Every method name says which way it converts.
+ */
+public final class Units {
+    private Units() {
+    }
+
+    /** Metres per nanometre. */
+    public static final double NM = 1e-9;
+    /** Metres per Angstrom. */
+    public static final double ANGSTROM = 1e-10;
+    /** Pascal per gigapascal. */
+    public static final double GPA = 1e9;
+
+    /** @param nm length (nm) @return length (m) */
+    public static double nmToM(double nm) {
+        return nm * NM;
+    }
+
+    /** @param m length (m) @return length (nm) */
+    public static double mToNm(double m) {
+        return m / NM;
+    }
+
+    /** @param perCm2 areal density (cm^-2) @return areal density (m^-2) */
+    public static double perCm2ToPerM2(double perCm2) {
+        return perCm2 * 1e4;
+    }
+
+    /** @param perM2 areal density (m^-2) @return areal density (cm^-2) */
+    public static double perM2ToPerCm2(double perM2) {
+        return perM2 * 1e-4;
+    }
+
+    /** @param perCm3 volume density (cm^-3) @return volume density (m^-3) */
+    public static double perCm3ToPerM3(double perCm3) {
+        return perCm3 * 1e6;
+    }
+
+    /** @param perM3 volume density (m^-3) @return volume density (cm^-3) */
+    public static double perM3ToPerCm3(double perM3) {
+        return perM3 * 1e-6;
+    }
+
+    /**
+     * Sheet charge expressed as a number of elementary charges per cm^2.
+     *
+     * @param sigma sheet charge (C/m^2)
+     * @return sigma / e (cm^-2), signed
+     */
+    public static double chargeToPerCm2(double sigma) {
+        return perM2ToPerCm2(sigma / Constants.ELEMENTARY_CHARGE);
+    }
+}
