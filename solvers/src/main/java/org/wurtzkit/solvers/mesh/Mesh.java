@@ -1,0 +1,149 @@
+package org.wurtzkit.solvers.mesh;
+
+import java.util.Arrays;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.Require;
+
+/**
+ * An immutable 1D non-uniform mesh of node depths (m), strictly increasing from 0 (the surface).
+ * Interfaces and other required points are nodes of the mesh.
+ */
+public final class Mesh {
+    private final double[] nodes;
+
+    private Mesh(double[] nodes) {
+        this.nodes = nodes;
+    }
+
+    /**
+     * @param nodes strictly increasing, finite node positions (m), at least 3
+     * @return the mesh (a copy of the array)
+     */
+    public static Mesh of(double[] nodes) {
+        Require.nonNull("mesh nodes", nodes);
+        if (nodes.length < 3) {
+            throw new InvalidParameterException("number of mesh nodes", Integer.toString(nodes.length), "[3, ...)");
+        }
+        for (int i = 0; i < nodes.length; i++) {
+            Require.finite("mesh node " + i, nodes[i]);
+            if (i > 0 && !(nodes[i] > nodes[i - 1])) {
+                throw new InvalidParameterException("mesh node " + i + " (m)", Double.toString(nodes[i]),
+                        "(" + nodes[i - 1] + ", ...) (strictly increasing)");
+            }
+        }
+        return new Mesh(nodes.clone());
+    }
+
+    /**
+     * Meshes [0, depths[last]] with a node at every given depth and spacings by the policy.
+     *
+     * @param breakpoints strictly increasing depths that must be nodes, the first 0 and the last the
+     *                    total thickness (m)
+     * @param policy      the spacing policy
+     * @return the mesh
+     */
+    public static Mesh generate(double[] breakpoints, MeshPolicy policy) {
+        Require.nonNull("mesh policy", policy);
+        if (breakpoints.length < 2 || breakpoints[0] != 0) {
+            throw new InvalidParameterException("mesh breakpoints", Arrays.toString(breakpoints),
+                    "at least two strictly increasing depths starting at 0");
+        }
+        double h0 = policy.interfaceSpacing();
+        double c = policy.growthRatio() - 1;
+        double hMax = policy.maxSpacing();
+        double[] buf = new double[64];
+        int n = 0;
+        buf[n++] = 0;
+        for (int s = 0; s + 1 < breakpoints.length; s++) {
+            double a = breakpoints[s];
+            double len = breakpoints[s + 1] - a;
+            if (!(len > 0)) {
+                throw new InvalidParameterException("mesh breakpoint " + (s + 1) + " (m)",
+                        Double.toString(breakpoints[s + 1]), "(" + a + ", ...) (strictly increasing)");
+            }
+            double total = 2 * phiHalf(len / 2, h0, c, hMax);
+            int cells = Math.max(2, (int) Math.ceil(total));
+            for (int k = 1; k <= cells; k++) {
+                double pos = k == cells ? breakpoints[s + 1] : a + inverse(total * k / cells, total, len, h0, c, hMax);
+                if (n == buf.length) {
+                    buf = Arrays.copyOf(buf, 2 * n);
+                }
+                buf[n++] = pos;
+            }
+        }
+        return of(Arrays.copyOf(buf, n));
+    }
+
+    // Phi(s) = integral_0^s dt / h(t) with h(t) = min(h0 + c t, hMax), for s within one half segment.
+    private static double phiHalf(double s, double h0, double c, double hMax) {
+        double sStar = (hMax - h0) / c;
+        if (s <= sStar) {
+            return Math.log1p(c * s / h0) / c;
+        }
+        return Math.log1p(c * sStar / h0) / c + (s - sStar) / hMax;
+    }
+
+    private static double phiHalfInverse(double phi, double h0, double c, double hMax) {
+        double sStar = (hMax - h0) / c;
+        double phiStar = Math.log1p(c * sStar / h0) / c;
+        if (phi <= phiStar) {
+            return h0 * Math.expm1(c * phi) / c;
+        }
+        return sStar + (phi - phiStar) * hMax;
+    }
+
+    private static double inverse(double phi, double total, double len, double h0, double c, double hMax) {
+        if (phi <= total / 2) {
+            return Math.min(len / 2, phiHalfInverse(phi, h0, c, hMax));
+        }
+        return len - Math.min(len / 2, phiHalfInverse(total - phi, h0, c, hMax));
+    }
+
+    /** @return the number of nodes */
+    public int size() {
+        return nodes.length;
+    }
+
+    /** @param i node index @return its depth (m) */
+    public double node(int i) {
+        return nodes[i];
+    }
+
+    /** @return a copy of the node depths (m) */
+    public double[] nodes() {
+        return nodes.clone();
+    }
+
+    /** @param i cell index in [0, size - 2] @return spacing z[i+1] - z[i] (m) */
+    public double spacing(int i) {
+        return nodes[i + 1] - nodes[i];
+    }
+
+    /**
+     * @param depth a depth (m)
+     * @return the index of the node closest to it
+     */
+    public int nearestNode(double depth) {
+        int k = Arrays.binarySearch(nodes, depth);
+        if (k >= 0) {
+            return k;
+        }
+        int ins = -k - 1;
+        if (ins == 0) {
+            return 0;
+        }
+        if (ins >= nodes.length) {
+            return nodes.length - 1;
+        }
+        return depth - nodes[ins - 1] <= nodes[ins] - depth ? ins - 1 : ins;
+    }
+
+    /** @return the largest spacing (m) */
+    public double maxSpacing() {
+        double m = 0;
+        for (int i = 0; i + 1 < nodes.length; i++) {
+            m = Math.max(m, nodes[i + 1] - nodes[i]);
+        }
+        return m;
+    }
+}

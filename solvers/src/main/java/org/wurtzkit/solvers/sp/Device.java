@@ -1,0 +1,330 @@
+package org.wurtzkit.solvers.sp;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.TreeSet;
+import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.material.Binary;
+import org.wurtzkit.material.EffectiveMasses;
+import org.wurtzkit.material.WurtziteMaterial;
+import org.wurtzkit.solvers.mesh.Mesh;
+import org.wurtzkit.structure.BottomBoundary;
+import org.wurtzkit.structure.DeepLevel;
+import org.wurtzkit.structure.DeltaDoping;
+import org.wurtzkit.structure.Dopant;
+import org.wurtzkit.structure.Layer;
+import org.wurtzkit.structure.LayerState;
+import org.wurtzkit.structure.PointState;
+import org.wurtzkit.structure.Structure;
+import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.units.Constants;
+
+/**
+ * A structure resolved once onto a mesh: per-cell material arrays and per-node sheet charges. Depth
+ * x grows from the surface into the stack; energies are in eV with the bottom contact's Fermi level
+ * at 0; the electrostatic potential phi is in V, so a band edge at node i in cell k is E_k - phi_i.
+ * Immutable after construction.
+ */
+final class Device {
+    static final double Q = Constants.ELEMENTARY_CHARGE;
+
+    final Structure structure;
+    final SolverOptions options;
+    final Mesh mesh;
+    final int n;
+    final double[] x;
+    final double[] h;
+    final double vt;
+    final double kT; // J
+
+    // per cell
+    final double[] eps; // F/m
+    final double[] px; // polarization component along +x (depth) = -P_z (C/m^2)
+    final double[] ec; // conduction-band edge at phi = 0 (eV)
+    final double[] ev; // valence-band edge at phi = 0 (eV)
+    final double[] nc; // m^-3
+    final double[] nv; // m^-3
+    final double[] massZ; // m/m0 along c (Schroedinger)
+    final double[] massXY; // m/m0 in plane (2D density of states)
+    final int[] layerOfCell;
+
+    // dopant species per layer (top-down index), flattened
+    final double[][] speciesDensity; // m^-3
+    final double[][] speciesEnergy; // eV from the band edge (donor: below Ec; acceptor: above Ev; deep: below Ec)
+    final double[][] speciesDegeneracy;
+    final int[][] speciesKind; // 0 donor, 1 acceptor, 2 deep donor-like, 3 deep acceptor-like
+
+    // per node delta sheets
+    final double[] deltaDensity; // m^-2 (donor > 0 sheets only: acceptor sheets stored negative-kind below)
+    final double[] deltaEnergy;
+    final boolean[] deltaIsDonor;
+
+    // boundaries
+    final boolean topDirichlet;
+    final double phiTop;
+    final double surfaceDonorDensity; // m^-2
+    final double surfaceDonorEnergy; // eV below Ec
+    final boolean bottomDirichlet;
+    final double phiBottom;
+    final double holeFermiEv;
+
+    /** true where the two cells around node i hold the same material and species (no interface). */
+    final boolean[] sameCellsAround;
+
+    // quantum windows: node index ranges [start, end] inclusive
+    final int[] windowStart;
+    final int[] windowEnd;
+    final boolean[] quantumNode; // interior node of some window
+
+    Device(Structure s, SolverOptions o) {
+        this.structure = s;
+        this.options = o;
+        this.vt = Constants.thermalVoltage(s.temperatureK());
+        this.kT = Constants.BOLTZMANN * s.temperatureK();
+
+        List<double[]> windows = resolveWindows(s, o.quantumRegion());
+        TreeSet<Double> breaks = new TreeSet<>();
+        breaks.add(0.0);
+        breaks.add(s.totalThickness());
+        for (double d : s.interfaceDepths()) {
+            breaks.add(d);
+        }
+        for (LayerState st : s.layerStates()) {
+            for (DeltaDoping dd : st.layer().deltaSheets()) {
+                breaks.add(st.depthTop() + dd.offsetFromLayerTop());
+            }
+        }
+        for (double[] w : windows) {
+            breaks.add(w[0]);
+            breaks.add(w[1]);
+        }
+        double[] bp = mergeClose(breaks, 1e-13);
+        this.mesh = Mesh.generate(bp, o.mesh());
+        this.n = mesh.size();
+        this.x = mesh.nodes();
+        this.h = new double[n - 1];
+        for (int i = 0; i < n - 1; i++) {
+            h[i] = x[i + 1] - x[i];
+        }
+
+        int cells = n - 1;
+        eps = new double[cells];
+        px = new double[cells];
+        ec = new double[cells];
+        ev = new double[cells];
+        nc = new double[cells];
+        nv = new double[cells];
+        massZ = new double[cells];
+        massXY = new double[cells];
+        layerOfCell = new int[cells];
+        double t = s.temperatureK();
+        WurtziteMaterial gan = s.parameters().binary(Binary.GAN);
+        double ganGap = gan.bandGap().atTemperature(t);
+        double ganEc = gan.valenceBandEdgeEv() + ganGap;
+        for (int k = 0; k < cells; k++) {
+            double mid = 0.5 * (x[k] + x[k + 1]);
+            int li = s.layerIndexAt(mid);
+            layerOfCell[k] = li;
+            PointState p = s.pointAt(mid);
+            WurtziteMaterial m = p.material();
+            eps[k] = m.permittivityStatic() * Constants.VACUUM_PERMITTIVITY;
+            px[k] = -p.alongGrowth();
+            double gap = m.bandGap().atTemperature(t);
+            double evk;
+            double eck;
+            if (o.bandAlignment() instanceof BandAlignment.ConductionBandFraction f) {
+                eck = ganEc + f.fraction() * (gap - ganGap);
+                evk = eck - gap;
+            } else {
+                evk = m.valenceBandEdgeEv();
+                eck = evk + gap;
+            }
+            if (o.strainShiftsBandEdges()) {
+                eck += p.bandShift().conductionEv();
+                evk += p.bandShift().valenceEv();
+            }
+            ec[k] = eck;
+            ev[k] = evk;
+            EffectiveMasses em = m.masses();
+            nc[k] = effectiveDensityOfStates(em.electronDensityOfStates(), t);
+            nv[k] = effectiveDensityOfStates(em.heavyHoleDensityOfStates(), t);
+            massZ[k] = em.electronParallel();
+            massXY[k] = em.electronPerpendicular();
+        }
+
+        sameCellsAround = new boolean[n];
+        for (int i = 1; i < n - 1; i++) {
+            int a = i - 1;
+            sameCellsAround[i] = ec[a] == ec[i] && ev[a] == ev[i] && nc[a] == nc[i] && nv[a] == nv[i]
+                    && layerOfCell[a] == layerOfCell[i];
+        }
+
+        List<LayerState> states = s.layerStates();
+        int nl = states.size();
+        speciesDensity = new double[nl][];
+        speciesEnergy = new double[nl][];
+        speciesDegeneracy = new double[nl][];
+        speciesKind = new int[nl][];
+        for (int li = 0; li < nl; li++) {
+            Layer l = states.get(li).layer();
+            int ns = l.dopants().size() + l.deepLevels().size();
+            speciesDensity[li] = new double[ns];
+            speciesEnergy[li] = new double[ns];
+            speciesDegeneracy[li] = new double[ns];
+            speciesKind[li] = new int[ns];
+            int j = 0;
+            for (Dopant d : l.dopants()) {
+                speciesDensity[li][j] = d.densityPerM3();
+                speciesEnergy[li][j] = d.ionizationEnergyEv();
+                speciesDegeneracy[li][j] = d.degeneracy();
+                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR ? 0 : 1;
+                j++;
+            }
+            for (DeepLevel d : l.deepLevels()) {
+                speciesDensity[li][j] = d.densityPerM3();
+                speciesEnergy[li][j] = d.energyBelowConductionEv();
+                speciesDegeneracy[li][j] = 1;
+                speciesKind[li][j] = d.kind() == DeepLevel.Kind.DONOR_LIKE ? 2 : 3;
+                j++;
+            }
+        }
+
+        deltaDensity = new double[n];
+        deltaEnergy = new double[n];
+        deltaIsDonor = new boolean[n];
+        for (LayerState st : states) {
+            for (DeltaDoping dd : st.layer().deltaSheets()) {
+                int node = mesh.nearestNode(st.depthTop() + dd.offsetFromLayerTop());
+                if (deltaDensity[node] > 0 && deltaIsDonor[node] != (dd.kind() == Dopant.Kind.DONOR)) {
+                    throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE,
+                            "a donor and an acceptor delta sheet sit at the same depth " + x[node] + " m");
+                }
+                deltaDensity[node] += dd.sheetDensityPerM2();
+                deltaEnergy[node] = dd.ionizationEnergyEv();
+                deltaIsDonor[node] = dd.kind() == Dopant.Kind.DONOR;
+            }
+        }
+
+        TopBoundary top = s.top();
+        double gateFermi = 0;
+        if (top instanceof TopBoundary.Schottky sch) {
+            topDirichlet = true;
+            // E_c(0) = phi_B - qV: ec[0] - phi_0 = phi_B - V
+            phiTop = ec[0] - (sch.barrierHeightEv() - sch.biasV());
+            surfaceDonorDensity = 0;
+            surfaceDonorEnergy = 0;
+            gateFermi = -sch.biasV();
+        } else {
+            TopBoundary.FreeSurface fs = (TopBoundary.FreeSurface) top;
+            topDirichlet = false;
+            phiTop = Double.NaN;
+            surfaceDonorDensity = fs.donorDensityPerM2();
+            surfaceDonorEnergy = fs.donorEnergyBelowEcEv();
+        }
+        holeFermiEv = o.holeFermiLevel() == HoleFermiLevel.GATE ? gateFermi : 0;
+        BottomBoundary bottom = s.bottom();
+        if (bottom instanceof BottomBoundary.FixedFermiLevel f) {
+            bottomDirichlet = true;
+            phiBottom = ec[n - 2] - f.conductionAboveFermiEv();
+        } else {
+            bottomDirichlet = false;
+            phiBottom = Double.NaN;
+        }
+
+        windowStart = new int[windows.size()];
+        windowEnd = new int[windows.size()];
+        quantumNode = new boolean[n];
+        for (int w = 0; w < windows.size(); w++) {
+            windowStart[w] = mesh.nearestNode(windows.get(w)[0]);
+            windowEnd[w] = mesh.nearestNode(windows.get(w)[1]);
+            if (windowEnd[w] - windowStart[w] < 4) {
+                throw new InvalidParameterException("quantum window " + w + " node count",
+                        Integer.toString(windowEnd[w] - windowStart[w] + 1), "[5, ...) (window too thin for the mesh)");
+            }
+            for (int i = windowStart[w] + 1; i < windowEnd[w]; i++) {
+                quantumNode[i] = true;
+            }
+        }
+    }
+
+    /** Nc = 2 (2 pi m kT / h^2)^{3/2} (Sze &amp; Ng, Physics of Semiconductor Devices, 3rd ed. 2007, ch. 1). */
+    static double effectiveDensityOfStates(double massRatio, double temperatureK) {
+        double m = massRatio * Constants.ELECTRON_MASS;
+        double a = 2 * Math.PI * m * Constants.BOLTZMANN * temperatureK / (Constants.PLANCK * Constants.PLANCK);
+        return 2 * a * Math.sqrt(a);
+    }
+
+    private static double[] mergeClose(TreeSet<Double> breaks, double tol) {
+        double[] tmp = new double[breaks.size()];
+        int k = 0;
+        for (double b : breaks) {
+            if (k == 0 || b - tmp[k - 1] > tol) {
+                tmp[k++] = b;
+            }
+        }
+        // keep the exact total thickness as the last point
+        tmp[k - 1] = breaks.last();
+        return java.util.Arrays.copyOf(tmp, k);
+    }
+
+    private static List<double[]> resolveWindows(Structure s, QuantumRegion region) {
+        List<double[]> out = new ArrayList<>();
+        double total = s.totalThickness();
+        if (region instanceof QuantumRegion.None) {
+            return out;
+        }
+        if (region instanceof QuantumRegion.Automatic a) {
+            double[] itf = s.interfaceDepths();
+            if (itf.length == 0) {
+                return out;
+            }
+            out.add(new double[] {0, Math.min(total, itf[itf.length - 1] + a.extensionBelowDeepestInterface())});
+            return out;
+        }
+        for (QuantumRegion.Window w : ((QuantumRegion.Windows) region).windows()) {
+            if (w.depthBottom() > total) {
+                throw new InvalidParameterException("quantum window bottom depth (m)", Double.toString(w.depthBottom()),
+                        "[" + (w.depthTop() + 1e-9) + ", " + total + "] (inside the stack, whose thickness is " + total
+                                + " m)");
+            }
+            out.add(new double[] {w.depthTop(), w.depthBottom()});
+        }
+        return out;
+    }
+
+    /** Box-weighted conduction-band edge at node i for phi = 0 (eV). */
+    double nodeEc(int i) {
+        if (i == 0) {
+            return ec[0];
+        }
+        if (i == n - 1) {
+            return ec[n - 2];
+        }
+        return (h[i - 1] * ec[i - 1] + h[i] * ec[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box-weighted in-plane mass at node i. */
+    double nodeMassXY(int i) {
+        if (i == 0) {
+            return massXY[0];
+        }
+        if (i == n - 1) {
+            return massXY[n - 2];
+        }
+        return (h[i - 1] * massXY[i - 1] + h[i] * massXY[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box width of node i (m). */
+    double box(int i) {
+        double w = 0;
+        if (i > 0) {
+            w += 0.5 * h[i - 1];
+        }
+        if (i < n - 1) {
+            w += 0.5 * h[i];
+        }
+        return w;
+    }
+}

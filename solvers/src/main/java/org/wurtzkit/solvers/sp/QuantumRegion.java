@@ -1,0 +1,100 @@
+package org.wurtzkit.solvers.sp;
+
+import java.util.List;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Units;
+
+/**
+ * Where electrons are treated quantum mechanically. Inside a window the electron density is the sum
+ * over the subbands of the effective-mass Schroedinger equation (wavefunction zero at the window's
+ * two ends); outside it, and for holes everywhere, densities are classical (Fermi-Dirac, 3D).
+ */
+public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRegion.None, QuantumRegion.Windows {
+
+    /**
+     * The default: one window from the surface to a given distance below the deepest interface of
+     * the stack (where a channel well can form), clipped to the stack; no window for a stack without
+     * interfaces.
+     *
+     * @param extensionBelowDeepestInterface how far the window reaches below the deepest interface (m), in [1 nm, 1 um]
+     */
+    record Automatic(double extensionBelowDeepestInterface) implements QuantumRegion {
+        /** Validates. */
+        public Automatic {
+            Require.inRange("quantum window extension below the deepest interface (m)", extensionBelowDeepestInterface,
+                    1e-9, 1e-6);
+        }
+    }
+
+    /** Fully classical electrons (no Schroedinger equation). */
+    record None() implements QuantumRegion {
+    }
+
+    /**
+     * Explicit windows, each given by its top and bottom depth; they must not overlap.
+     *
+     * @param windows the windows, shallowest first
+     */
+    record Windows(List<Window> windows) implements QuantumRegion {
+        /** Validates order and overlap. */
+        public Windows {
+            windows = List.copyOf(windows);
+            if (windows.isEmpty()) {
+                throw new InvalidParameterException("number of quantum windows", "0", "[1, ...) (use QuantumRegion.none())");
+            }
+            for (int i = 1; i < windows.size(); i++) {
+                if (windows.get(i).depthTop() < windows.get(i - 1).depthBottom()) {
+                    throw new InvalidParameterException("top of quantum window " + i + " (m)",
+                            Double.toString(windows.get(i).depthTop()),
+                            "[" + windows.get(i - 1).depthBottom() + ", ...) (below the previous window, no overlap)");
+                }
+            }
+        }
+    }
+
+    /**
+     * One window.
+     *
+     * @param depthTop    depth of its top (m), &ge; 0
+     * @param depthBottom depth of its bottom (m), &gt; depthTop by at least 1 nm
+     */
+    record Window(double depthTop, double depthBottom) {
+        /** Validates. */
+        public Window {
+            Require.nonNegative("quantum window top depth (m)", depthTop);
+            Require.finite("quantum window bottom depth (m)", depthBottom);
+            if (!(depthBottom >= depthTop + 1e-9)) {
+                throw new InvalidParameterException("quantum window bottom depth (m)", Double.toString(depthBottom),
+                        "[" + (depthTop + 1e-9) + ", ...) (at least 1 nm below its top)");
+            }
+        }
+
+        /**
+         * @param topNm    top depth (nm)
+         * @param bottomNm bottom depth (nm)
+         * @return the window
+         */
+        public static Window nm(double topNm, double bottomNm) {
+            return new Window(topNm * Units.NM, bottomNm * Units.NM);
+        }
+    }
+
+    /** @return the default automatic region reaching 40 nm below the deepest interface */
+    static QuantumRegion automatic() {
+        return new Automatic(40 * Units.NM);
+    }
+
+    /** @return no quantum region */
+    static QuantumRegion none() {
+        return new None();
+    }
+
+    /**
+     * @param windows explicit windows
+     * @return the region
+     */
+    static QuantumRegion windows(Window... windows) {
+        return new Windows(List.of(windows));
+    }
+}

@@ -1,0 +1,89 @@
+package org.wurtzkit.solvers.sp;
+
+import org.wurtzkit.solvers.schrodinger.BoundStates;
+import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
+import org.wurtzkit.units.Constants;
+
+/**
+ * The subbands of every quantum window for one potential, with the per-state two-dimensional
+ * density-of-states factor g_k = m_xy,k m0 kT / (pi hbar^2) (spin included, one valley; T. Ando,
+ * A. B. Fowler and F. Stern, Rev. Mod. Phys. 54, 437 (1982)), so that the sheet density of subband k
+ * is g_k ln(1 + exp((E_F - E_k)/kT)). Mutable scratch owned by one solve.
+ */
+final class QuantumStates {
+    final int windows;
+    final int[] count;
+    final double[][] energy; // [window][state] eV
+    final double[][][] psi; // [window][state][local node] 1/sqrt(m)
+    final double[][] dos; // [window][state] m^-2
+    final double[][] massXY;
+    private final EffectiveMassHamiltonian[] hamiltonians;
+    private final double[][] potential; // [window][local node]
+
+    QuantumStates(Device d) {
+        windows = d.windowStart.length;
+        count = new int[windows];
+        energy = new double[windows][];
+        psi = new double[windows][][];
+        dos = new double[windows][];
+        massXY = new double[windows][];
+        hamiltonians = new EffectiveMassHamiltonian[windows];
+        potential = new double[windows][];
+        for (int w = 0; w < windows; w++) {
+            int a = d.windowStart[w];
+            int b = d.windowEnd[w];
+            double[] z = new double[b - a + 1];
+            double[] m = new double[b - a];
+            for (int i = a; i <= b; i++) {
+                z[i - a] = d.x[i];
+                if (i < b) {
+                    m[i - a] = d.massZ[i];
+                }
+            }
+            hamiltonians[w] = EffectiveMassHamiltonian.of(z, m);
+            potential[w] = new double[b - a + 1];
+            int kMax = Math.min(d.options.maxSubbands(), hamiltonians[w].maxStates());
+            energy[w] = new double[kMax];
+            psi[w] = new double[kMax][];
+            dos[w] = new double[kMax];
+            massXY[w] = new double[kMax];
+        }
+    }
+
+    /** Solves every window for the potential phi (V). */
+    void update(Device d, double[] phi) {
+        double bound = d.options.subbandCutoffKT() * d.vt;
+        double dosUnit = Constants.ELECTRON_MASS * d.kT / (Math.PI * Constants.HBAR * Constants.HBAR);
+        for (int w = 0; w < windows; w++) {
+            int a = d.windowStart[w];
+            double[] v = potential[w];
+            for (int j = 0; j < v.length; j++) {
+                v[j] = d.nodeEc(a + j) - phi[a + j];
+            }
+            int kMax = energy[w].length;
+            BoundStates bs = hamiltonians[w].below(v, bound, kMax);
+            count[w] = bs.size();
+            for (int k = 0; k < bs.size(); k++) {
+                energy[w][k] = bs.energy(k);
+                psi[w][k] = bs.wavefunction(k);
+                double mxy = 0;
+                for (int j = 0; j < v.length; j++) {
+                    double p = psi[w][k][j];
+                    mxy += p * p * d.box(a + j) * d.nodeMassXY(a + j);
+                }
+                // normalised on the window's box widths; the end boxes are half-boxes but psi = 0 there
+                massXY[w][k] = mxy;
+                dos[w][k] = mxy * dosUnit;
+            }
+        }
+    }
+
+    /** @return total number of subbands over all windows */
+    int total() {
+        int t = 0;
+        for (int c : count) {
+            t += c;
+        }
+        return t;
+    }
+}

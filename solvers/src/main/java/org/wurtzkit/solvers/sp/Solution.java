@@ -1,0 +1,309 @@
+package org.wurtzkit.solvers.sp;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import org.wurtzkit.solvers.statistics.FermiDirac;
+import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Units;
+
+/**
+ * A converged band diagram. Immutable: every array accessor returns a copy. No field holds NaN.
+ *
+ * <p>Node arrays have one value per mesh node at depth {@link #depth()} (m, 0 at the surface).
+ * Energies are in eV with the bottom contact's Fermi level at 0. At an interface node the band
+ * edges reported by {@link #conductionBand()} and {@link #valenceBand()} are those of the layer
+ * below the node; {@link #bandDiagram()} gives both sides of every step for plotting. Cell arrays
+ * ({@link #electricField()}) have one value per interval between nodes, at {@link #cellMidpoints()}.
+ */
+public final class Solution {
+    private final Structure structure;
+    private final double[] depth;
+    private final double[] potential;
+    private final double[] ec;
+    private final double[] ev;
+    private final double[] n;
+    private final double[] p;
+    private final double[] donors;
+    private final double[] acceptors;
+    private final double[] charge;
+    private final double[] midpoints;
+    private final double[] field;
+    private final double[] plotDepth;
+    private final double[] plotEc;
+    private final double[] plotEv;
+    private final List<Subband> subbands;
+    private final double[] wellSheetDensity;
+    private final double[][] windows;
+    private final double electronSheet;
+    private final double holeSheet;
+    private final double gateCharge;
+    private final double neutralityResidual;
+    private final double holeFermiEv;
+    private final ConvergenceRecord record;
+
+    Solution(Device d, double[] phi, QuantumStates qs, ChargeModel charges, ConvergenceRecord record) {
+        int nn = d.n;
+        this.structure = d.structure;
+        this.record = record;
+        this.holeFermiEv = d.holeFermiEv;
+        depth = d.x.clone();
+        potential = phi.clone();
+        ec = new double[nn];
+        ev = new double[nn];
+        for (int i = 0; i < nn; i++) {
+            int k = i < nn - 1 ? i : nn - 2;
+            ec[i] = d.ec[k] - phi[i];
+            ev[i] = d.ev[k] - phi[i];
+        }
+        n = new double[nn];
+        p = new double[nn];
+        donors = new double[nn];
+        acceptors = new double[nn];
+        charges.densities(phi, qs, n, p, donors, acceptors);
+        double[] q = new double[nn];
+        double[] dq = new double[nn];
+        charges.evaluate(phi, phi, qs, q, dq);
+        charge = new double[nn];
+        double eSheet = 0;
+        double hSheet = 0;
+        double sumQ = 0;
+        double scale = 0;
+        for (int i = 0; i < nn; i++) {
+            double w = d.box(i);
+            charge[i] = q[i] / w;
+            eSheet += n[i] * w;
+            hSheet += p[i] * w;
+            sumQ += q[i];
+            scale += Math.abs(q[i]);
+        }
+        electronSheet = eSheet;
+        holeSheet = hSheet;
+        midpoints = new double[nn - 1];
+        field = new double[nn - 1];
+        for (int k = 0; k < nn - 1; k++) {
+            midpoints[k] = 0.5 * (d.x[k] + d.x[k + 1]);
+            field[k] = -(phi[k + 1] - phi[k]) / d.h[k];
+        }
+        // D just below the surface box, D = eps E + P along +x
+        double dTop = d.eps[0] * field[0] + d.px[0];
+        // metal sheet charge: D_{1/2} - Q_0 (zero for a free surface, up to the Newton residual)
+        gateCharge = d.topDirichlet ? dTop - q[0] : 0;
+        double dBottom = d.bottomDirichlet ? d.eps[nn - 2] * field[nn - 2] + d.px[nn - 2] + q[nn - 1] : d.px[nn - 2];
+        double bound = 0;
+        for (int i = 0; i < nn; i++) {
+            double below = i < nn - 1 ? d.px[i] : d.px[nn - 2];
+            double above = i > 0 ? d.px[i - 1] : 0;
+            bound += above - below;
+        }
+        scale += Math.abs(gateCharge) + Math.abs(d.px[0]) + Math.abs(d.px[nn - 2]);
+        for (int k = 1; k < nn - 1; k++) {
+            scale += Math.abs(d.px[k] - d.px[k - 1]);
+        }
+        // free + bound + contact charge must vanish; what the bottom carries is D_bottom - P_bottom
+        double contactBottom = dBottom - d.px[nn - 2];
+        neutralityResidual = Math.abs(gateCharge + sumQ + bound - contactBottom) / scale;
+
+        // plotting polyline with both sides of every band step
+        List<double[]> pts = new ArrayList<>();
+        for (int i = 0; i < nn; i++) {
+            if (i > 0 && i < nn - 1 && d.ec[i - 1] != d.ec[i]) {
+                pts.add(new double[] {d.x[i], d.ec[i - 1] - phi[i], d.ev[i - 1] - phi[i]});
+            }
+            pts.add(new double[] {d.x[i], ec[i], ev[i]});
+        }
+        plotDepth = new double[pts.size()];
+        plotEc = new double[pts.size()];
+        plotEv = new double[pts.size()];
+        for (int j = 0; j < pts.size(); j++) {
+            plotDepth[j] = pts.get(j)[0];
+            plotEc[j] = pts.get(j)[1];
+            plotEv[j] = pts.get(j)[2];
+        }
+
+        List<Subband> bands = new ArrayList<>();
+        int nw = qs == null ? 0 : qs.windows;
+        wellSheetDensity = new double[nw];
+        windows = new double[nw][];
+        for (int w = 0; w < nw; w++) {
+            int a = d.windowStart[w];
+            windows[w] = new double[] {d.x[a], d.x[d.windowEnd[w]]};
+            for (int k = 0; k < qs.count[w]; k++) {
+                double[] full = new double[nn];
+                System.arraycopy(qs.psi[w][k], 0, full, a, qs.psi[w][k].length);
+                double occ = qs.dos[w][k] * FermiDirac.log1pExp(-qs.energy[w][k] / d.vt);
+                wellSheetDensity[w] += occ;
+                bands.add(new Subband(w, k, qs.energy[w][k], full, occ, qs.massXY[w][k]));
+            }
+        }
+        subbands = Collections.unmodifiableList(bands);
+        checkFinite();
+    }
+
+    private void checkFinite() {
+        for (double[] a : new double[][] {potential, ec, ev, n, p, donors, acceptors, charge, field}) {
+            for (double v : a) {
+                if (!Double.isFinite(v)) {
+                    throw new IllegalStateException("non-finite value in a solution; please report this structure: "
+                            + structure);
+                }
+            }
+        }
+    }
+
+    /** @return the structure that was solved */
+    public Structure structure() {
+        return structure;
+    }
+
+    /** @return node depths (m) */
+    public double[] depth() {
+        return depth.clone();
+    }
+
+    /** @return node depths (nm) */
+    public double[] depthNm() {
+        double[] out = new double[depth.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = Units.mToNm(depth[i]);
+        }
+        return out;
+    }
+
+    /** @return number of mesh nodes */
+    public int nodeCount() {
+        return depth.length;
+    }
+
+    /** @return electrostatic potential (V) */
+    public double[] potential() {
+        return potential.clone();
+    }
+
+    /** @return conduction-band edge E_c - E_F (eV), of the layer below at interface nodes */
+    public double[] conductionBand() {
+        return ec.clone();
+    }
+
+    /** @return valence-band edge E_v - E_F (eV), of the layer below at interface nodes */
+    public double[] valenceBand() {
+        return ev.clone();
+    }
+
+    /** @return the electron Fermi level (eV): 0 by construction */
+    public double fermiLevelEv() {
+        return 0;
+    }
+
+    /** @return the holes' quasi-Fermi level (eV) */
+    public double holeFermiLevelEv() {
+        return holeFermiEv;
+    }
+
+    /** @return band diagram for plotting: rows depth (m), E_c (eV), E_v (eV), both sides of every step */
+    public double[][] bandDiagram() {
+        return new double[][] {plotDepth.clone(), plotEc.clone(), plotEv.clone()};
+    }
+
+    /** @return electron density (m^-3), box-averaged; subband electrons inside windows */
+    public double[] electronDensity() {
+        return n.clone();
+    }
+
+    /** @return hole density (m^-3), box-averaged */
+    public double[] holeDensity() {
+        return p.clone();
+    }
+
+    /** @return ionised donors and empty donor-like traps (m^-3), box-averaged */
+    public double[] ionizedDonors() {
+        return donors.clone();
+    }
+
+    /** @return ionised acceptors and filled acceptor-like traps (m^-3), box-averaged */
+    public double[] ionizedAcceptors() {
+        return acceptors.clone();
+    }
+
+    /**
+     * @return free charge density (C/m^3), box-averaged, including delta sheets and surface states
+     *         spread over their node's box
+     */
+    public double[] chargeDensity() {
+        return charge.clone();
+    }
+
+    /** @return midpoints of the mesh cells (m) */
+    public double[] cellMidpoints() {
+        return midpoints.clone();
+    }
+
+    /** @return electric field along the depth direction in each cell (V/m) */
+    public double[] electricField() {
+        return field.clone();
+    }
+
+    /** @return every subband of every window, windows in order, energies ascending within a window */
+    public List<Subband> subbands() {
+        return subbands;
+    }
+
+    /** @return the quantum windows [top, bottom] depth (m) */
+    public double[][] quantumWindows() {
+        double[][] c = new double[windows.length][];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = windows[i].clone();
+        }
+        return c;
+    }
+
+    /** @return electron sheet density held in the subbands of each window (m^-2) */
+    public double[] wellSheetDensities() {
+        return wellSheetDensity.clone();
+    }
+
+    /** @return all electrons of the stack, the integral of n over depth (m^-2) */
+    public double electronSheetDensity() {
+        return electronSheet;
+    }
+
+    /** @return all holes of the stack (m^-2) */
+    public double holeSheetDensity() {
+        return holeSheet;
+    }
+
+    /**
+     * The 2DEG sheet density: the subband electrons of all windows, or, for a solve without quantum
+     * windows, all electrons of the stack.
+     *
+     * @return sheet density (cm^-2)
+     */
+    public double sheetDensityPerCm2() {
+        if (wellSheetDensity.length == 0) {
+            return Units.perM2ToPerCm2(electronSheet);
+        }
+        double s = 0;
+        for (double v : wellSheetDensity) {
+            s += v;
+        }
+        return Units.perM2ToPerCm2(s);
+    }
+
+    /** @return sheet charge on the gate metal (C/m^2); 0 for a free surface */
+    public double gateCharge() {
+        return gateCharge;
+    }
+
+    /**
+     * @return |free + bound + contact charge| divided by the sum of their magnitudes; of the order of
+     *         the Newton residual for a converged solve
+     */
+    public double chargeNeutralityResidual() {
+        return neutralityResidual;
+    }
+
+    /** @return how the solve converged */
+    public ConvergenceRecord convergence() {
+        return record;
+    }
+}

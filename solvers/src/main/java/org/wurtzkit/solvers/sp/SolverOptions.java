@@ -1,0 +1,117 @@
+package org.wurtzkit.solvers.sp;
+
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.solvers.mesh.MeshPolicy;
+
+/**
+ * Settings of a self-consistent solve, with documented defaults ({@link #defaults()}); change one
+ * with a {@code with...} method, which returns a copy.
+ *
+ * @param tolerance             convergence of the outer loop, max |delta phi| between iterations (V); default 1e-6, in [1e-12, 1e-2]
+ * @param maxIterations         outer iterations allowed; default 100, in [1, 10000]
+ * @param newtonTolerance       convergence of each Newton-Poisson solve, max |delta phi| (V); default 1e-9, in [1e-14, 1e-3]
+ * @param maxNewtonIterations   Newton steps allowed per Poisson solve; default 200, in [1, 100000]
+ * @param maxNewtonStep         largest change of the potential at any node in one Newton step (V); default 0.5, in [1e-3, 10]
+ * @param mesh                  mesh policy; default {@link MeshPolicy#DEFAULT}
+ * @param quantumRegion         where electrons are quantum; default {@link QuantumRegion#automatic()}
+ * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
+ * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
+ * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
+ * @param bandAlignment         band line-up; default {@link BandAlignment#valenceBandTable()}
+ * @param strainShiftsBandEdges whether deformation potentials shift the band edges; default false,
+ *                              because the deformation potentials of the built-in sets are
+ *                              recalled values whose sign convention was not verified
+ */
+public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
+        double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
+        HoleFermiLevel holeFermiLevel, BandAlignment bandAlignment, boolean strainShiftsBandEdges) {
+
+    private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
+            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE, BandAlignment.valenceBandTable(), false);
+
+    /** Validates every field. */
+    public SolverOptions {
+        Require.inRange("tolerance (V)", tolerance, 1e-12, 1e-2);
+        Require.inRange("maxIterations", maxIterations, 1, 10000);
+        Require.inRange("newtonTolerance (V)", newtonTolerance, 1e-14, 1e-3);
+        Require.inRange("maxNewtonIterations", maxNewtonIterations, 1, 100000);
+        Require.inRange("maxNewtonStep (V)", maxNewtonStep, 1e-3, 10);
+        Require.nonNull("mesh policy", mesh);
+        Require.nonNull("quantum region", quantumRegion);
+        Require.inRange("maxSubbands", maxSubbands, 1, 2000);
+        Require.inRange("subbandCutoffKT", subbandCutoffKT, 1, 200);
+        Require.nonNull("hole Fermi level", holeFermiLevel);
+        Require.nonNull("band alignment", bandAlignment);
+    }
+
+    /** @return the defaults listed in the class documentation */
+    public static SolverOptions defaults() {
+        return DEFAULTS;
+    }
+
+    /** @param v tolerance (V) @return a copy */
+    public SolverOptions withTolerance(double v) {
+        return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v outer iteration budget @return a copy */
+    public SolverOptions withMaxIterations(int v) {
+        return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v Newton step budget per Poisson solve @return a copy */
+    public SolverOptions withMaxNewtonIterations(int v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v largest Newton update (V) @return a copy */
+    public SolverOptions withMaxNewtonStep(double v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v mesh policy @return a copy */
+    public SolverOptions withMesh(MeshPolicy v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v quantum region @return a copy */
+    public SolverOptions withQuantumRegion(QuantumRegion v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v most subbands per window @return a copy */
+    public SolverOptions withMaxSubbands(int v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, v, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v subband cut-off above E_F in kT @return a copy */
+    public SolverOptions withSubbandCutoffKT(double v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, maxSubbands, v, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v holes' quasi-Fermi level @return a copy */
+    public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, maxSubbands, subbandCutoffKT, v, bandAlignment, strainShiftsBandEdges);
+    }
+
+    /** @param v band alignment @return a copy */
+    public SolverOptions withBandAlignment(BandAlignment v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, v, strainShiftsBandEdges);
+    }
+
+    /** @param v whether strain shifts the band edges @return a copy */
+    public SolverOptions withStrainShiftsBandEdges(boolean v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, v);
+    }
+}
