@@ -56,6 +56,12 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     private static final int MAX_INVERSE_ITERATIONS = 12;
     /** Iterations done after the residual test first passes (dstein does two [from memory]). */
     private static final int EXTRA_ITERATIONS = 1;
+    /** Relative bracket width at which a well-separated eigenvalue leaves bisection. */
+    private static final double COARSE_RELATIVE_TOLERANCE = 1e-9;
+    /** Below this order full bisection is cheap enough to use always. */
+    private static final int COARSE_MIN_SIZE = 32;
+    /** A coarse bracket counts as separated when its neighbours are this many coarse widths away. */
+    private static final double COARSE_SEPARATION = 1e3;
     private static final long SEED = 0x2545F4914F6CDD1DL;
 
     private int capacity = -1;
@@ -64,6 +70,8 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     private double[] e2;
     private double[] lower;
     private double[] upper;
+    /** Per eigenvalue: bisected only to the coarse tolerance, to be finished by a Rayleigh quotient. */
+    private boolean[] coarse;
     private double[] scaledValues;
     private double[] fa;
     private double[] fb;
@@ -193,7 +201,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         Checks.intInRange("k", k, 1, n);
         validateOutputs(valuesOut, vectorsOut, k, n);
         prepare(diag, off, n);
-        bisect(n, k, gu);
+        bisect(n, k, gu, vectorsOut != null);
         finish(n, k, valuesOut, vectorsOut);
         return k;
     }
@@ -229,7 +237,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         if (m == 0) {
             return 0;
         }
-        bisect(n, m, hi);
+        bisect(n, m, hi, vectorsOut != null);
         finish(n, m, valuesOut, vectorsOut);
         return m;
     }
@@ -344,6 +352,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         e2 = new double[n];
         lower = new double[n];
         upper = new double[n];
+        coarse = new boolean[n];
         scaledValues = new double[n];
         fa = new double[n];
         fb = new double[n];
@@ -424,24 +433,64 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * the k independent recurrences interleave instead of running one after another. Every
      * count narrows the brackets of all wanted eigenvalues.
      */
-    private void bisect(int n, int m, double hiInit) {
+    /**
+     * Bisection on Sturm counts for the m lowest eigenvalues. When eigenvectors follow, an eigenvalue
+     * whose bracket is well separated from its neighbours is bisected only to
+     * {@link #COARSE_RELATIVE_TOLERANCE} of the norm and finished by the Rayleigh quotient of its
+     * inverse-iteration vector, whose error is of the order of the squared residual over the gap
+     * (B. N. Parlett, The Symmetric Eigenvalue Problem, SIAM 1998, sec. 4.6; from memory). Clustered
+     * eigenvalues are bisected to full precision.
+     */
+    private void bisect(int n, int m, double hiInit, boolean vectorsFollow) {
         if (n == 1) {
             scaledValues[0] = d[0]; // exact
+            coarse[0] = false;
             return;
         }
         for (int t = 0; t < m; t++) {
             lower[t] = gl;
             upper[t] = hiInit;
+            coarse[t] = vectorsFollow && n >= COARSE_MIN_SIZE;
         }
         double absTol = EPS * tnorm;
+        if (vectorsFollow && n >= COARSE_MIN_SIZE) {
+            double coarseTol = COARSE_RELATIVE_TOLERANCE * tnorm;
+            bisectPass(n, m, coarseTol);
+            double guard = COARSE_SEPARATION * coarseTol;
+            for (int t = 0; t < m; t++) {
+                boolean isolatedBelow = t == 0 || lower[t] - upper[t - 1] > guard; // nothing lies below the lowest
+                boolean isolatedAbove = t == m - 1 ? true : lower[t + 1] - upper[t] > guard;
+                if (t == m - 1 && m < n) {
+                    // the next eigenvalue (not wanted) may sit just above: check its Sturm count
+                    isolatedAbove = sturmCount(n, upper[t] + guard) == t + 1;
+                }
+                coarse[t] = isolatedBelow && isolatedAbove;
+            }
+        }
+        bisectPass(n, m, absTol);
+        for (int j = 0; j < m; j++) {
+            double value = 0.5 * (lower[j] + upper[j]);
+            if (j > 0 && value < scaledValues[j - 1]) {
+                value = scaledValues[j - 1]; // keep the order inside the bisection tolerance
+            }
+            scaledValues[j] = value;
+        }
+    }
+
+    /** Bisects every bracket not marked coarse (all of them while tol is coarse) down to tol. */
+    private void bisectPass(int n, int m, double tol) {
         double[] points = fa; // reuse factorisation arrays as scratch: not needed until later
         double[] pivots = fb;
         int[] counts = countWork;
+        boolean full = tol <= EPS * tnorm;
         while (true) {
             int np = 0;
             double lastLo = Double.NaN;
             double lastHi = Double.NaN;
             for (int t = 0; t < m; t++) {
+                if (full && coarse[t]) {
+                    continue; // finished by its Rayleigh quotient
+                }
                 double lo = lower[t];
                 double hi = upper[t];
                 if (lo == lastLo && hi == lastHi) {
@@ -450,7 +499,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
                 lastLo = lo;
                 lastHi = hi;
                 double mid = 0.5 * (lo + hi);
-                if (hi - lo <= absTol + 2.0 * EPS * Math.max(Math.abs(lo), Math.abs(hi))
+                if (hi - lo <= tol + 2.0 * EPS * Math.max(Math.abs(lo), Math.abs(hi))
                         || !(mid > lo && mid < hi)) {
                     continue; // converged
                 }
@@ -473,13 +522,6 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
                     }
                 }
             }
-        }
-        for (int j = 0; j < m; j++) {
-            double value = 0.5 * (lower[j] + upper[j]);
-            if (j > 0 && value < scaledValues[j - 1]) {
-                value = scaledValues[j - 1]; // keep the order inside the bisection tolerance
-            }
-            scaledValues[j] = value;
         }
     }
 
@@ -515,10 +557,10 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
 
     private void finish(int n, int m, double[] valuesOut, double[][] vectorsOut) {
         double inv = 1.0 / scale;
-        for (int j = 0; j < m; j++) {
-            valuesOut[j] = scaledValues[j] * inv;
-        }
         if (vectorsOut == null) {
+            for (int j = 0; j < m; j++) {
+                valuesOut[j] = scaledValues[j] * inv;
+            }
             return;
         }
         rng = SEED;
@@ -537,6 +579,9 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
             previousShift = shift;
             inverseIteration(n, j, clusterStart, shift, vectorsOut);
         }
+        for (int j = 0; j < m; j++) {
+            valuesOut[j] = scaledValues[j] * inv;
+        }
     }
 
     private void inverseIteration(int n, int j, int clusterStart, double shift, double[][] vectors) {
@@ -551,6 +596,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         randomUnit(x, n);
         double resTol = 16.0 * EPS * tnorm * Math.max(1.0, Math.sqrt(n));
         double best = Double.POSITIVE_INFINITY;
+        double bestLambda = lambda;
         double startScale = Math.max(EPS, lastPivotMagnitude) * tnorm;
         double extraScale = 1.0;
         int extra = 0;
@@ -583,9 +629,19 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
             for (int i = 0; i < n; i++) {
                 x[i] *= invNorm;
             }
+            if (coarse[j]) {
+                double rq = rayleighQuotient(n, x);
+                // inside the Sturm bracket (widened by round-off; neighbours are far beyond it), the
+                // bracket guarantees which eigenvalue the quotient belongs to
+                double slack = 4.0 * EPS * Math.max(Math.abs(lower[j]), Math.abs(upper[j])) + EPS * tnorm;
+                if (rq >= lower[j] - slack && rq <= upper[j] + slack) {
+                    lambda = rq;
+                }
+            }
             double res = residual(n, x, lambda);
             if (res < best) {
                 best = res;
+                bestLambda = lambda;
                 System.arraycopy(x, 0, v, 0, n);
             }
             if (res <= resTol) {
@@ -599,7 +655,24 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
                     + " = " + lambda / scale + ": relative residual " + best / tnorm
                     + " after " + MAX_INVERSE_ITERATIONS + " iterations");
         }
+        scaledValues[j] = bestLambda;
         fixSign(v, n);
+    }
+
+    /** x^T T x for a unit vector x (scaled matrix). */
+    private double rayleighQuotient(int n, double[] x) {
+        double sum = 0.0;
+        for (int i = 0; i < n; i++) {
+            double r = d[i] * x[i];
+            if (i > 0) {
+                r += e[i - 1] * x[i - 1];
+            }
+            if (i < n - 1) {
+                r += e[i] * x[i + 1];
+            }
+            sum += x[i] * r;
+        }
+        return sum;
     }
 
     /**
