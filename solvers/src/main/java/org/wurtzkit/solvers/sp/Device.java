@@ -276,11 +276,17 @@ final class Device {
             return out;
         }
         if (region instanceof QuantumRegion.Automatic a) {
-            double[] itf = s.interfaceDepths();
-            if (itf.length == 0) {
-                return out;
+            // one window around every interface, overlapping ones merged
+            double ext = a.extension();
+            for (double itf : s.interfaceDepths()) {
+                double top = Math.max(0, itf - ext);
+                double bottom = Math.min(total, itf + ext);
+                if (!out.isEmpty() && top <= out.get(out.size() - 1)[1] + 1e-9) {
+                    out.get(out.size() - 1)[1] = bottom;
+                } else {
+                    out.add(new double[] {top, bottom});
+                }
             }
-            out.add(new double[] {0, Math.min(total, itf[itf.length - 1] + a.extensionBelowDeepestInterface())});
             return out;
         }
         for (QuantumRegion.Window w : ((QuantumRegion.Windows) region).windows()) {

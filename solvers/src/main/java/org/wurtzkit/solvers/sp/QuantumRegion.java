@@ -13,17 +13,17 @@ import org.wurtzkit.units.Units;
 public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRegion.None, QuantumRegion.Windows {
 
     /**
-     * The default: one window from the surface to a given distance below the deepest interface of
-     * the stack (where a channel well can form), clipped to the stack; no window for a stack without
-     * interfaces.
+     * The default: a window reaching a given distance above and below every interface of the stack
+     * (where wells form), overlapping windows merged, clipped to the stack; no window for a stack
+     * without interfaces. For a HEMT barrier under 40 nm this is one window from the surface to 40 nm
+     * below the channel interface.
      *
-     * @param extensionBelowDeepestInterface how far the window reaches below the deepest interface (m), in [1 nm, 1 um]
+     * @param extension how far each window reaches on both sides of its interface (m), in [1 nm, 1 um]
      */
-    record Automatic(double extensionBelowDeepestInterface) implements QuantumRegion {
+    record Automatic(double extension) implements QuantumRegion {
         /** Validates. */
         public Automatic {
-            Require.inRange("quantum window extension below the deepest interface (m)", extensionBelowDeepestInterface,
-                    1e-9, 1e-6);
+            Require.inRange("quantum window extension around an interface (m)", extension, 1e-9, 1e-6);
         }
     }
 
@@ -80,7 +80,7 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
         }
     }
 
-    /** @return the default automatic region reaching 40 nm below the deepest interface */
+    /** @return the default automatic region: 40 nm on both sides of every interface */
     static QuantumRegion automatic() {
         return new Automatic(40 * Units.NM);
     }

@@ -17,6 +17,8 @@ final class QuantumStates {
     final double[][][] psi; // [window][state][local node] 1/sqrt(m)
     final double[][] dos; // [window][state] m^-2
     final double[][] massXY;
+    /** Whether some window had more subbands below the cut-off than it could keep. */
+    boolean limitReached;
     private final EffectiveMassHamiltonian[] hamiltonians;
     private final double[][] potential; // [window][local node]
 
@@ -54,6 +56,7 @@ final class QuantumStates {
     void update(Device d, double[] phi) {
         double bound = d.options.subbandCutoffKT() * d.vt;
         double dosUnit = Constants.ELECTRON_MASS * d.kT / (Math.PI * Constants.HBAR * Constants.HBAR);
+        limitReached = false;
         for (int w = 0; w < windows; w++) {
             int a = d.windowStart[w];
             double[] v = potential[w];
@@ -63,6 +66,9 @@ final class QuantumStates {
             int kMax = energy[w].length;
             BoundStates bs = hamiltonians[w].below(v, bound, kMax);
             count[w] = bs.size();
+            if (bs.size() == kMax && kMax < hamiltonians[w].maxStates()) {
+                limitReached |= bs.energy(kMax - 1) < bound;
+            }
             for (int k = 0; k < bs.size(); k++) {
                 energy[w][k] = bs.energy(k);
                 psi[w][k] = bs.wavefunction(k);

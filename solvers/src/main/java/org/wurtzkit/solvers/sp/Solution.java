@@ -40,6 +40,7 @@ public final class Solution {
     private final double gateCharge;
     private final double neutralityResidual;
     private final double holeFermiEv;
+    private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
 
     Solution(Device d, double[] phi, QuantumStates qs, ChargeModel charges, ConvergenceRecord record) {
@@ -47,6 +48,7 @@ public final class Solution {
         this.structure = d.structure;
         this.record = record;
         this.holeFermiEv = d.holeFermiEv;
+        this.subbandLimitReached = qs != null && qs.limitReached;
         depth = d.x.clone();
         potential = phi.clone();
         ec = new double[nn];
@@ -300,6 +302,15 @@ public final class Solution {
      */
     public double chargeNeutralityResidual() {
         return neutralityResidual;
+    }
+
+    /**
+     * @return true if a quantum window had more subbands below E_F + cut-off than
+     *         {@link SolverOptions#maxSubbands()} allows: the subband density is then too low; raise
+     *         the limit or narrow the window
+     */
+    public boolean subbandLimitReached() {
+        return subbandLimitReached;
     }
 
     /** @return how the solve converged */

@@ -192,6 +192,30 @@ class HemtPhysicsTest {
         assertTrue(e2.getMessage().contains("Newton-Poisson not converged in 2 steps"), e2.getMessage());
     }
 
+    /** A truncated subband set is reported, not hidden. */
+    @Test
+    void subbandLimitIsReported() {
+        assertTrue(!SOLVER.solve(hemt(0.25, 25, 0, GATE)).subbandLimitReached());
+        Solution few = new SelfConsistentSolver(SolverOptions.defaults().withMaxSubbands(2)).solve(hemt(0.25, 25, 0, GATE));
+        assertTrue(few.subbandLimitReached());
+        assertEquals(2, few.subbands().size());
+    }
+
+    /** Automatic windows: one per well region; a back barrier far below the channel gets its own. */
+    @Test
+    void automaticWindowsSurroundEveryInterface() {
+        Structure s = Structure.builder(SET)
+                .grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
+                .grow(Layer.of("back barrier", Composition.alGaN(0.05), 100 * NM))
+                .grow(Layer.of("channel", Composition.GAN, 150 * NM))
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 20 * NM))
+                .top(GATE).build();
+        double[][] w = SOLVER.solve(s).quantumWindows();
+        assertEquals(3, w.length, java.util.Arrays.deepToString(w));
+        assertEquals(0.0, w[0][0], 1e-12);
+        assertEquals(60 * NM, w[0][1], 0.5 * NM);
+    }
+
     @Test
     void quantumWindowOutsideTheStackIsRejected() {
         SelfConsistentSolver s = new SelfConsistentSolver(SolverOptions.defaults()
