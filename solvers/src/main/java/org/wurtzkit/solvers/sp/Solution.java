@@ -269,6 +269,31 @@ public final class Solution {
         return electronSheet;
     }
 
+    /**
+     * Electrons between two depths, e.g. only those in the channel layer: the integral of the
+     * box-averaged density over the boxes whose nodes lie in [fromDepth, toDepth], end boxes halved
+     * at the bounds.
+     *
+     * @param fromDepth upper depth (m), &ge; 0
+     * @param toDepth   lower depth (m), &ge; fromDepth
+     * @return sheet density (m^-2)
+     */
+    public double electronSheetDensityBetween(double fromDepth, double toDepth) {
+        org.wurtzkit.errors.Require.inRange("fromDepth (m)", fromDepth, 0, depth[depth.length - 1]);
+        org.wurtzkit.errors.Require.inRange("toDepth (m)", toDepth, fromDepth, depth[depth.length - 1]);
+        double sum = 0;
+        for (int k = 0; k + 1 < depth.length; k++) {
+            double a = Math.max(depth[k], fromDepth);
+            double b = Math.min(depth[k + 1], toDepth);
+            if (b > a) {
+                // each half of cell k belongs to the box of its nearer node
+                double mid = 0.5 * (depth[k] + depth[k + 1]);
+                sum += n[k] * Math.max(0, Math.min(b, mid) - a) + n[k + 1] * Math.max(0, b - Math.max(a, mid));
+            }
+        }
+        return sum;
+    }
+
     /** @return all holes of the stack (m^-2) */
     public double holeSheetDensity() {
         return holeSheet;

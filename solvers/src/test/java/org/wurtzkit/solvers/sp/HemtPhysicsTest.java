@@ -192,6 +192,17 @@ class HemtPhysicsTest {
         assertTrue(e2.getMessage().contains("Newton-Poisson not converged in 2 steps"), e2.getMessage());
     }
 
+    /** Electrons by region add up to all electrons; most of the 2DEG sits in the GaN channel. */
+    @Test
+    void electronsByRegion() {
+        Solution s = SOLVER.solve(hemt(0.25, 25, 0, GATE));
+        double total = s.electronSheetDensity();
+        double barrier = s.electronSheetDensityBetween(0, 25 * NM);
+        double channel = s.electronSheetDensityBetween(25 * NM, s.structure().totalThickness());
+        assertEquals(total, barrier + channel, 1e-9 * total);
+        assertTrue(channel > 0.8 * total, "channel " + channel + " of " + total);
+    }
+
     /** A truncated subband set is reported, not hidden. */
     @Test
     void subbandLimitIsReported() {

@@ -1,0 +1,225 @@
+package org.wurtzkit.solvers.workflow;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Units;
+
+/**
+ * The result of a {@link BiasSweep}: per bias point the 2DEG sheet density, the gate charge, all
+ * electrons of the stack and the solver's outer iteration count; the quasi-static C-V curve
+ * ({@link #capacitanceVoltage()}); threshold voltages by the definitions of
+ * {@link ThresholdDefinition}. Immutable; array accessors return copies.
+ *
+ * <p>A failed point has NaN in every numeric array (and an empty cell in the CSV), and is listed in
+ * {@link #failures()} with the reason; nothing is dropped.
+ *
+ * <p>CSV columns: {@code gate_bias_V, sheet_density_cm^-2, gate_charge_C/m^2,
+ * electrons_total_cm^-2, outer_iterations, status}.
+ */
+public final class BiasSweepResult implements CsvTable {
+    private static final List<Column> COLUMNS = List.of(Column.of("gate_bias", "V"),
+            Column.of("sheet_density", "cm^-2"), Column.of("gate_charge", "C/m^2"),
+            Column.of("electrons_total", "cm^-2"), Column.of("outer_iterations", ""), Column.of("status", ""));
+
+    private final Structure structure;
+    private final double[] bias;
+    private final double[] sheet; // cm^-2, exactly as Solution#sheetDensityPerCm2 reports it
+    private final double[] gateCharge; // C/m^2
+    private final double[] allElectrons; // m^-2
+    private final int[] iterations;
+    private final Solution[] solutions;
+    private final List<PointFailure> failures;
+    private final String[] status;
+    private final CapacitanceVoltage cv;
+
+    BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, String[] failureMessages) {
+        int n = grid.size();
+        this.structure = structure;
+        this.bias = grid.values();
+        this.solutions = solutions.clone();
+        this.sheet = new double[n];
+        this.gateCharge = new double[n];
+        this.allElectrons = new double[n];
+        this.iterations = new int[n];
+        this.status = new String[n];
+        List<PointFailure> f = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            Solution s = solutions[i];
+            if (s == null) {
+                sheet[i] = Double.NaN;
+                gateCharge[i] = Double.NaN;
+                allElectrons[i] = Double.NaN;
+                iterations[i] = -1;
+                f.add(new PointFailure(i, "gate bias = " + bias[i] + " V", failureMessages[i]));
+                status[i] = "failed: " + failureMessages[i];
+            } else {
+                sheet[i] = s.sheetDensityPerCm2();
+                gateCharge[i] = s.gateCharge();
+                allElectrons[i] = s.electronSheetDensity();
+                iterations[i] = s.convergence().iterations();
+                status[i] = "ok";
+            }
+        }
+        this.failures = Collections.unmodifiableList(f);
+        this.cv = new CapacitanceVoltage(bias, gateCharge);
+    }
+
+    /** @return the structure as given to the sweep (its own bias is not one of the points, unless listed) */
+    public Structure structure() {
+        return structure;
+    }
+
+    /** @return number of bias points */
+    public int size() {
+        return bias.length;
+    }
+
+    /** @return the gate biases in solving order (V) */
+    public double[] gateBiasV() {
+        return bias.clone();
+    }
+
+    /** @return 2DEG sheet density, the subband electrons of the quantum windows (m^-2) */
+    public double[] sheetDensity() {
+        double[] out = new double[sheet.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = Units.perCm2ToPerM2(sheet[i]);
+        }
+        return out;
+    }
+
+    /** @return 2DEG sheet density (cm^-2), exactly as {@link Solution#sheetDensityPerCm2()} reports it */
+    public double[] sheetDensityPerCm2() {
+        return sheet.clone();
+    }
+
+    /** @return sheet charge on the gate metal (C/m&sup2;) */
+    public double[] gateCharge() {
+        return gateCharge.clone();
+    }
+
+    /** @return all electrons of the stack (m^-2) */
+    public double[] electronSheetDensity() {
+        return allElectrons.clone();
+    }
+
+    /** @return outer Schroedinger-Poisson iterations per point, -1 for a failed point */
+    public int[] iterations() {
+        return iterations.clone();
+    }
+
+    /**
+     * @param i point index
+     * @return true if point i converged
+     */
+    public boolean converged(int i) {
+        return solutions[i] != null;
+    }
+
+    /**
+     * @param i point index
+     * @return the full solution at point i (band diagram, subbands, ...), empty for a failed point
+     */
+    public Optional<Solution> solution(int i) {
+        return Optional.ofNullable(solutions[i]);
+    }
+
+    /** @return the failed points with their reasons, in sweep order (empty if all converged) */
+    public List<PointFailure> failures() {
+        return failures;
+    }
+
+    /** @return the quasi-static C-V curve C = dQ_gate/dV on the intervals between the points */
+    public CapacitanceVoltage capacitanceVoltage() {
+        return cv;
+    }
+
+    /**
+     * Reads the threshold voltage off the computed n_s(V_g), using only intervals whose two ends
+     * converged.
+     *
+     * @param definition the definition (see {@link ThresholdDefinition})
+     * @return V_th (V)
+     * @throws InvalidParameterException if the curve does not contain what the definition needs:
+     *                                   the level is not crossed, or n_s never rises with V_g
+     */
+    public double thresholdVoltage(ThresholdDefinition definition) {
+        Require.nonNull("threshold definition", definition);
+        int n = bias.length;
+        // ascending order of bias
+        boolean up = bias[n - 1] > bias[0];
+        double[] v = new double[n];
+        double[] s = new double[n];
+        for (int k = 0; k < n; k++) {
+            int i = up ? k : n - 1 - k;
+            v[k] = bias[i];
+            s[k] = sheet[i];
+        }
+        if (definition instanceof ThresholdDefinition.ConstantDensity c) {
+            return constantDensity(v, s, c.levelPerCm2());
+        }
+        return linearExtrapolation(v, s);
+    }
+
+    private double constantDensity(double[] v, double[] s, double level) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k + 1 < v.length; k++) {
+            double a = s[k];
+            double b = s[k + 1];
+            if (Double.isNaN(a) || Double.isNaN(b)) {
+                continue;
+            }
+            lo = Math.min(lo, Math.min(a, b));
+            hi = Math.max(hi, Math.max(a, b));
+            if (a < level && b >= level) {
+                double t = a > 0 ? Math.log(level / a) / Math.log(b / a) : (level - a) / (b - a);
+                return v[k] + t * (v[k + 1] - v[k]);
+            }
+        }
+        throw new InvalidParameterException("threshold sheet-density level (cm^-2)", Double.toString(level),
+                "(" + Text.num(lo) + ", " + Text.num(hi) + "] (the sheet densities of the converged intervals of the "
+                        + "sweep from " + Text.num(v[0]) + " V to " + Text.num(v[v.length - 1])
+                        + " V; widen the bias range)");
+    }
+
+    private double linearExtrapolation(double[] v, double[] s) {
+        int best = -1;
+        double bestSlope = 0;
+        for (int k = 0; k + 1 < v.length; k++) {
+            double slope = (s[k + 1] - s[k]) / (v[k + 1] - v[k]);
+            if (slope > bestSlope) { // NaN compares false
+                bestSlope = slope;
+                best = k;
+            }
+        }
+        if (best < 0) {
+            throw new InvalidParameterException("gate bias range (V)", "[" + v[0] + ", " + v[v.length - 1] + "]",
+                    "a range over which n_s rises with the gate bias (no converged interval has a positive slope)");
+        }
+        return v[best] - s[best] / bestSlope;
+    }
+
+    @Override
+    public List<Column> columns() {
+        return COLUMNS;
+    }
+
+    @Override
+    public int rowCount() {
+        return bias.length;
+    }
+
+    @Override
+    public List<String> row(int i) {
+        return List.of(CsvTable.cell(bias[i]), CsvTable.cell(sheet[i]),
+                CsvTable.cell(gateCharge[i]), CsvTable.cell(Units.perM2ToPerCm2(allElectrons[i])),
+                iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+    }
+}

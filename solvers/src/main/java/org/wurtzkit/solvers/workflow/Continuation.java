@@ -1,0 +1,44 @@
+package org.wurtzkit.solvers.workflow;
+
+import org.wurtzkit.solvers.sp.SelfConsistentSolver;
+import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.structure.Structure;
+
+/** The continuation loop shared by the sweeps. */
+final class Continuation {
+    private Continuation() {
+    }
+
+    /**
+     * Solves the structures in order, each from the previous converged solution (the first cold);
+     * a failed continued solve is retried cold; a point that fails both ways gets a message in
+     * {@code failures} and a null solution.
+     *
+     * @param solver    the solver
+     * @param at        the structures, in solving order
+     * @param solutions output: converged solutions (null where failed)
+     * @param failures  output: failure messages (null where converged)
+     */
+    static void solveInOrder(SelfConsistentSolver solver, Structure[] at, Solution[] solutions, String[] failures) {
+        Solution previous = null;
+        for (int i = 0; i < at.length; i++) {
+            try {
+                solutions[i] = solver.solve(at[i], previous);
+            } catch (RuntimeException first) {
+                if (previous == null) {
+                    failures[i] = PointFailure.describe(first);
+                } else {
+                    try {
+                        solutions[i] = solver.solve(at[i]);
+                    } catch (RuntimeException cold) {
+                        failures[i] = "continued: " + PointFailure.describe(first) + "; cold start: "
+                                + PointFailure.describe(cold);
+                    }
+                }
+            }
+            if (solutions[i] != null) {
+                previous = solutions[i];
+            }
+        }
+    }
+}

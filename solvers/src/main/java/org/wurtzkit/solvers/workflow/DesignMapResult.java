@@ -1,0 +1,189 @@
+package org.wurtzkit.solvers.workflow;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.Require;
+
+/**
+ * The result of a {@link DesignMap}: for every point (row-major, last axis fastest) its axis
+ * values and its computed values, or the reason it failed. Immutable; accessors return copies.
+ * A failed point has NaN values.
+ *
+ * <p>CSV columns: one per axis ({@code name_unit}), one per computed quantity, then
+ * {@code status} ("ok" or "failed: reason").
+ */
+public final class DesignMapResult implements CsvTable {
+    private final List<Axis> axes;
+    private final List<Column> quantities;
+    private final List<Column> columns;
+    private final double[][] parameters;
+    private final double[][] values;
+    private final String[] failures;
+    private final List<PointFailure> failureList;
+
+    DesignMapResult(List<Axis> axes, List<Column> quantities, double[][] parameters, ParallelPoints.Outcome[] out) {
+        this.axes = List.copyOf(axes);
+        this.quantities = List.copyOf(quantities);
+        List<Column> c = new ArrayList<>();
+        for (Axis a : axes) {
+            c.add(a.column());
+        }
+        c.addAll(quantities);
+        c.add(Column.of("status", ""));
+        this.columns = List.copyOf(c);
+        int n = out.length;
+        this.parameters = parameters;
+        this.values = new double[n][];
+        this.failures = new String[n];
+        List<PointFailure> f = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            if (out[i].values() != null) {
+                values[i] = out[i].values();
+            } else {
+                double[] nan = new double[quantities.size()];
+                java.util.Arrays.fill(nan, Double.NaN);
+                values[i] = nan;
+                failures[i] = out[i].failure();
+                f.add(new PointFailure(i, describe(i), failures[i]));
+            }
+        }
+        this.failureList = Collections.unmodifiableList(f);
+    }
+
+    private String describe(int i) {
+        StringBuilder sb = new StringBuilder();
+        for (int a = 0; a < axes.size(); a++) {
+            if (a > 0) {
+                sb.append(", ");
+            }
+            sb.append(axes.get(a).name()).append(" = ").append(parameters[i][a]);
+            if (!axes.get(a).unit().isEmpty()) {
+                sb.append(' ').append(axes.get(a).unit());
+            }
+        }
+        return sb.toString();
+    }
+
+    /** @return the axes */
+    public List<Axis> axes() {
+        return axes;
+    }
+
+    /** @return the computed columns (without the axes and the status) */
+    public List<Column> quantities() {
+        return quantities;
+    }
+
+    /** @return number of points */
+    public int size() {
+        return values.length;
+    }
+
+    /**
+     * @param axisIndices one index per axis
+     * @return the point index (row-major)
+     */
+    public int index(int... axisIndices) {
+        Require.nonNull("axis indices", axisIndices);
+        if (axisIndices.length != axes.size()) {
+            throw new InvalidParameterException("number of axis indices", Integer.toString(axisIndices.length),
+                    "[" + axes.size() + ", " + axes.size() + "] (one per axis)");
+        }
+        int i = 0;
+        for (int a = 0; a < axes.size(); a++) {
+            Require.inRange("index on axis " + axes.get(a).name(), axisIndices[a], 0, axes.get(a).size() - 1);
+            i = i * axes.get(a).size() + axisIndices[a];
+        }
+        return i;
+    }
+
+    /**
+     * @param i point index
+     * @return the axis values of point i
+     */
+    public double[] parameters(int i) {
+        return parameters[i].clone();
+    }
+
+    /**
+     * @param i point index
+     * @return the computed values of point i (NaN if it failed)
+     */
+    public double[] values(int i) {
+        return values[i].clone();
+    }
+
+    /**
+     * @param i      point index
+     * @param column index among {@link #quantities()}
+     * @return that value (NaN if the point failed)
+     */
+    public double value(int i, int column) {
+        return values[i][column];
+    }
+
+    /**
+     * @param name a quantity's column name
+     * @return its value at every point
+     */
+    public double[] column(String name) {
+        for (int c = 0; c < quantities.size(); c++) {
+            if (quantities.get(c).name().equals(name)) {
+                double[] out = new double[values.length];
+                for (int i = 0; i < out.length; i++) {
+                    out[i] = values[i][c];
+                }
+                return out;
+            }
+        }
+        throw new InvalidParameterException("quantity name", "\"" + name + "\"",
+                quantities.stream().map(Column::name).toList().toString());
+    }
+
+    /**
+     * @param i point index
+     * @return true if point i was computed
+     */
+    public boolean succeeded(int i) {
+        return failures[i] == null;
+    }
+
+    /**
+     * @param i point index
+     * @return why point i failed, or empty
+     */
+    public Optional<String> failure(int i) {
+        return Optional.ofNullable(failures[i]);
+    }
+
+    /** @return every failed point, in map order */
+    public List<PointFailure> failures() {
+        return failureList;
+    }
+
+    @Override
+    public List<Column> columns() {
+        return columns;
+    }
+
+    @Override
+    public int rowCount() {
+        return values.length;
+    }
+
+    @Override
+    public List<String> row(int i) {
+        List<String> r = new ArrayList<>(columns.size());
+        for (double p : parameters[i]) {
+            r.add(CsvTable.cell(p));
+        }
+        for (double v : values[i]) {
+            r.add(CsvTable.cell(v));
+        }
+        r.add(failures[i] == null ? "ok" : "failed: " + failures[i]);
+        return r;
+    }
+}

@@ -1,0 +1,84 @@
+package org.wurtzkit.solvers.workflow;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.solvers.sp.SelfConsistentSolver;
+import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.structure.Structure;
+
+/**
+ * What a design map computes at each point. Implementations must be thread-safe and
+ * deterministic (the same structure must always give the same numbers), so that a parallel map
+ * equals a serial one bit for bit. An exception thrown by {@link #evaluate} marks the point failed.
+ */
+public interface PointEvaluator {
+    /** @return the output columns, one per value returned by {@link #evaluate} */
+    List<Column> columns();
+
+    /**
+     * @param structure the point's structure
+     * @param solver    the map's solver
+     * @return one value per column
+     */
+    double[] evaluate(Structure structure, SelfConsistentSolver solver);
+
+    /**
+     * One cold solve per point, from which the quantities are read.
+     *
+     * @param quantities at least one
+     * @return the evaluator
+     */
+    static PointEvaluator solve(Quantity... quantities) {
+        Require.nonNull("quantities", quantities);
+        if (quantities.length == 0) {
+            throw new InvalidParameterException("number of quantities", "0", "[1, ...)");
+        }
+        Quantity[] q = quantities.clone();
+        List<Column> cols = new ArrayList<>();
+        for (Quantity x : q) {
+            cols.add(Require.nonNull("quantity", x).column());
+        }
+        List<Column> columns = List.copyOf(cols);
+        return new PointEvaluator() {
+            @Override
+            public List<Column> columns() {
+                return columns;
+            }
+
+            @Override
+            public double[] evaluate(Structure structure, SelfConsistentSolver solver) {
+                Solution s = solver.solve(structure);
+                double[] out = new double[q.length];
+                for (int i = 0; i < q.length; i++) {
+                    out[i] = q[i].extractor().applyAsDouble(s);
+                }
+                return out;
+            }
+        };
+    }
+
+    /**
+     * A bias sweep per point, from which the threshold voltage is read (column
+     * {@code threshold_voltage_V}).
+     *
+     * @param extraction the sweep and the definition
+     * @return the evaluator
+     */
+    static PointEvaluator thresholdVoltage(ThresholdExtraction extraction) {
+        Require.nonNull("threshold extraction", extraction);
+        List<Column> columns = List.of(Column.of("threshold_voltage", "V"));
+        return new PointEvaluator() {
+            @Override
+            public List<Column> columns() {
+                return columns;
+            }
+
+            @Override
+            public double[] evaluate(Structure structure, SelfConsistentSolver solver) {
+                return new double[] {extraction.thresholdVoltage(structure, new BiasSweep(solver))};
+            }
+        };
+    }
+}

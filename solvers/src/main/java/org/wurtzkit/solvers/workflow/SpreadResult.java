@@ -1,0 +1,183 @@
+package org.wurtzkit.solvers.workflow;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import org.wurtzkit.material.ParameterSet;
+
+/**
+ * The result of a {@link ParameterSetSpread}: each member (parameter set) with its n_s and V_th,
+ * and min / median / max over the members that succeeded. Immutable.
+ *
+ * <p>CSV ({@link #writeCsv(java.io.Writer)}): one row per member, columns
+ * {@code parameter_set, sheet_density_cm^-2, threshold_voltage_V, status}. The statistics are a
+ * second table, {@link #summary()}.
+ */
+public final class SpreadResult implements CsvTable {
+    private static final List<Column> COLUMNS = List.of(Column.of("parameter_set", ""),
+            Column.of("sheet_density", "cm^-2"), Column.of("threshold_voltage", "V"), Column.of("status", ""));
+
+    /**
+     * One member of the spread.
+     *
+     * @param parameterSet        the set's name
+     * @param sheetDensityPerCm2  n_s (cm^-2), NaN if the member failed
+     * @param thresholdVoltage    V_th (V), NaN if the member failed
+     * @param failure             why it failed, or null
+     */
+    public record Member(String parameterSet, double sheetDensityPerCm2, double thresholdVoltage, String failure) {
+        /** @return true if the member was computed */
+        public boolean succeeded() {
+            return failure == null;
+        }
+    }
+
+    /**
+     * Order statistics over the members that succeeded; the median of an even count is the mean of
+     * the two middle values. All NaN when no member succeeded (count 0).
+     *
+     * @param min    smallest value
+     * @param median median
+     * @param max    largest value
+     * @param count  members included
+     */
+    public record Statistics(double min, double median, double max, int count) {
+        static Statistics of(double[] values) {
+            double[] v = Arrays.stream(values).filter(d -> !Double.isNaN(d)).sorted().toArray();
+            int n = v.length;
+            if (n == 0) {
+                return new Statistics(Double.NaN, Double.NaN, Double.NaN, 0);
+            }
+            double med = n % 2 == 1 ? v[n / 2] : 0.5 * (v[n / 2 - 1] + v[n / 2]);
+            return new Statistics(v[0], med, v[n - 1], n);
+        }
+
+        /** @return max - min */
+        public double range() {
+            return max - min;
+        }
+    }
+
+    private final List<Member> members;
+    private final Statistics sheet;
+    private final Statistics threshold;
+    private final ThresholdExtraction extraction;
+    private final List<PointFailure> failures;
+
+    SpreadResult(List<ParameterSet> sets, ParallelPoints.Outcome[] out, ThresholdExtraction extraction) {
+        List<Member> m = new ArrayList<>();
+        List<PointFailure> f = new ArrayList<>();
+        double[] ns = new double[sets.size()];
+        double[] vth = new double[sets.size()];
+        for (int i = 0; i < sets.size(); i++) {
+            String name = sets.get(i).name();
+            if (out[i].values() != null) {
+                ns[i] = out[i].values()[0];
+                vth[i] = out[i].values()[1];
+                m.add(new Member(name, ns[i], vth[i], null));
+            } else {
+                ns[i] = Double.NaN;
+                vth[i] = Double.NaN;
+                m.add(new Member(name, Double.NaN, Double.NaN, out[i].failure()));
+                f.add(new PointFailure(i, "parameter set " + name, out[i].failure()));
+            }
+        }
+        this.members = Collections.unmodifiableList(m);
+        this.failures = Collections.unmodifiableList(f);
+        this.sheet = Statistics.of(ns);
+        this.threshold = Statistics.of(vth);
+        this.extraction = extraction;
+    }
+
+    /** @return every member, in the order of the sets */
+    public List<Member> members() {
+        return members;
+    }
+
+    /**
+     * @param parameterSet a set's name
+     * @return its member, or empty
+     */
+    public Optional<Member> member(String parameterSet) {
+        return members.stream().filter(x -> x.parameterSet().equals(parameterSet)).findFirst();
+    }
+
+    /** @return statistics of n_s (cm^-2) */
+    public Statistics sheetDensityPerCm2() {
+        return sheet;
+    }
+
+    /** @return statistics of V_th (V) */
+    public Statistics thresholdVoltage() {
+        return threshold;
+    }
+
+    /** @return how V_th was obtained */
+    public ThresholdExtraction thresholdExtraction() {
+        return extraction;
+    }
+
+    /** @return the members that failed */
+    public List<PointFailure> failures() {
+        return failures;
+    }
+
+    /**
+     * @return the statistics as a table: columns {@code statistic, sheet_density_cm^-2,
+     *         threshold_voltage_V}, rows min, median, max, count
+     */
+    public CsvTable summary() {
+        List<Column> cols = List.of(Column.of("statistic", ""), Column.of("sheet_density", "cm^-2"),
+                Column.of("threshold_voltage", "V"));
+        List<List<String>> rows = List.of(
+                List.of("min", CsvTable.cell(sheet.min()), CsvTable.cell(threshold.min())),
+                List.of("median", CsvTable.cell(sheet.median()), CsvTable.cell(threshold.median())),
+                List.of("max", CsvTable.cell(sheet.max()), CsvTable.cell(threshold.max())),
+                List.of("count", Integer.toString(sheet.count()), Integer.toString(threshold.count())));
+        return new CsvTable() {
+            @Override
+            public List<Column> columns() {
+                return cols;
+            }
+
+            @Override
+            public int rowCount() {
+                return rows.size();
+            }
+
+            @Override
+            public List<String> row(int row) {
+                return rows.get(row);
+            }
+        };
+    }
+
+    @Override
+    public List<Column> columns() {
+        return COLUMNS;
+    }
+
+    @Override
+    public int rowCount() {
+        return members.size();
+    }
+
+    @Override
+    public List<String> row(int i) {
+        Member m = members.get(i);
+        return List.of(m.parameterSet(), CsvTable.cell(m.sheetDensityPerCm2()), CsvTable.cell(m.thresholdVoltage()),
+                m.succeeded() ? "ok" : "failed: " + m.failure());
+    }
+
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("SpreadResult[");
+        for (Member m : members) {
+            sb.append(m.parameterSet()).append(": n_s = ").append(m.sheetDensityPerCm2()).append(" cm^-2, V_th = ")
+                    .append(m.thresholdVoltage()).append(" V").append(m.succeeded() ? "" : " (failed)").append("; ");
+        }
+        return sb.append("n_s ").append(sheet).append(", V_th ").append(threshold).append(']').toString();
+    }
+}

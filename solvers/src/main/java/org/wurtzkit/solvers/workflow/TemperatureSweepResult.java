@@ -1,0 +1,156 @@
+package org.wurtzkit.solvers.workflow;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.solvers.sp.Subband;
+import org.wurtzkit.structure.Structure;
+
+/**
+ * The result of a {@link TemperatureSweep}: per temperature the 2DEG sheet density, the gate
+ * charge, the lowest subband's energy relative to the Fermi level and the band gap at the bottom
+ * of the stack (E_c - E_v at the deepest node, the temperature-dependent gap the solver used
+ * there). Immutable; array accessors return copies. A failed point has NaN values and is listed in
+ * {@link #failures()}.
+ *
+ * <p>CSV columns: {@code temperature_K, sheet_density_cm^-2, gate_charge_C/m^2,
+ * ground_subband_minus_fermi_eV, bottom_band_gap_eV, outer_iterations, status}.
+ */
+public final class TemperatureSweepResult implements CsvTable {
+    private static final List<Column> COLUMNS = List.of(Column.of("temperature", "K"),
+            Column.of("sheet_density", "cm^-2"), Column.of("gate_charge", "C/m^2"),
+            Column.of("ground_subband_minus_fermi", "eV"), Column.of("bottom_band_gap", "eV"),
+            Column.of("outer_iterations", ""), Column.of("status", ""));
+
+    private final Structure structure;
+    private final double[] temperature;
+    private final double[] sheet; // cm^-2
+    private final double[] gateCharge;
+    private final double[] groundSubband;
+    private final double[] bottomGap;
+    private final int[] iterations;
+    private final Solution[] solutions;
+    private final String[] status;
+    private final List<PointFailure> failures;
+
+    TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, String[] messages) {
+        int n = temperature.length;
+        this.structure = structure;
+        this.temperature = temperature.clone();
+        this.solutions = solutions.clone();
+        sheet = new double[n];
+        gateCharge = new double[n];
+        groundSubband = new double[n];
+        bottomGap = new double[n];
+        iterations = new int[n];
+        status = new String[n];
+        List<PointFailure> f = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            Solution s = solutions[i];
+            if (s == null) {
+                sheet[i] = Double.NaN;
+                gateCharge[i] = Double.NaN;
+                groundSubband[i] = Double.NaN;
+                bottomGap[i] = Double.NaN;
+                iterations[i] = -1;
+                status[i] = "failed: " + messages[i];
+                f.add(new PointFailure(i, "temperature = " + temperature[i] + " K", messages[i]));
+                continue;
+            }
+            sheet[i] = s.sheetDensityPerCm2();
+            gateCharge[i] = s.gateCharge();
+            List<Subband> bands = s.subbands();
+            // NaN when the stack has no subband at all (no quantum window); documented in the accessor
+            groundSubband[i] = bands.isEmpty() ? Double.NaN : lowest(bands);
+            double[] ec = s.conductionBand();
+            double[] ev = s.valenceBand();
+            bottomGap[i] = ec[ec.length - 1] - ev[ev.length - 1];
+            iterations[i] = s.convergence().iterations();
+            status[i] = bands.isEmpty() ? "ok (no subbands)" : "ok";
+        }
+        this.failures = Collections.unmodifiableList(f);
+    }
+
+    private static double lowest(List<Subband> bands) {
+        double e = Double.POSITIVE_INFINITY;
+        for (Subband b : bands) {
+            e = Math.min(e, b.energyEv());
+        }
+        return e;
+    }
+
+    /** @return the structure as given */
+    public Structure structure() {
+        return structure;
+    }
+
+    /** @return number of points */
+    public int size() {
+        return temperature.length;
+    }
+
+    /** @return temperatures in solving order (K) */
+    public double[] temperatureK() {
+        return temperature.clone();
+    }
+
+    /** @return 2DEG sheet density (cm^-2) */
+    public double[] sheetDensityPerCm2() {
+        return sheet.clone();
+    }
+
+    /** @return gate charge (C/m&sup2;), 0 for a free surface */
+    public double[] gateCharge() {
+        return gateCharge.clone();
+    }
+
+    /**
+     * @return lowest subband energy minus the Fermi level (eV), over all windows; NaN where the
+     *         solve had no subband (status "ok (no subbands)") or failed
+     */
+    public double[] groundSubbandMinusFermiEv() {
+        return groundSubband.clone();
+    }
+
+    /** @return E_c - E_v at the deepest node (eV) */
+    public double[] bottomBandGapEv() {
+        return bottomGap.clone();
+    }
+
+    /** @return outer iterations per point, -1 for a failed point */
+    public int[] iterations() {
+        return iterations.clone();
+    }
+
+    /**
+     * @param i point index
+     * @return the solution there, empty for a failed point
+     */
+    public Optional<Solution> solution(int i) {
+        return Optional.ofNullable(solutions[i]);
+    }
+
+    /** @return the failed points, in sweep order */
+    public List<PointFailure> failures() {
+        return failures;
+    }
+
+    @Override
+    public List<Column> columns() {
+        return COLUMNS;
+    }
+
+    @Override
+    public int rowCount() {
+        return temperature.length;
+    }
+
+    @Override
+    public List<String> row(int i) {
+        return List.of(CsvTable.cell(temperature[i]), CsvTable.cell(sheet[i]), CsvTable.cell(gateCharge[i]),
+                CsvTable.cell(groundSubband[i]), CsvTable.cell(bottomGap[i]),
+                iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+    }
+}

@@ -1,0 +1,39 @@
+package org.wurtzkit.solvers.workflow;
+
+import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.Require;
+import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.structure.Structure;
+
+/**
+ * How to obtain a threshold voltage from the full solver: a bias sweep over a grid and a
+ * definition to read V_th off it.
+ *
+ * @param grid       the gate biases to sweep
+ * @param definition the threshold definition
+ */
+public record ThresholdExtraction(BiasGrid grid, ThresholdDefinition definition) {
+    /** Validates. */
+    public ThresholdExtraction {
+        Require.nonNull("bias grid", grid);
+        Require.nonNull("threshold definition", definition);
+    }
+
+    /**
+     * Runs the sweep and extracts V_th. Every point of the sweep must converge: a failed point would
+     * leave a gap in which the threshold might lie, so it is an error here, not a silent omission.
+     *
+     * @param structure the stack (Schottky gate)
+     * @param sweep     the sweep runner
+     * @return V_th (V)
+     * @throws WurtzkitException of kind NOT_CONVERGED if a bias point failed
+     */
+    public double thresholdVoltage(Structure structure, BiasSweep sweep) {
+        BiasSweepResult r = Require.nonNull("bias sweep", sweep).run(structure, grid);
+        if (!r.failures().isEmpty()) {
+            throw new WurtzkitException(ErrorKind.NOT_CONVERGED, "threshold extraction needs every bias point; "
+                    + r.failures().size() + " of " + r.size() + " failed, first: " + r.failures().get(0));
+        }
+        return r.thresholdVoltage(definition);
+    }
+}

@@ -1,0 +1,22 @@
+/**
+ * Design workflows on top of the self-consistent solver: what a device engineer does with it.
+ *
+ * <ul>
+ * <li>{@link org.wurtzkit.solvers.workflow.BiasSweep}: n_s(V_g) and gate charge with continuation,
+ * quasi-static C-V ({@link org.wurtzkit.solvers.workflow.CapacitanceVoltage}), threshold voltage
+ * by two definitions ({@link org.wurtzkit.solvers.workflow.ThresholdDefinition}).</li>
+ * <li>{@link org.wurtzkit.solvers.workflow.TemperatureSweep}: the same against temperature.</li>
+ * <li>{@link org.wurtzkit.solvers.workflow.DesignMap}: a parallel grid over any structure
+ * parameters, identical to a serial run, with progress and per-point failure reports.</li>
+ * <li>{@link org.wurtzkit.solvers.workflow.TargetSearch}: the barrier thickness, Al fraction or cap
+ * thickness that meets a target n_s or V_th.</li>
+ * <li>{@link org.wurtzkit.solvers.workflow.ParameterSetSpread}: one design solved with every
+ * parameter set; min / median / max.</li>
+ * </ul>
+ *
+ * <p>Every workflow returns an immutable result that writes itself as CSV
+ * ({@link org.wurtzkit.solvers.workflow.CsvTable}); column headers carry their units. Failed
+ * points are kept in the results with their reason, never dropped. Quantities are SI inside;
+ * accessors in other units say so in their names.
+ */
+package org.wurtzkit.solvers.workflow;
