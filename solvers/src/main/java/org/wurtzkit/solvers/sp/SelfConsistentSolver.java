@@ -76,16 +76,42 @@ public final class SelfConsistentSolver {
      * @throws NotConvergedException with the convergence record and the last iterate
      */
     public Solution solve(Structure structure, Solution start) {
+        return start == null ? solve(structure, null, null) : solve(structure, start.depth(), start.potential());
+    }
+
+    /**
+     * Solves, starting from a given potential profile, e.g. one extrapolated from two neighbouring
+     * solutions of a sweep ({@link #extrapolate(Solution, Solution, double)}).
+     *
+     * @param structure the stack
+     * @param depth     depths of the guess (m), increasing, or null for a cold start
+     * @param potential potential of the guess at those depths (V), finite, or null for a cold start
+     * @return the converged solution
+     * @throws NotConvergedException with the convergence record and the last iterate
+     */
+    public Solution solve(Structure structure, double[] depth, double[] potential) {
         Require.nonNull("structure", structure);
+        if ((depth == null) != (potential == null) || (depth != null && depth.length != potential.length)) {
+            throw new org.wurtzkit.errors.InvalidParameterException("initial guess",
+                    (depth == null ? "null" : depth.length) + " depths, " + (potential == null ? "null" : potential.length)
+                            + " potentials", "both null, or arrays of equal length");
+        }
+        if (depth != null) {
+            for (int i = 0; i < depth.length; i++) {
+                Require.finite("initial guess potential[" + i + "] (V)", potential[i]);
+                Require.finite("initial guess depth[" + i + "] (m)", depth[i]);
+            }
+        }
         Device d = new Device(structure, options);
         Work w = new Work(d);
-        double[] phi = start == null ? coldStart(d) : interpolate(start, d);
+        boolean cold = depth == null;
+        double[] phi = cold ? coldStart(d) : interpolate(depth, potential, d);
         applyDirichlet(d, phi);
         ChargeModel charges = new ChargeModel(d);
         int[] newtonCount = {0};
         double[] history = new double[options.maxIterations()];
         int nw = d.windowStart.length;
-        if (start == null || nw == 0) {
+        if (cold || nw == 0) {
             newton(d, charges, phi, null, null, w, newtonCount, history, 0,
                     nw == 0 ? options.newtonTolerance() : CLASSICAL_START_TOLERANCE);
         }
@@ -163,9 +189,34 @@ public final class SelfConsistentSolver {
         return phi;
     }
 
-    private static double[] interpolate(Solution s, Device d) {
-        double[] z = s.depth();
-        double[] v = s.potential();
+    /**
+     * Linear extrapolation of the potential to a new point of a sweep: phi_b + t (phi_b - phi_a), with
+     * t the ratio of the next step to the last (e.g. (V_next - V_b)/(V_b - V_a)). A first-order
+     * predictor in the sense of continuation methods (E. L. Allgower and K. Georg, Introduction to
+     * Numerical Continuation Methods, SIAM 2003, ch. 2; from memory); falls back to phi_b when the two
+     * solutions do not share a mesh.
+     *
+     * @param a the solution before b
+     * @param b the latest solution
+     * @param t step ratio, finite
+     * @return the predicted potential on b's mesh (V)
+     */
+    public static double[] extrapolate(Solution a, Solution b, double t) {
+        Require.finite("extrapolation step ratio", t);
+        double[] pb = b.potential();
+        double[] za = a.depth();
+        double[] zb = b.depth();
+        if (!java.util.Arrays.equals(za, zb)) {
+            return pb;
+        }
+        double[] pa = a.potential();
+        for (int i = 0; i < pb.length; i++) {
+            pb[i] += t * (pb[i] - pa[i]);
+        }
+        return pb;
+    }
+
+    private static double[] interpolate(double[] z, double[] v, Device d) {
         double[] phi = new double[d.n];
         int j = 0;
         for (int i = 0; i < d.n; i++) {

@@ -67,7 +67,7 @@ public final class BiasSweep {
         }
         Solution[] solutions = new Solution[n];
         String[] failures = new String[n];
-        Continuation.solveInOrder(solver, at, solutions, failures);
+        Continuation.solveInOrder(solver, at, grid.values(), solutions, failures);
         return new BiasSweepResult(structure, grid, solutions, failures);
     }
 }

@@ -19,11 +19,20 @@ final class Continuation {
      * @param solutions output: converged solutions (null where failed)
      * @param failures  output: failure messages (null where converged)
      */
-    static void solveInOrder(SelfConsistentSolver solver, Structure[] at, Solution[] solutions, String[] failures) {
+    static void solveInOrder(SelfConsistentSolver solver, Structure[] at, double[] parameter, Solution[] solutions,
+            String[] failures) {
         Solution previous = null;
+        Solution beforePrevious = null;
         for (int i = 0; i < at.length; i++) {
             try {
-                solutions[i] = solver.solve(at[i], previous);
+                if (beforePrevious != null) {
+                    // first-order predictor from the last two points (consecutive successes)
+                    double t = (parameter[i] - parameter[i - 1]) / (parameter[i - 1] - parameter[i - 2]);
+                    double[] guess = SelfConsistentSolver.extrapolate(beforePrevious, previous, t);
+                    solutions[i] = solver.solve(at[i], previous.depth(), guess);
+                } else {
+                    solutions[i] = solver.solve(at[i], previous);
+                }
             } catch (RuntimeException first) {
                 if (previous == null) {
                     failures[i] = PointFailure.describe(first);
@@ -37,7 +46,10 @@ final class Continuation {
                 }
             }
             if (solutions[i] != null) {
+                beforePrevious = i > 0 && solutions[i - 1] != null ? solutions[i - 1] : null;
                 previous = solutions[i];
+            } else {
+                beforePrevious = null; // continue from the last success, without a predictor
             }
         }
     }

@@ -68,7 +68,7 @@ public final class TemperatureSweep {
         }
         Solution[] solutions = new Solution[t.length];
         String[] failures = new String[t.length];
-        Continuation.solveInOrder(solver, at, solutions, failures);
+        Continuation.solveInOrder(solver, at, t, solutions, failures);
         return new TemperatureSweepResult(structure, t, solutions, failures);
     }
 }

@@ -203,6 +203,31 @@ class HemtPhysicsTest {
         assertTrue(channel > 0.8 * total, "channel " + channel + " of " + total);
     }
 
+    /** The sweep predictor: extrapolating two solutions lands closer to the next one than either. */
+    @Test
+    void extrapolatedGuessIsCloserThanThePreviousSolution() {
+        Solution a = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, 0.0)));
+        Solution b = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, -0.5)));
+        Solution c = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, -1.0)));
+        double[] guess = SelfConsistentSolver.extrapolate(a, b, 1.0);
+        double[] pb = b.potential();
+        double[] pc = c.potential();
+        double errGuess = 0;
+        double errPrevious = 0;
+        for (int i = 0; i < pc.length; i++) {
+            errGuess = Math.max(errGuess, Math.abs(guess[i] - pc[i]));
+            errPrevious = Math.max(errPrevious, Math.abs(pb[i] - pc[i]));
+        }
+        assertTrue(errGuess < 0.2 * errPrevious, errGuess + " vs " + errPrevious);
+        Solution fromGuess = SOLVER.solve(c.structure(), c.depth(), guess);
+        assertEquals(c.sheetDensityPerCm2(), fromGuess.sheetDensityPerCm2(), 1e-4 * c.sheetDensityPerCm2());
+        assertTrue(fromGuess.convergence().iterations() < c.convergence().iterations());
+        assertThrows(InvalidParameterException.class, () -> SOLVER.solve(c.structure(), c.depth(), new double[3]));
+        double[] bad = guess.clone();
+        bad[4] = Double.NaN;
+        assertThrows(InvalidParameterException.class, () -> SOLVER.solve(c.structure(), c.depth(), bad));
+    }
+
     /** A truncated subband set is reported, not hidden. */
     @Test
     void subbandLimitIsReported() {
