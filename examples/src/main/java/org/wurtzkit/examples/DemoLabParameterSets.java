@@ -1,0 +1,46 @@
+package org.wurtzkit.examples;
+
+import java.util.List;
+import org.wurtzkit.material.ParameterSet;
+import org.wurtzkit.material.ParameterSetProvider;
+import org.wurtzkit.materials.data.JsonParameterSetReader;
+
+/**
+ * Registers the parameter set of the fictional {@value DemoLab#LAB}, {@value #NAME}, through
+ * {@link java.util.ServiceLoader} (listed in
+ * {@code META-INF/services/org.wurtzkit.material.ParameterSetProvider} of this module): the way a
+ * team plugs its own measured set into wurtzkit.
+ *
+ * <p><b>The data is invented.</b> The file {@code tarnwick-lab-2025.json} is the
+ * vurgaftman-meyer-2003 set with five values replaced by made-up numbers (GaN C13, C33 and static
+ * permittivity, AlN e33 and spontaneous polarization) that cite the fictional lab; it describes no
+ * measurement and exists only to show the mechanism, and to give the parameter-set spread a third
+ * member that is labelled as invented wherever it appears.
+ */
+public final class DemoLabParameterSets implements ParameterSetProvider {
+    /** Name of the invented set. */
+    public static final String NAME = "tarnwick-lab-2025";
+
+    private static final class Holder {
+        static final ParameterSet SET = JsonParameterSetReader.readResource(DemoLabParameterSets.class,
+                "tarnwick-lab-2025.json");
+    }
+
+    /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
+    public DemoLabParameterSets() {
+    }
+
+    /** @return the invented set, read on first use */
+    @Override
+    public List<ParameterSet> parameterSets() {
+        return List.of(Holder.SET);
+    }
+
+    /**
+     * @param setName a parameter set's name
+     * @return the name with " (invented)" appended for the demo lab's set, for legends and tables
+     */
+    public static String label(String setName) {
+        return NAME.equals(setName) ? setName + " (invented)" : setName;
+    }
+}
