@@ -94,6 +94,8 @@ public record Composition(double aluminium, double indium) {
      * @return (1 - t) this + t other
      */
     public Composition interpolate(Composition other, double t) {
+        org.wurtzkit.errors.Require.nonNull("other composition", other);
+        org.wurtzkit.errors.Require.inRange("interpolation position t", t, 0, 1);
         double x = aluminium + t * (other.aluminium - aluminium);
         double y = indium + t * (other.indium - indium);
         // a convex combination of two valid compositions is valid; max(0, .) only removes round-off

@@ -12,6 +12,12 @@ import java.util.List;
 public record Provenance(String rule, List<Source> sources) {
     /** Copies the list. */
     public Provenance {
+        org.wurtzkit.errors.Require.nonNull("provenance rule", rule);
+        org.wurtzkit.errors.Require.nonNull("provenance sources", sources);
+        if (sources.isEmpty()) {
+            throw new org.wurtzkit.errors.InvalidParameterException("number of provenance sources", "0",
+                    "[1, ...) (every value names at least one source)");
+        }
         sources = List.copyOf(sources);
     }
 

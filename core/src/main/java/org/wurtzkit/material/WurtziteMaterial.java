@@ -229,6 +229,7 @@ public final class WurtziteMaterial {
          * @return this builder
          */
         public Builder set(MaterialParameter p, double value, Provenance origin) {
+            Require.nonNull("material parameter", p);
             Require.finite(p.key() + " of " + name, value);
             values[p.ordinal()] = value;
             provenance[p.ordinal()] = Require.nonNull("provenance of " + p.key(), origin);
@@ -242,7 +243,8 @@ public final class WurtziteMaterial {
          * @return this builder
          */
         public Builder set(MaterialParameter p, double value, Source source) {
-            return set(p, value, Provenance.tabulated(source));
+            Require.nonNull("material parameter", p);
+            return set(p, value, Provenance.tabulated(Require.nonNull("source of " + p.key(), source)));
         }
 
         /**

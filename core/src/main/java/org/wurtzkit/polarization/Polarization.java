@@ -23,6 +23,12 @@ import org.wurtzkit.strain.Strain;
  */
 public record Polarization(double spontaneous, double piezoelectric) {
 
+    /** Validates: both components finite. */
+    public Polarization {
+        org.wurtzkit.errors.Require.finite("spontaneous polarization (C/m^2)", spontaneous);
+        org.wurtzkit.errors.Require.finite("piezoelectric polarization (C/m^2)", piezoelectric);
+    }
+
     /**
      * @param m      the material
      * @param strain its strain
@@ -30,6 +36,9 @@ public record Polarization(double spontaneous, double piezoelectric) {
      * @return the polarization along [0001]
      */
     public static Polarization of(WurtziteMaterial m, Strain strain, PolarizationModel model) {
+        org.wurtzkit.errors.Require.nonNull("material", m);
+        org.wurtzkit.errors.Require.nonNull("strain", strain);
+        org.wurtzkit.errors.Require.nonNull("polarization model", model);
         double psp = model.spontaneous() == PolarizationModel.Spontaneous.BOWING ? m.spontaneousPolarizationWithBowing()
                 : m.spontaneousPolarization();
         return new Polarization(psp, piezoelectric(m, strain, model.piezoelectric()));

@@ -30,7 +30,10 @@ public record CriticalThickness(double alphaDegrees, double lambdaDegrees) {
 
     /** Validates the angles. */
     public CriticalThickness {
-        Require.inRange("dislocation angle alpha (degrees)", alphaDegrees, 0, 90);
+        if (!(alphaDegrees > 0 && alphaDegrees <= 90)) {
+            throw new org.wurtzkit.errors.InvalidParameterException("dislocation angle alpha (degrees)",
+                    Double.toString(alphaDegrees), "(0, 90]");
+        }
         if (!(lambdaDegrees >= 0 && lambdaDegrees < 90)) {
             throw new org.wurtzkit.errors.InvalidParameterException("slip angle lambda (degrees)",
                     Double.toString(lambdaDegrees), "[0, 90)");

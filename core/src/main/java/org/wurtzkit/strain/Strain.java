@@ -33,6 +33,7 @@ public record Strain(double xx, double zz) {
      * @return the strain
      */
     public static Strain pseudomorphic(WurtziteMaterial layer, double inPlaneA, double relaxation) {
+        Require.nonNull("layer material", layer);
         Require.positive("in-plane lattice constant a_s (m)", inPlaneA);
         Require.inRange("relaxation r", relaxation, 0, 1);
         double a = layer.latticeA();
@@ -48,6 +49,7 @@ public record Strain(double xx, double zz) {
      * @return the pseudomorphic (r = 0) strain of layer on onTopOf
      */
     public static Strain pseudomorphic(WurtziteMaterial layer, WurtziteMaterial onTopOf) {
+        Require.nonNull("substrate material", onTopOf);
         return pseudomorphic(layer, onTopOf.latticeA(), 0);
     }
 

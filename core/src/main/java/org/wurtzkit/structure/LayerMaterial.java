@@ -63,6 +63,7 @@ public sealed interface LayerMaterial permits LayerMaterial.Alloy, LayerMaterial
 
         @Override
         public WurtziteMaterial at(double fromBottom, ParameterSet set) {
+            Require.inRange("position in the graded layer (0 = bottom, 1 = top)", fromBottom, 0, 1);
             return set.material(bottom.interpolate(top, fromBottom));
         }
 

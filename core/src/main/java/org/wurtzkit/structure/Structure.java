@@ -231,7 +231,8 @@ public final class Structure {
         if (!s.layer().material().isGraded()) {
             return s.top();
         }
-        double fromBottom = (s.depthBottom() - depth) / (s.depthBottom() - s.depthTop());
+        // in [0, 1] up to round-off of the depths; the clamp removes only that round-off
+        double fromBottom = Math.min(1, Math.max(0, (s.depthBottom() - depth) / (s.depthBottom() - s.depthTop())));
         double below = s.indexFromTop() == states.size() - 1 ? referenceLatticeA
                 : states.get(s.indexFromTop() + 1).top().inPlaneLatticeA();
         WurtziteMaterial m = s.layer().material().at(fromBottom, parameters);
@@ -330,6 +331,7 @@ public final class Structure {
          * @return this builder
          */
         public Builder onRelaxed(Composition composition) {
+            Require.nonNull("relaxed template composition", composition);
             this.referenceLatticeA = parameters.material(composition).latticeA();
             return this;
         }
