@@ -183,6 +183,13 @@ final class Device {
                 j++;
             }
             for (DeepLevel d : l.deepLevels()) {
+                double gap = Math.min(states.get(li).top().material().bandGap().atTemperature(t),
+                        states.get(li).bottom().material().bandGap().atTemperature(t));
+                if (d.energyBelowConductionEv() > gap) {
+                    throw new InvalidParameterException("deep level energy below E_c in layer \"" + l.name() + "\" (eV)",
+                            Double.toString(d.energyBelowConductionEv()),
+                            "[0, " + gap + "] (inside the layer's band gap at " + t + " K)");
+                }
                 speciesDensity[li][j] = d.densityPerM3();
                 speciesEnergy[li][j] = d.energyBelowConductionEv();
                 speciesDegeneracy[li][j] = 1;
@@ -290,12 +297,13 @@ final class Device {
             return out;
         }
         for (QuantumRegion.Window w : ((QuantumRegion.Windows) region).windows()) {
-            if (w.depthBottom() > total) {
+            if (w.depthBottom() > total * (1 + 1e-12)) {
                 throw new InvalidParameterException("quantum window bottom depth (m)", Double.toString(w.depthBottom()),
                         "[" + (w.depthTop() + 1e-9) + ", " + total + "] (inside the stack, whose thickness is " + total
                                 + " m)");
             }
-            out.add(new double[] {w.depthTop(), w.depthBottom()});
+            // a bottom within round-off of the stack's thickness is the bottom itself
+            out.add(new double[] {w.depthTop(), Math.min(total, w.depthBottom())});
         }
         return out;
     }

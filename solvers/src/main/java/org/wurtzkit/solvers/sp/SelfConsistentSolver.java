@@ -35,6 +35,14 @@ public final class SelfConsistentSolver {
     private static final double CLASSICAL_START_TOLERANCE = 1e-4;
     /** Newton tolerance of the first Schroedinger-Poisson iteration (V). */
     private static final double INITIAL_INNER_TOLERANCE = 1e-4;
+    /** Outer iteration from which a stalled change triggers under-relaxation. */
+    private static final int STAGNATION_START = 3;
+    /** A change that shrinks by less than this factor counts as stalled. */
+    private static final double STAGNATION_RATIO = 0.7;
+    /** Smallest under-relaxation factor of the outer update. */
+    private static final double MIN_MIXING = 0.05;
+    /** Relative capacitance to ground that keeps a both-sides-free Jacobian regular. */
+    private static final double FLOATING_REGULARISATION = 1e-10;
     /** Inner tolerance as a fraction of the previous outer change of the potential. */
     private static final double INNER_TOLERANCE_FACTOR = 1e-3;
 
@@ -97,9 +105,17 @@ public final class SelfConsistentSolver {
                             + " potentials", "both null, or arrays of equal length");
         }
         if (depth != null) {
+            if (depth.length < 2) {
+                throw new org.wurtzkit.errors.InvalidParameterException("initial guess length",
+                        Integer.toString(depth.length), "[2, ...) points");
+            }
             for (int i = 0; i < depth.length; i++) {
                 Require.finite("initial guess potential[" + i + "] (V)", potential[i]);
                 Require.finite("initial guess depth[" + i + "] (m)", depth[i]);
+                if (i > 0 && !(depth[i] > depth[i - 1])) {
+                    throw new org.wurtzkit.errors.InvalidParameterException("initial guess depth[" + i + "] (m)",
+                            Double.toString(depth[i]), "(" + depth[i - 1] + ", ...) (strictly increasing)");
+                }
             }
         }
         Device d = new Device(structure, options);
@@ -122,6 +138,7 @@ public final class SelfConsistentSolver {
         }
         QuantumStates qs = new QuantumStates(d);
         double[] ref = new double[d.n];
+        double mixing = 1;
         for (int it = 0; it < options.maxIterations(); it++) {
             qs.update(d, phi);
             System.arraycopy(phi, 0, ref, 0, d.n);
@@ -136,6 +153,16 @@ public final class SelfConsistentSolver {
                 delta = Math.max(delta, Math.abs(phi[i] - ref[i]));
             }
             history[it] = delta;
+            if (it >= STAGNATION_START && delta > STAGNATION_RATIO * history[it - 1]) {
+                // charge sloshing between coupled wells: the predictor over-corrects; under-relax
+                // the outer update, more each time the change fails to shrink
+                mixing = Math.max(MIN_MIXING, 0.5 * mixing);
+            }
+            if (mixing < 1) {
+                for (int i = 0; i < d.n; i++) {
+                    phi[i] = ref[i] + mixing * (phi[i] - ref[i]);
+                }
+            }
             if (delta < options.tolerance()) {
                 qs.update(d, phi);
                 ConvergenceRecord rec = new ConvergenceRecord(true, it + 1, newtonCount[0],
@@ -252,10 +279,28 @@ public final class SelfConsistentSolver {
             int[] count, double[] history, int outer, double tolerance) {
         int n = d.n;
         double maxStep = options.maxNewtonStep();
+        boolean floating = !d.topDirichlet && !d.bottomDirichlet;
+        boolean limited = true;
         charges.evaluate(phi, ref, qs, w.q, w.dq);
         double norm = residual(d, phi, w.q, w.rhs);
         for (int it = 0; it < options.maxNewtonIterations(); it++) {
+            if (floating && limited) {
+                // Both boundaries free: the uniform shift of the potential is fixed only by the total
+                // charge, whose capacitance freezes out at low temperature. Restore global neutrality
+                // by a monotone scalar root search first, so the Newton step need not find it.
+                if (neutralityShift(d, charges, phi, ref, qs, w)) {
+                    charges.evaluate(phi, ref, qs, w.q, w.dq);
+                    norm = residual(d, phi, w.q, w.rhs);
+                }
+            }
             jacobian(d, w.dq, w.sub, w.diag, w.sup);
+            if (floating) {
+                // a capacitance to ground of 1e-10 of the local stiffness keeps the matrix regular
+                for (int i = 0; i < n; i++) {
+                    double stiff = (i > 0 ? d.eps[i - 1] / d.h[i - 1] : 0) + (i < n - 1 ? d.eps[i] / d.h[i] : 0);
+                    w.diag[i] += FLOATING_REGULARISATION * stiff;
+                }
+            }
             try {
                 Tridiagonal.solve(w.sub, w.diag, w.sup, w.rhs, w.delta, w.scratch);
             } catch (SingularPivotException | IllegalArgumentException e) {
@@ -270,7 +315,8 @@ public final class SelfConsistentSolver {
             }
             count[0]++;
             System.arraycopy(phi, 0, w.backup, 0, n);
-            double t = big > maxStep ? maxStep / big : 1;
+            limited = big > maxStep;
+            double t = limited ? maxStep / big : 1;
             double trialNorm;
             while (true) {
                 for (int i = 0; i < n; i++) {
@@ -291,6 +337,64 @@ public final class SelfConsistentSolver {
         throw failure(d, phi, w, count, history, outer, String.format(Locale.ROOT,
                 "Newton-Poisson not converged in %d steps (tolerance %.3g V)", options.maxNewtonIterations(),
                 options.newtonTolerance()));
+    }
+
+    /**
+     * Shifts phi uniformly by the s that makes the sum of all box residuals vanish,
+     * sum F = D_bottom - D_top - sum Q(phi + s) = 0 (global charge neutrality with both boundaries
+     * free); sum Q falls monotonically with s, so a bracket and Brent's method
+     * (R. P. Brent, Algorithms for Minimization without Derivatives, 1973, via Commons Math) find it.
+     *
+     * @return whether a shift was applied
+     */
+    private static boolean neutralityShift(Device d, ChargeModel charges, double[] phi, double[] ref, QuantumStates qs,
+            Work w) {
+        int n = d.n;
+        double[] trial = w.scratch;
+        double target = d.px[n - 2]; // D at the zero-field bottom; D = 0 above a free surface
+        org.apache.commons.math3.analysis.UnivariateFunction g = s -> {
+            for (int i = 0; i < n; i++) {
+                trial[i] = phi[i] + s;
+            }
+            charges.evaluate(trial, ref, qs, w.q, w.dq);
+            double sum = 0;
+            for (int i = 0; i < n; i++) {
+                sum += w.q[i];
+            }
+            return target - sum;
+        };
+        double g0 = g.value(0);
+        if (g0 == 0 || !Double.isFinite(g0)) {
+            return false;
+        }
+        double dir = g0 < 0 ? 1 : -1; // g grows with s
+        double lo = 0;
+        double glo = g0;
+        double step = 0.05;
+        double hi = Double.NaN;
+        while (step <= 64) {
+            double s = dir * step;
+            double gs = g.value(s);
+            if (!Double.isFinite(gs)) {
+                break;
+            }
+            if (Math.signum(gs) != Math.signum(g0)) {
+                hi = s;
+                break;
+            }
+            lo = s;
+            glo = gs;
+            step *= 2;
+        }
+        if (Double.isNaN(hi) || glo == 0) {
+            return false;
+        }
+        double root = new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-13, 1e-12)
+                .solve(200, g, Math.min(lo, hi), Math.max(lo, hi));
+        for (int i = 0; i < n; i++) {
+            phi[i] += root;
+        }
+        return true;
     }
 
     /**

@@ -61,6 +61,12 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
                 maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
     }
 
+    /** @param v Newton tolerance (V) @return a copy */
+    public SolverOptions withNewtonTolerance(double v) {
+        return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+    }
+
     /** @param v Newton step budget per Poisson solve @return a copy */
     public SolverOptions withMaxNewtonIterations(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
