@@ -1,0 +1,377 @@
+package org.wurtzkit.reliability;
+
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.wurtzkit.reliability.BadInput.row;
+import static org.wurtzkit.units.Units.NM;
+
+import java.time.Duration;
+import java.util.function.Supplier;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.ParameterSet;
+import org.wurtzkit.material.ParameterSets;
+import org.wurtzkit.solvers.mesh.MeshPolicy;
+import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
+import org.wurtzkit.solvers.sp.BandAlignment;
+import org.wurtzkit.solvers.sp.HoleFermiLevel;
+import org.wurtzkit.solvers.sp.NotConvergedException;
+import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.SelfConsistentSolver;
+import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.solvers.sp.SolverOptions;
+import org.wurtzkit.structure.BottomBoundary;
+import org.wurtzkit.structure.DeepLevel;
+import org.wurtzkit.structure.DeltaDoping;
+import org.wurtzkit.structure.Dopant;
+import org.wurtzkit.structure.Layer;
+import org.wurtzkit.structure.Structure;
+import org.wurtzkit.structure.TopBoundary;
+
+/**
+ * Bad-input table of the solvers module (issue #7): solver options, mesh policy, quantum regions
+ * (including windows outside the stack), band alignment, the effective-mass Hamiltonian, and
+ * structures that only the solver can judge. Expected ranges are those of each entry point's
+ * Javadoc. A second table drives the solver with the extreme values that the documentation allows:
+ * each must converge or fail with the documented {@link NotConvergedException}, never anything
+ * else and never a hang.
+ */
+class SolverBadInputTest {
+    private static final ParameterSet SET = ParameterSets.defaultSet();
+    private static final double NAN = Double.NaN;
+    private static final double INF = Double.POSITIVE_INFINITY;
+    private static final SolverOptions D = SolverOptions.defaults();
+
+    private static Structure hemt() {
+        return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build();
+    }
+
+    private static SolverOptions newtonTolerance(double v) {
+        return new SolverOptions(D.tolerance(), D.maxIterations(), v, D.maxNewtonIterations(), D.maxNewtonStep(), D.mesh(),
+                D.quantumRegion(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel(), D.bandAlignment(),
+                D.strainShiftsBandEdges());
+    }
+
+    private static SolverOptions nulls(int which) {
+        return new SolverOptions(D.tolerance(), D.maxIterations(), D.newtonTolerance(), D.maxNewtonIterations(),
+                D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumRegion(), D.maxSubbands(),
+                D.subbandCutoffKT(), which == 2 ? null : D.holeFermiLevel(), which == 3 ? null : D.bandAlignment(),
+                D.strainShiftsBandEdges());
+    }
+
+    static Stream<Arguments> options() {
+        String tol = "tolerance (V)";
+        String tolr = "[1.0E-12, 0.01]";
+        String it = "maxIterations";
+        String nt = "newtonTolerance (V)";
+        String ntr = "[1.0E-14, 0.001]";
+        String step = "maxNewtonStep (V)";
+        String stepr = "[0.001, 10]";
+        String cut = "subbandCutoffKT";
+        return Stream.of(
+                row("tolerance NaN", () -> D.withTolerance(NAN), tol, NAN, tolr),
+                row("tolerance +inf", () -> D.withTolerance(INF), tol, INF, tolr),
+                row("tolerance -inf", () -> D.withTolerance(-INF), tol, -INF, tolr),
+                row("tolerance zero", () -> D.withTolerance(0), tol, 0.0, tolr),
+                row("tolerance negative", () -> D.withTolerance(-1e-6), tol, -1e-6, tolr),
+                row("tolerance below 1e-12", () -> D.withTolerance(1e-13), tol, 1e-13, tolr),
+                row("tolerance above 1e-2", () -> D.withTolerance(0.1), tol, 0.1, tolr),
+                row("no outer iterations", () -> D.withMaxIterations(0), it, "0", "[1, 10000]"),
+                row("negative outer iterations", () -> D.withMaxIterations(-5), it, "-5", "[1, 10000]"),
+                row("too many outer iterations", () -> D.withMaxIterations(10001), it, "10001", "[1, 10000]"),
+                row("Newton tolerance NaN", () -> newtonTolerance(NAN), nt, NAN, ntr),
+                row("Newton tolerance zero", () -> newtonTolerance(0), nt, 0.0, ntr),
+                row("Newton tolerance +inf", () -> newtonTolerance(INF), nt, INF, ntr),
+                row("Newton tolerance 1e-2", () -> newtonTolerance(1e-2), nt, 1e-2, ntr),
+                row("no Newton steps", () -> D.withMaxNewtonIterations(0), "maxNewtonIterations", "0", "[1, 100000]"),
+                row("too many Newton steps", () -> D.withMaxNewtonIterations(100001), "maxNewtonIterations", "100001",
+                        "[1, 100000]"),
+                row("Newton step NaN", () -> D.withMaxNewtonStep(NAN), step, NAN, stepr),
+                row("Newton step zero", () -> D.withMaxNewtonStep(0), step, 0.0, stepr),
+                row("Newton step negative", () -> D.withMaxNewtonStep(-0.5), step, -0.5, stepr),
+                row("Newton step +inf", () -> D.withMaxNewtonStep(INF), step, INF, stepr),
+                row("Newton step 11 V", () -> D.withMaxNewtonStep(11), step, 11.0, stepr),
+                row("no subbands", () -> D.withMaxSubbands(0), "maxSubbands", "0", "[1, 2000]"),
+                row("too many subbands", () -> D.withMaxSubbands(2001), "maxSubbands", "2001", "[1, 2000]"),
+                row("cut-off NaN", () -> D.withSubbandCutoffKT(NAN), cut, NAN, "[1, 200]"),
+                row("cut-off 0.5 kT", () -> D.withSubbandCutoffKT(0.5), cut, 0.5, "[1, 200]"),
+                row("cut-off +inf", () -> D.withSubbandCutoffKT(INF), cut, INF, "[1, 200]"),
+                row("cut-off 201 kT", () -> D.withSubbandCutoffKT(201), cut, 201.0, "[1, 200]"),
+                row("null mesh policy", () -> D.withMesh(null), "mesh policy", "null", "(non-null)"),
+                row("null quantum region", () -> D.withQuantumRegion(null), "quantum region", "null", "(non-null)"),
+                row("null hole Fermi level", () -> D.withHoleFermiLevel(null), "hole Fermi level", "null", "(non-null)"),
+                row("null band alignment", () -> D.withBandAlignment(null), "band alignment", "null", "(non-null)"),
+                row("null mesh policy (constructor)", () -> nulls(0), "mesh policy", "null", "(non-null)"),
+                row("null quantum region (constructor)", () -> nulls(1), "quantum region", "null", "(non-null)"),
+                row("null hole Fermi level (constructor)", () -> nulls(2), "hole Fermi level", "null", "(non-null)"),
+                row("null band alignment (constructor)", () -> nulls(3), "band alignment", "null", "(non-null)"),
+                row("conduction-band fraction NaN", () -> BandAlignment.conductionBandFraction(NAN),
+                        "conduction-band offset fraction", NAN, "[0, 1]"),
+                row("conduction-band fraction 1.1", () -> BandAlignment.conductionBandFraction(1.1),
+                        "conduction-band offset fraction", 1.1, "[0, 1]"),
+                row("conduction-band fraction negative", () -> BandAlignment.conductionBandFraction(-0.3),
+                        "conduction-band offset fraction", -0.3, "[0, 1]"),
+                row("null options", () -> new SelfConsistentSolver(null), "solver options", "null", "(non-null)"),
+                row("null structure", () -> new SelfConsistentSolver().solve(null), "structure", "null", "(non-null)"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("options")
+    void solverOptionsReject(BadInput.Case c) {
+        BadInput.check(c);
+    }
+
+    static Stream<Arguments> mesh() {
+        String h0 = "mesh interface spacing (m)";
+        String h0r = "[1.0E-12, 1.0E-6]";
+        String g = "mesh growth ratio";
+        String hm = "mesh maximum spacing (m)";
+        String f = "mesh refinement factor";
+        return Stream.of(
+                row("spacing NaN", () -> new MeshPolicy(NAN, 1.06, 5e-8), h0, NAN, h0r),
+                row("spacing zero", () -> new MeshPolicy(0, 1.06, 5e-8), h0, 0.0, h0r),
+                row("spacing negative", () -> new MeshPolicy(-1e-10, 1.06, 5e-8), h0, -1e-10, h0r),
+                row("spacing +inf", () -> new MeshPolicy(INF, 1.06, 5e-8), h0, INF, h0r),
+                row("spacing below 1 pm", () -> new MeshPolicy(1e-13, 1.06, 5e-8), h0, 1e-13, h0r),
+                row("spacing above 1 um", () -> new MeshPolicy(2e-6, 1.06, 5e-6), h0, 2e-6, h0r),
+                row("growth ratio 1", () -> new MeshPolicy(1e-10, 1, 5e-8), g, 1.0, "(1, 2]"),
+                row("growth ratio below 1", () -> new MeshPolicy(1e-10, 0.9, 5e-8), g, 0.9, "(1, 2]"),
+                row("growth ratio above 2", () -> new MeshPolicy(1e-10, 2.5, 5e-8), g, 2.5, "(1, 2]"),
+                row("growth ratio NaN", () -> new MeshPolicy(1e-10, NAN, 5e-8), g, NAN, "(1, 2]"),
+                row("growth ratio +inf", () -> new MeshPolicy(1e-10, INF, 5e-8), g, INF, "(1, 2]"),
+                row("max spacing below the interface spacing", () -> new MeshPolicy(1e-10, 1.06, 5e-11), hm, 5e-11,
+                        "[1.0E-10, 1.0E-5]"),
+                row("max spacing NaN", () -> new MeshPolicy(1e-10, 1.06, NAN), hm, NAN, "[1.0E-10, 1.0E-5]"),
+                row("max spacing above 10 um", () -> new MeshPolicy(1e-10, 1.06, 1e-4), hm, 1e-4, "[1.0E-10, 1.0E-5]"),
+                row("refinement below 1", () -> MeshPolicy.DEFAULT.refined(0.5), f, 0.5, "[1, 64]"),
+                row("refinement NaN", () -> MeshPolicy.DEFAULT.refined(NAN), f, NAN, "[1, 64]"),
+                row("refinement 100", () -> MeshPolicy.DEFAULT.refined(100), f, 100.0, "[1, 64]"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("mesh")
+    void meshPolicyRejects(BadInput.Case c) {
+        BadInput.check(c);
+    }
+
+    static Stream<Arguments> quantumRegions() {
+        String ext = "quantum window extension around an interface (m)";
+        String extr = "[1.0E-9, 1.0E-6]";
+        String top = "quantum window top depth (m)";
+        String bot = "quantum window bottom depth (m)";
+        double total = hemt().totalThickness();
+        double ten = 10 * NM;
+        double twenty = 20 * NM;
+        return Stream.of(
+                row("extension NaN", () -> new QuantumRegion.Automatic(NAN), ext, NAN, extr),
+                row("extension zero", () -> new QuantumRegion.Automatic(0), ext, 0.0, extr),
+                row("extension 0.5 nm", () -> new QuantumRegion.Automatic(0.5e-9), ext, 0.5e-9, extr),
+                row("extension 2 um", () -> new QuantumRegion.Automatic(2e-6), ext, 2e-6, extr),
+                row("window top negative", () -> new QuantumRegion.Window(-1e-9, 5e-9), top, -1e-9, "[0, +inf), finite"),
+                row("window top NaN", () -> new QuantumRegion.Window(NAN, 5e-9), top, NAN, "[0, +inf), finite"),
+                row("window bottom NaN", () -> new QuantumRegion.Window(0, NAN), bot, NAN, "(finite)"),
+                row("window bottom +inf", () -> new QuantumRegion.Window(0, INF), bot, INF, "(finite)"),
+                row("window thinner than 1 nm", () -> new QuantumRegion.Window(5e-9, 5.5e-9), bot, 5.5e-9,
+                        "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
+                row("window upside down", () -> new QuantumRegion.Window(5e-9, 4e-9), bot, 4e-9,
+                        "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
+                row("no windows", () -> QuantumRegion.windows(), "number of quantum windows", "0",
+                        "[1, ...) (use QuantumRegion.none())"),
+                row("overlapping windows", () -> QuantumRegion.windows(QuantumRegion.Window.nm(0, 20),
+                        QuantumRegion.Window.nm(10, 30)), "top of quantum window 1 (m)", ten,
+                        "[" + twenty + ", ...) (below the previous window, no overlap)"),
+                row("window reaching below the stack", () -> new SelfConsistentSolver(D.withQuantumRegion(
+                        QuantumRegion.windows(QuantumRegion.Window.nm(0, 1100)))).solve(hemt()), bot, 1100 * NM,
+                        "[" + 1e-9 + ", " + total + "] (inside the stack, whose thickness is " + total + " m)"),
+                row("window entirely below the stack", () -> new SelfConsistentSolver(D.withQuantumRegion(
+                        QuantumRegion.windows(QuantumRegion.Window.nm(5000, 5050)))).solve(hemt()), bot, 5050 * NM,
+                        "[" + (5000 * NM + 1e-9) + ", " + total + "] (inside the stack, whose thickness is " + total
+                                + " m)"),
+                row("window too thin for a coarse mesh", () -> new SelfConsistentSolver(D.withMesh(
+                        new MeshPolicy(1e-6, 2, 1e-5)).withQuantumRegion(QuantumRegion.windows(
+                                QuantumRegion.Window.nm(100, 101.5)))).solve(hemt()), "quantum window 0 node count", "3",
+                        "[5, ...) (window too thin for the mesh)"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("quantumRegions")
+    void quantumRegionRejects(BadInput.Case c) {
+        BadInput.check(c);
+    }
+
+    static Stream<Arguments> hamiltonian() {
+        double[] z = {0, 1e-10, 2e-10, 3e-10, 4e-10};
+        double[] m = {0.2, 0.2, 0.2, 0.2};
+        double[] v = new double[5];
+        return Stream.of(
+                row("mesh too short", () -> EffectiveMassHamiltonian.of(new double[] {0, 1e-10}, new double[] {0.2}),
+                        "meshMetres.length", "2", "[3, 2147483647] (at least one interior node)"),
+                row("mesh NaN", () -> EffectiveMassHamiltonian.of(new double[] {0, NAN, 2e-10}, new double[] {0.2, 0.2}),
+                        "meshMetres[1]", NAN, "(-Infinity, +Infinity) (finite values only)"),
+                row("mesh not increasing", () -> EffectiveMassHamiltonian.of(new double[] {0, 2e-10, 1e-10},
+                        new double[] {0.2, 0.2}), "meshMetres[2]", 1e-10, "(" + 2e-10
+                                + ", +Infinity): the mesh must be strictly increasing"),
+                row("mass zero", () -> EffectiveMassHamiltonian.of(z, new double[] {0.2, 0, 0.2, 0.2}), "massRatio[1]",
+                        0.0, "(0, +Infinity)"),
+                row("mass NaN", () -> EffectiveMassHamiltonian.of(z, new double[] {0.2, 0.2, NAN, 0.2}), "massRatio[2]",
+                        NAN, "(0, +Infinity)"),
+                row("mass +inf", () -> EffectiveMassHamiltonian.of(z, new double[] {INF, 0.2, 0.2, 0.2}), "massRatio[0]",
+                        INF, "(0, +Infinity)"),
+                row("mass count", () -> EffectiveMassHamiltonian.of(z, new double[] {0.2}), "massRatio.length", "1",
+                        "[4, 4] (one value per mesh interval)"),
+                row("potential NaN", () -> EffectiveMassHamiltonian.of(z, m).lowest(new double[] {0, 0, NAN, 0, 0}, 1),
+                        "potentialEv[2]", NAN, "(-Infinity, +Infinity) (finite values only)"),
+                row("potential -inf", () -> EffectiveMassHamiltonian.of(z, m).lowest(new double[] {0, -INF, 0, 0, 0}, 1),
+                        "potentialEv[1]", -INF, "(-Infinity, +Infinity) (finite values only)"),
+                row("no states asked", () -> EffectiveMassHamiltonian.of(z, m).lowest(v, 0), "k", "0", "[1, 3]"),
+                row("more states than nodes", () -> EffectiveMassHamiltonian.of(z, m).lowest(v, 4), "k", "4", "[1, 3]"),
+                row("bound NaN", () -> EffectiveMassHamiltonian.of(z, m).below(v, NAN, 2), "energyBoundEv", NAN,
+                        "[-Infinity, +Infinity] (not NaN)"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("hamiltonian")
+    void hamiltonianRejects(BadInput.Case c) {
+        BadInput.check(c);
+    }
+
+    static Stream<Arguments> initialGuesses() {
+        double[] z = {0, 500 * NM, 1025 * NM};
+        double[] v = {0, 0, 0};
+        SelfConsistentSolver solver = new SelfConsistentSolver();
+        return Stream.of(
+                row("guess depth NaN", () -> solver.solve(hemt(), new double[] {0, NAN, 1025 * NM}, v),
+                        "initial guess depth[1] (m)", NAN, "(finite)"),
+                row("guess potential +inf", () -> solver.solve(hemt(), z, new double[] {0, INF, 0}),
+                        "initial guess potential[1] (V)", INF, "(finite)"),
+                row("guess potential without depths", () -> solver.solve(hemt(), null, v), "initial guess",
+                        "null depths, 3 potentials", "both null, or arrays of equal length"),
+                row("guess of unequal lengths", () -> solver.solve(hemt(), z, new double[] {0, 0}), "initial guess",
+                        "3 depths, 2 potentials", "both null, or arrays of equal length"),
+                row("extrapolation ratio NaN", () -> SelfConsistentSolver.extrapolate(solver.solve(hemt()),
+                        solver.solve(hemt()), NAN), "extrapolation step ratio", NAN, "(finite)"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("initialGuesses")
+    void initialGuessRejects(BadInput.Case c) {
+        BadInput.check(c);
+    }
+
+    /**
+     * solve(structure, depth, potential) documents "depths of the guess (m), increasing"; a guess
+     * with fewer than two points, or with depths that do not increase, cannot be interpolated and
+     * must be rejected by name. (Found: an ArrayIndexOutOfBoundsException for fewer than two points;
+     * with a repeated depth the interpolation divides 0 by 0 and, on a free surface where no
+     * Dirichlet value overwrites it, the NaN start surfaces as "potentialEv[0] = NaN", an internal
+     * parameter of the Schroedinger solver; decreasing depths are silently accepted.)
+     */
+    static Stream<Arguments> uninterpolableGuesses() {
+        return Stream.of(
+                Arguments.of("empty guess", new double[0], new double[0]),
+                Arguments.of("one-point guess", new double[] {0}, new double[] {0.1}),
+                Arguments.of("repeated depth", new double[] {0, 0, 1025 * NM}, new double[] {0, 0.1, 0.2}),
+                Arguments.of("decreasing depths", new double[] {1025 * NM, 500 * NM, 0}, new double[] {0, 0.1, 0.2}));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("uninterpolableGuesses")
+    void uninterpolableInitialGuessIsRejectedByName(String label, double[] depth, double[] potential) {
+        Structure s = hemt().withTop(TopBoundary.freeSurface(1.65, 1e13));
+        InvalidParameterException e = assertThrows(InvalidParameterException.class,
+                () -> new SelfConsistentSolver().solve(s, depth, potential), label);
+        assertTrue(e.parameter().contains("initial guess"), e.getMessage());
+    }
+
+    @Test
+    void donorAndAcceptorSheetsAtOneDepthAreAStructuralError() {
+        Layer cap = Layer.of("cap", Composition.GAN, 10 * NM)
+                .withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02, 5 * NM))
+                .withDeltaDoping(new DeltaDoping(Dopant.Kind.ACCEPTOR, 1e16, 0.17, 5 * NM));
+        Structure s = hemt().toBuilder().grow(cap).build();
+        BadInput.checkKind(() -> new SelfConsistentSolver().solve(s), ErrorKind.INVALID_STRUCTURE,
+                "a donor and an acceptor delta sheet sit at the same depth");
+    }
+
+    /**
+     * DeepLevel documents "E_c - E_T ... must lie inside the gap of the host". A level 5 eV below
+     * E_c in GaN (gap about 3.4 eV) lies below the valence band: it must be rejected, naming the
+     * level's energy and the host's gap, not silently solved as a fixed charge.
+     */
+    @Test
+    void deepLevelOutsideTheHostGapIsRejected() {
+        Layer cap = Layer.of("cap", Composition.GAN, 5 * NM).withDeepLevel(DeepLevel.acceptorLikePerCm3(1e18, 5.0));
+        InvalidParameterException e = assertThrows(InvalidParameterException.class,
+                () -> new SelfConsistentSolver().solve(hemt().toBuilder().grow(cap).build()));
+        assertTrue(e.getMessage().contains("5.0") && e.getMessage().contains("deep level"), e.getMessage());
+    }
+
+    static Stream<Arguments> extremesAllowed() {
+        return Stream.of(
+                Arguments.of("1 K", (Supplier<Structure>) () -> hemt().withTemperature(1)),
+                Arguments.of("2000 K", (Supplier<Structure>) () -> hemt().withTemperature(2000)),
+                Arguments.of("gate -100 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1, -100))),
+                Arguments.of("gate +20 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1, 20))),
+                Arguments.of("barrier 0 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(0, 0))),
+                Arguments.of("barrier 6 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(6, 0))),
+                Arguments.of("surface donors 6 eV deep",
+                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurface(6, 1e13))),
+                Arguments.of("surface donors 1e16 cm^-2",
+                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurface(1.65, 1e16))),
+                Arguments.of("bottom E_c - E_F = -1 eV", (Supplier<Structure>) () -> hemt().toBuilder()
+                        .bottom(BottomBoundary.fixedFermiLevel(-1)).build()),
+                Arguments.of("bottom E_c - E_F = 7 eV", (Supplier<Structure>) () -> hemt().toBuilder()
+                        .bottom(BottomBoundary.fixedFermiLevel(7)).build()),
+                Arguments.of("1 mm buffer", (Supplier<Structure>) () -> Structure.builder(SET)
+                        .grow(Layer.of("buffer", Composition.GAN, Layer.MAX_THICKNESS))
+                        .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build()),
+                Arguments.of("1e22 cm^-3 donors", (Supplier<Structure>) () -> hemt().toBuilder()
+                        .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDopant(Dopant.donorsPerCm3(1e22, 0.02))).build()),
+                Arguments.of("1e22 cm^-3 acceptors", (Supplier<Structure>) () -> hemt().toBuilder()
+                        .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDopant(Dopant.acceptorsPerCm3(1e22, 0.17)))
+                        .build()),
+                Arguments.of("1e15 cm^-2 delta sheet", (Supplier<Structure>) () -> hemt().toBuilder()
+                        .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDeltaDoping(DeltaDoping.donorsPerCm2(1e15, 0.02,
+                                2 * NM))).build()),
+                Arguments.of("AlN 200 nm on GaN", (Supplier<Structure>) () -> Structure.builder(SET)
+                        .grow(Layer.of("buffer", Composition.GAN, 1000 * NM)).grow(Layer.of("b", Composition.ALN, 200 * NM))
+                        .top(TopBoundary.schottky(1, 0)).build()),
+                Arguments.of("InN 10 nm on GaN", (Supplier<Structure>) () -> Structure.builder(SET)
+                        .grow(Layer.of("buffer", Composition.GAN, 1000 * NM)).grow(Layer.of("b", Composition.INN, 10 * NM))
+                        .top(TopBoundary.schottky(1, 0)).build()),
+                Arguments.of("1 pm layer", (Supplier<Structure>) () -> hemt().toBuilder()
+                        .grow(Layer.of("c", Composition.alGaN(0.5), 1e-12)).build()),
+                Arguments.of("single 0.5 nm layer", (Supplier<Structure>) () -> Structure.builder(SET)
+                        .grow(Layer.of("b", Composition.GAN, 0.5 * NM)).top(TopBoundary.schottky(1, 0)).build()));
+    }
+
+    /** Every documented end point is either solved (with its invariants) or fails as documented. */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("extremesAllowed")
+    void extremeButAllowedInputsConvergeOrFailAsDocumented(String label, Supplier<Structure> structure) {
+        Structure s = structure.get();
+        SelfConsistentSolver solver = new SelfConsistentSolver();
+        try {
+            Solution sol = assertTimeoutPreemptively(Duration.ofSeconds(30), () -> solver.solve(s), label);
+            Invariants.check(s, sol, solver.options());
+        } catch (NotConvergedException e) {
+            Invariants.check(e, solver.options());
+        }
+    }
+
+    @Test
+    void theDocumentedHoleFermiLevelChoicesAreAccepted() {
+        for (HoleFermiLevel h : HoleFermiLevel.values()) {
+            SelfConsistentSolver solver = new SelfConsistentSolver(D.withHoleFermiLevel(h));
+            Invariants.check(hemt(), solver.solve(hemt()), solver.options());
+        }
+    }
+}
