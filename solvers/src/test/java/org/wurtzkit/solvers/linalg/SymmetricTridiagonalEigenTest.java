@@ -111,7 +111,9 @@ class SymmetricTridiagonalEigenTest {
         assertTrue(dense[18] - dense[17] < 1e-9 * dense[20], "second pair gap " + (dense[18] - dense[17]));
         EigenPairs p = solver.lowest(w[0], w[1], 21);
         double[] obs = DenseReference.assertLowestEigenpairs(a, dense, p);
-        assertTrue(obs[2] < 1e-13, "orthogonality " + obs[2]);
+        // vectors of eigenvalues more than CLUSTER_RELATIVE_GAP apart are not re-orthogonalised; inverse
+        // iteration leaves them orthogonal to about eps ||T|| / gap (Golub & Van Loan, sec. 8.2, from memory)
+        assertTrue(obs[2] < 1e-12, "orthogonality " + obs[2]);
         // Largest eigenvalue of W21+, 10.746194182903..., (Wilkinson 1965, from memory).
         assertEquals(10.746194182903, p.value(20), 1e-11);
     }
