@@ -52,7 +52,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * Gram-Schmidt sweeps over the well-separated subbands of a quantum well (whose spacing is
      * often below 1e-3 of a norm dominated by the kinetic term of a fine mesh).
      */
-    public static final double CLUSTER_RELATIVE_GAP = 1e-5;
+    public static final double CLUSTER_RELATIVE_GAP = 1e-4;
 
     private static final double EPS = Math.ulp(1.0);
     private static final double SAFE_MIN = Double.MIN_NORMAL;

@@ -95,8 +95,15 @@ final class ChargeModel {
                         double psi = qs.psi[w][k][i - a];
                         double eta = -qs.energy[w][k] * invVt + shift;
                         double g = qs.dos[w][k] * psi * psi;
-                        nq += g * FermiDirac.log1pExp(eta);
-                        dnq += g * FermiDirac.logistic(eta) * invVt;
+                        // ln(1 + e^eta) and its derivative 1/(1 + e^-eta) from one exponential
+                        double ex = Math.exp(-Math.abs(eta));
+                        if (eta > 0) {
+                            nq += g * (eta + Math.log1p(ex));
+                            dnq += g * invVt / (1 + ex);
+                        } else {
+                            nq += g * Math.log1p(ex);
+                            dnq += g * invVt * ex / (1 + ex);
+                        }
                     }
                 }
                 double box = d.box(i);
@@ -167,7 +174,7 @@ final class ChargeModel {
      * the subband part inside), holes, ionised donors (incl. empty donor-like traps) and ionised
      * acceptors (incl. filled acceptor-like traps).
      */
-    void densities(double[] phi, QuantumStates qs, double[] nOut, double[] pOut, double[] donorsOut,
+    void densities(double[] phi, double[] phiRef, QuantumStates qs, double[] nOut, double[] pOut, double[] donorsOut,
             double[] acceptorsOut) {
         int nn = d.n;
         for (int i = 0; i < nn; i++) {
@@ -206,9 +213,10 @@ final class ChargeModel {
                     if (i <= a || i >= d.windowEnd[w]) {
                         continue;
                     }
+                    double shift = (phi[i] - phiRef[i]) / d.vt;
                     for (int k = 0; k < qs.count[w]; k++) {
                         double psi = qs.psi[w][k][i - a];
-                        nq += qs.dos[w][k] * psi * psi * FermiDirac.log1pExp(-qs.energy[w][k] / d.vt);
+                        nq += qs.dos[w][k] * psi * psi * FermiDirac.log1pExp(-qs.energy[w][k] / d.vt + shift);
                     }
                 }
                 nOut[i] += nq;

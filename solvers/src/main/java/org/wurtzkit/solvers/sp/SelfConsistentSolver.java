@@ -134,7 +134,7 @@ public final class SelfConsistentSolver {
         if (nw == 0) {
             ConvergenceRecord rec = new ConvergenceRecord(true, 0, newtonCount[0], new double[0],
                     "classical solve converged");
-            return new Solution(d, phi, null, charges, rec);
+            return new Solution(d, phi, null, null, charges, rec);
         }
         QuantumStates qs = new QuantumStates(d);
         double[] ref = new double[d.n];
@@ -164,12 +164,13 @@ public final class SelfConsistentSolver {
                 }
             }
             if (delta < options.tolerance()) {
-                qs.update(d, phi);
+                // the subbands of the last iteration, with the predictor's first-order shift to phi,
+                // are the converged density: no further Schroedinger solve is needed
                 ConvergenceRecord rec = new ConvergenceRecord(true, it + 1, newtonCount[0],
                         Arrays.copyOf(history, it + 1), String.format(Locale.ROOT,
                                 "converged: max |delta phi| = %.3g V < %.3g V after %d iterations", delta,
                                 options.tolerance(), it + 1));
-                return new Solution(d, phi, qs, charges, rec);
+                return new Solution(d, phi, ref, qs, charges, rec);
             }
         }
         int m = options.maxIterations();

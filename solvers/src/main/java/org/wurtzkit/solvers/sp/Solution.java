@@ -43,7 +43,7 @@ public final class Solution {
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
 
-    Solution(Device d, double[] phi, QuantumStates qs, ChargeModel charges, ConvergenceRecord record) {
+    Solution(Device d, double[] phi, double[] ref, QuantumStates qs, ChargeModel charges, ConvergenceRecord record) {
         int nn = d.n;
         this.structure = d.structure;
         this.record = record;
@@ -62,10 +62,10 @@ public final class Solution {
         p = new double[nn];
         donors = new double[nn];
         acceptors = new double[nn];
-        charges.densities(phi, qs, n, p, donors, acceptors);
+        charges.densities(phi, ref, qs, n, p, donors, acceptors);
         double[] q = new double[nn];
         double[] dq = new double[nn];
-        charges.evaluate(phi, phi, qs, q, dq);
+        charges.evaluate(phi, ref, qs, q, dq);
         charge = new double[nn];
         double eSheet = 0;
         double hSheet = 0;
@@ -133,7 +133,13 @@ public final class Solution {
             for (int k = 0; k < qs.count[w]; k++) {
                 double[] full = new double[nn];
                 System.arraycopy(qs.psi[w][k], 0, full, a, qs.psi[w][k].length);
-                double occ = qs.dos[w][k] * FermiDirac.log1pExp(-qs.energy[w][k] / d.vt);
+                // occupation with the same first-order shift (phi - ref) as the density of Poisson
+                double occ = 0;
+                for (int i = a + 1; i < d.windowEnd[w]; i++) {
+                    double psi = qs.psi[w][k][i - a];
+                    double eta = (-qs.energy[w][k] + (phi[i] - ref[i])) / d.vt;
+                    occ += qs.dos[w][k] * FermiDirac.log1pExp(eta) * psi * psi * d.box(i);
+                }
                 wellSheetDensity[w] += occ;
                 bands.add(new Subband(w, k, qs.energy[w][k], full, occ, qs.massXY[w][k]));
             }
