@@ -257,7 +257,35 @@ class SolverBadInputTest {
                 row("guess of unequal lengths", () -> solver.solve(hemt(), z, new double[] {0, 0}), "initial guess",
                         "3 depths, 2 potentials", "both null, or arrays of equal length"),
                 row("extrapolation ratio NaN", () -> SelfConsistentSolver.extrapolate(solver.solve(hemt()),
-                        solver.solve(hemt()), NAN), "extrapolation step ratio", NAN, "(finite)"));
+                        solver.solve(hemt()), NAN), "extrapolation step ratio", NAN, "(finite)"),
+                row("extrapolation through no solution", () -> SelfConsistentSolver.extrapolate(new double[0],
+                        new Solution[0], 0.0), "extrapolation points", "0 solutions, 0 parameters",
+                        "1 to 4 solutions with one parameter each"),
+                row("extrapolation with a parameter missing", () -> SelfConsistentSolver.extrapolate(
+                        new double[] {0.0}, new Solution[] {solved(), solved()}, -0.1), "extrapolation points",
+                        "2 solutions, 1 parameters", "1 to 4 solutions with one parameter each"),
+                row("extrapolation through five solutions", () -> SelfConsistentSolver.extrapolate(
+                        new double[] {0, 1, 2, 3, 4}, new Solution[] {solved(), solved(), solved(), solved(), solved()},
+                        5.0), "extrapolation points", "5 solutions, 5 parameters",
+                        "1 to 4 solutions with one parameter each"),
+                row("extrapolation target NaN", () -> SelfConsistentSolver.extrapolate(new double[] {0.0, -0.1},
+                        new Solution[] {solved(), solved()}, NAN), "extrapolation target parameter", NAN, "(finite)"),
+                row("extrapolation parameter infinite", () -> SelfConsistentSolver.extrapolate(
+                        new double[] {0.0, INF}, new Solution[] {solved(), solved()}, -0.1),
+                        "extrapolation parameter 1", INF, "(finite)"),
+                row("extrapolation parameter repeated", () -> SelfConsistentSolver.extrapolate(
+                        new double[] {-0.1, -0.1}, new Solution[] {solved(), solved()}, -0.2),
+                        "extrapolation parameter 1", -0.1, "distinct from the other parameters"));
+    }
+
+    private static Solution solvedOnce;
+
+    /** One converged solution of the reference stack, shared by the extrapolation rows. */
+    private static synchronized Solution solved() {
+        if (solvedOnce == null) {
+            solvedOnce = new SelfConsistentSolver().solve(hemt());
+        }
+        return solvedOnce;
     }
 
     @ParameterizedTest(name = "{0}")
