@@ -37,7 +37,7 @@ import org.wurtzkit.structure.TopBoundary;
  *
  * <pre>
  *   java -cp benchmarks/target/benchmarks.jar org.wurtzkit.benchmarks.RatioReport           # short pass, under 3 min
- *   java -cp benchmarks/target/benchmarks.jar org.wurtzkit.benchmarks.RatioReport --full    # full run, about 85 min
+ *   java -cp benchmarks/target/benchmarks.jar org.wurtzkit.benchmarks.RatioReport --full    # full run, about 55 min
  * </pre>
  *
  * Options: {@code --full}, {@code --verbose} (JMH's own output), {@code --out FILE} (also write
@@ -122,10 +122,15 @@ public final class RatioReport {
         return jobs;
     }
 
+    /**
+     * The full run, about 55 minutes: 5 forks for the solver-level benchmarks (whose compiled code
+     * varies most from one JVM to the next), 3 for the kernels, single shots where one operation
+     * takes seconds (Commons Math at N = 4000 takes about 7.5 minutes alone).
+     */
     private static List<Job> fullRun() {
         List<Job> jobs = new ArrayList<>();
         jobs.add(new Job("EigenBenchmark\\.(tridiagonal|tridiagonalAllocating|hamiltonian)$", "n", ALL_N,
-                Mode.AverageTime, 5, 5, S1, 10, S1, false));
+                Mode.AverageTime, 3, 3, S1, 6, S1, false));
         jobs.add(new Job("EigenBenchmark\\.ejmlDense$", "n", new String[] {"500", "1000"}, Mode.AverageTime, 3, 3, S2, 5,
                 S2, false));
         jobs.add(new Job("EigenBenchmark\\.ejmlDense$", "n", new String[] {"2000"}, Mode.SingleShotTime, 3, 1, null, 3,
@@ -136,13 +141,13 @@ public final class RatioReport {
                 null, false));
         jobs.add(new Job("EigenBenchmark\\.commonsMath$", "n", new String[] {"4000"}, Mode.SingleShotTime, 1, 0, null, 1,
                 null, false));
-        jobs.add(new Job("NewtonStepBenchmark\\.(thomasSolve|baselineMatVec)$", "n", ALL_N, Mode.AverageTime, 5, 5, S1,
-                10, S1, false));
-        jobs.add(new Job("NewtonStepBenchmark\\.classicalSolve$", "n", ALL_N, Mode.AverageTime, 5, 10, S1, 10, S1,
+        jobs.add(new Job("NewtonStepBenchmark\\.(thomasSolve|baselineMatVec)$", "n", ALL_N, Mode.AverageTime, 3, 3, S1,
+                6, S1, false));
+        jobs.add(new Job("NewtonStepBenchmark\\.classicalSolve$", "n", ALL_N, Mode.AverageTime, 3, 8, S1, 8, S1,
                 false));
         jobs.add(new Job("ColdSolveBenchmark\\.", null, null, Mode.AverageTime, 5, 10, S1, 10, S1, true));
-        jobs.add(new Job("SweepBenchmark\\.", null, null, Mode.AverageTime, 5, 6, S2, 8, S2, false));
-        jobs.add(new Job("DesignMapBenchmark\\.", "threads", new String[] {"1", "2"}, Mode.AverageTime, 5, 5, S2, 8, S2,
+        jobs.add(new Job("SweepBenchmark\\.", null, null, Mode.AverageTime, 5, 4, S2, 6, S2, false));
+        jobs.add(new Job("DesignMapBenchmark\\.", "threads", new String[] {"1", "2"}, Mode.AverageTime, 5, 4, S2, 6, S2,
                 false));
         return jobs;
     }
