@@ -61,7 +61,7 @@ public class NewtonStepBenchmark {
         @Setup(Level.Trial)
         public void setUp() {
             double h = 2e-6 / (n - 1);
-            double c = 9.5 * 8.8541878128e-12 / h;
+            double c = 9.5 * org.wurtzkit.units.Constants.VACUUM_PERMITTIVITY / h;
             sub = new double[n - 1];
             sup = new double[n - 1];
             diag = new double[n];

@@ -37,7 +37,7 @@ import org.wurtzkit.structure.TopBoundary;
  *
  * <pre>
  *   java -cp benchmarks/target/benchmarks.jar org.wurtzkit.benchmarks.RatioReport           # short pass, under 3 min
- *   java -cp benchmarks/target/benchmarks.jar org.wurtzkit.benchmarks.RatioReport --full    # full run, about 55 min
+ *   java -cp benchmarks/target/benchmarks.jar org.wurtzkit.benchmarks.RatioReport --full    # full run, about an hour
  * </pre>
  *
  * Options: {@code --full}, {@code --verbose} (JMH's own output), {@code --out FILE} (also write
@@ -123,9 +123,10 @@ public final class RatioReport {
     }
 
     /**
-     * The full run, about 55 minutes: 5 forks for the solver-level benchmarks (whose compiled code
-     * varies most from one JVM to the next), 3 for the kernels, single shots where one operation
-     * takes seconds (Commons Math at N = 4000 takes about 7.5 minutes alone).
+     * The full run, 62.5 minutes on the machine of benchmarks/README.md: 5 forks for the
+     * solver-level benchmarks (whose compiled code varies most from one JVM to the next), 3 for the
+     * kernels, single shots where one operation takes seconds (Commons Math at N = 4000 took 16
+     * minutes of it).
      */
     private static List<Job> fullRun() {
         List<Job> jobs = new ArrayList<>();

@@ -7,6 +7,7 @@ import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.units.Constants;
 
 /**
  * The inputs every benchmark shares: the reference HEMT stack fixed by issue #6, an invented
@@ -71,9 +72,9 @@ public final class Scenarios {
      * the same mesh, masses and potential, written out so that the baselines get the same numbers.
      */
     public static final class ChannelWell {
-        /** hbar^2/(2 m0 e) in eV m^2 (CODATA 2018 values of hbar, m0 and e). */
-        private static final double KINETIC_EV_M2 = 1.054571817e-34 * 1.054571817e-34
-                / (2.0 * 9.1093837015e-31 * 1.602176634e-19);
+        /** hbar^2/(2 m0 e) in eV m^2, from the library's constants (as EffectiveMassHamiltonian uses). */
+        private static final double KINETIC_EV_M2 = Constants.HBAR * Constants.HBAR
+                / (2.0 * Constants.ELECTRON_MASS * Constants.ELEMENTARY_CHARGE);
         private static final double LENGTH = 60 * NM;
         private static final double BARRIER = 5 * NM;
 

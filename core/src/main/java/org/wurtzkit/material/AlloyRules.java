@@ -72,9 +72,6 @@ public final class AlloyRules {
                 sources.clear();
                 rule = bowingRule(sources, x, y, z, bow.polarizationAlGaN(), bow.polarizationInGaN(),
                         bow.polarizationInAlN(), "C/m^2", "nonlinear spontaneous polarization, bowing");
-                if (sources.isEmpty()) {
-                    sources.add(bow.polarizationAlGaN().source());
-                }
             }
             b.set(p, v, new Provenance(rule, dedupe(sources)));
         }
@@ -91,17 +88,18 @@ public final class AlloyRules {
             Bowing inAl, String unit, String label) {
         StringBuilder sb = new StringBuilder(label);
         String sep = " ";
-        if (x * z > 0) {
+        // pairs of present elements (not products, which could underflow): an alloy has at least one
+        if (x > 0 && z > 0) {
             sb.append(sep).append(String.format(Locale.ROOT, "b(AlGaN) = %g %s", alGa.value(), unit));
             sources.add(alGa.source());
             sep = ", ";
         }
-        if (y * z > 0) {
+        if (y > 0 && z > 0) {
             sb.append(sep).append(String.format(Locale.ROOT, "b(InGaN) = %g %s", inGa.value(), unit));
             sources.add(inGa.source());
             sep = ", ";
         }
-        if (x * y > 0) {
+        if (x > 0 && y > 0) {
             sb.append(sep).append(String.format(Locale.ROOT, "b(InAlN) = %g %s", inAl.value(), unit));
             sources.add(inAl.source());
         }

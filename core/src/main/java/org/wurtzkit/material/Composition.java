@@ -28,6 +28,9 @@ public record Composition(double aluminium, double indium) {
             throw new InvalidParameterException("Al + In fraction x + y", Double.toString(aluminium + indium),
                     "[0, 1] (x = " + aluminium + ", y = " + indium + ")");
         }
+        // -0.0 passes the range check; make it +0.0 so that, e.g., alGaN(-0.0) equals GAN
+        aluminium += 0.0;
+        indium += 0.0;
     }
 
     private static void check(String name, double v) {

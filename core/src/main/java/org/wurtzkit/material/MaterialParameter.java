@@ -1,5 +1,7 @@
 package org.wurtzkit.material;
 
+import org.wurtzkit.units.Units;
+
 /**
  * Every scalar parameter of a wurtzite material, with its SI unit, the unit used in parameter-set
  * files, and the factor that converts the file unit to SI.
@@ -10,19 +12,19 @@ package org.wurtzkit.material;
  */
 public enum MaterialParameter {
     /** In-plane lattice constant a. */
-    LATTICE_A("a", "m", "Angstrom", 1e-10),
+    LATTICE_A("a", "m", "Angstrom", Units.ANGSTROM),
     /** Lattice constant c along the c axis. */
-    LATTICE_C("c", "m", "Angstrom", 1e-10),
+    LATTICE_C("c", "m", "Angstrom", Units.ANGSTROM),
     /** Elastic stiffness C11. */
-    C11("C11", "Pa", "GPa", 1e9),
+    C11("C11", "Pa", "GPa", Units.GPA),
     /** Elastic stiffness C12. */
-    C12("C12", "Pa", "GPa", 1e9),
+    C12("C12", "Pa", "GPa", Units.GPA),
     /** Elastic stiffness C13. */
-    C13("C13", "Pa", "GPa", 1e9),
+    C13("C13", "Pa", "GPa", Units.GPA),
     /** Elastic stiffness C33. */
-    C33("C33", "Pa", "GPa", 1e9),
+    C33("C33", "Pa", "GPa", Units.GPA),
     /** Elastic stiffness C44. */
-    C44("C44", "Pa", "GPa", 1e9),
+    C44("C44", "Pa", "GPa", Units.GPA),
     /** Piezoelectric constant e31. */
     E31("e31", "C/m^2", "C/m^2", 1),
     /** Piezoelectric constant e33. */

@@ -1,6 +1,5 @@
 package org.wurtzkit.strain;
 
-import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.WurtziteMaterial;
 
 /**

@@ -31,7 +31,7 @@ public record DeepLevel(Kind kind, double densityPerM3, double energyBelowConduc
     /**
      * @param densityPerCm3     density (cm^-3)
      * @param energyBelowEcEv   E_c - E_T (eV)
-     * @return an acceptor-like level (e.g. C_N in GaN, about E_v + 0.9 eV)
+     * @return an acceptor-like level (e.g. C_N in GaN, about E_v + 0.9 eV; from memory, no source)
      */
     public static DeepLevel acceptorLikePerCm3(double densityPerCm3, double energyBelowEcEv) {
         return new DeepLevel(Kind.ACCEPTOR_LIKE, Units.perCm3ToPerM3(densityPerCm3), energyBelowEcEv);

@@ -33,8 +33,8 @@ public record DeltaDoping(Dopant.Kind kind, double sheetDensityPerM2, double ion
                 offsetFromLayerTop);
     }
 
-    /** @return the degeneracy factor: 2 for donors, 4 for acceptors */
+    /** @return the degeneracy factor: {@link Dopant#DONOR_DEGENERACY} or {@link Dopant#ACCEPTOR_DEGENERACY} */
     public double degeneracy() {
-        return kind == Dopant.Kind.DONOR ? 2 : 4;
+        return kind == Dopant.Kind.DONOR ? Dopant.DONOR_DEGENERACY : Dopant.ACCEPTOR_DEGENERACY;
     }
 }

@@ -33,26 +33,34 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
         Require.positive("dopant degeneracy factor", degeneracy);
     }
 
+    /** Donor ground-state degeneracy g_D = 2 (spin; Sze &amp; Ng, Physics of Semiconductor Devices, 3rd ed., 2007, ch. 1). */
+    public static final double DONOR_DEGENERACY = 2.0;
     /**
-     * Donors with degeneracy factor 2 (Sze &amp; Ng, Physics of Semiconductor Devices, 3rd ed., 2007).
+     * Acceptor ground-state degeneracy g_A = 4 (spin times the two degenerate valence bands at k = 0
+     * of cubic semiconductors; Sze &amp; Ng 2007, ch. 1).
+     */
+    public static final double ACCEPTOR_DEGENERACY = 4.0;
+
+    /**
+     * Donors with degeneracy factor {@link #DONOR_DEGENERACY}.
      *
      * @param densityPerCm3      donor density (cm^-3)
-     * @param ionizationEnergyEv E_c - E_D (eV); Si in GaN: about 0.015-0.030 eV
+     * @param ionizationEnergyEv E_c - E_D (eV); Si in GaN: about 0.015-0.030 eV (from memory, no source)
      * @return the dopant
      */
     public static Dopant donorsPerCm3(double densityPerCm3, double ionizationEnergyEv) {
-        return new Dopant(Kind.DONOR, Units.perCm3ToPerM3(densityPerCm3), ionizationEnergyEv, 2);
+        return new Dopant(Kind.DONOR, Units.perCm3ToPerM3(densityPerCm3), ionizationEnergyEv, DONOR_DEGENERACY);
     }
 
     /**
-     * Acceptors with degeneracy factor 4 (Sze &amp; Ng 2007).
+     * Acceptors with degeneracy factor {@link #ACCEPTOR_DEGENERACY}.
      *
      * @param densityPerCm3      acceptor density (cm^-3)
-     * @param ionizationEnergyEv E_A - E_v (eV); Mg in GaN: about 0.17 eV
+     * @param ionizationEnergyEv E_A - E_v (eV); Mg in GaN: about 0.17 eV (from memory, no source)
      * @return the dopant
      */
     public static Dopant acceptorsPerCm3(double densityPerCm3, double ionizationEnergyEv) {
-        return new Dopant(Kind.ACCEPTOR, Units.perCm3ToPerM3(densityPerCm3), ionizationEnergyEv, 4);
+        return new Dopant(Kind.ACCEPTOR, Units.perCm3ToPerM3(densityPerCm3), ionizationEnergyEv, ACCEPTOR_DEGENERACY);
     }
 
     /** @return density (cm^-3) */

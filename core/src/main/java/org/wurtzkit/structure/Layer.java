@@ -114,6 +114,6 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
 
     /** @return thickness (nm) */
     public double thicknessNm() {
-        return thickness / org.wurtzkit.units.Units.NM;
+        return org.wurtzkit.units.Units.mToNm(thickness);
     }
 }

@@ -14,6 +14,10 @@ public final class Units {
     public static final double ANGSTROM = 1e-10;
     /** Pascal per gigapascal. */
     public static final double GPA = 1e9;
+    /** Volts per metre in one MV/cm (field). */
+    public static final double MV_PER_CM = 1e8;
+    /** Farads per square metre in one uF/cm^2 (capacitance per area). */
+    public static final double UF_PER_CM2 = 1e-2;
 
     /** @param nm length (nm) @return length (m) */
     public static double nmToM(double nm) {

@@ -114,7 +114,7 @@ public final class BandDiagramExample {
         }
         summary.add("  electrons in the whole stack " + String.format(java.util.Locale.ROOT, "%.4e cm^-2",
                 Units.perM2ToPerCm2(s.electronSheetDensity())) + "; field in the barrier "
-                + Charts.fixed(meanField(s, layer(wafer, "barrier")) / 1e8, 3) + " MV/cm (along the depth)");
+                + Charts.fixed(meanField(s, layer(wafer, "barrier")) / Units.MV_PER_CM, 3) + " MV/cm (along the depth)");
         summary.add("  model estimate: confirm by measurement");
         return new Result(s, ns, drawn.size(), List.copyOf(files), List.copyOf(summary));
     }

@@ -19,6 +19,7 @@ import org.wurtzkit.solvers.workflow.Quantity;
 import org.wurtzkit.solvers.workflow.StructureFamilies;
 import org.wurtzkit.solvers.workflow.StructureFamily;
 import org.wurtzkit.structure.LayerState;
+import org.wurtzkit.units.Units;
 
 /**
  * Example 3: the cap-layer trade-off of the invented wafer {@value DemoLab#WAFER}: how the 2DEG
@@ -34,8 +35,6 @@ import org.wurtzkit.structure.LayerState;
 public final class CapTradeoffExample {
     static final int WIDTH = 1200;
     static final int HEIGHT = 760;
-    /** 1 MV/cm in V/m. */
-    private static final double MV_PER_CM = 1e8;
 
     private CapTradeoffExample() {
     }
@@ -78,7 +77,7 @@ public final class CapTradeoffExample {
      * it points toward the surface, as in a metal-face barrier above a 2DEG.
      */
     static final Quantity BARRIER_FIELD = Quantity.of("barrier_field_along_depth", "MV/cm",
-            s -> barrierField(s) / MV_PER_CM);
+            s -> barrierField(s) / Units.MV_PER_CM);
 
     private static double barrierField(Solution s) {
         LayerState barrier = BandDiagramExample.layer(s.structure(), "barrier");

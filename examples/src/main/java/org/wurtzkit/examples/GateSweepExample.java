@@ -17,6 +17,7 @@ import org.wurtzkit.solvers.workflow.Column;
 import org.wurtzkit.solvers.workflow.PointFailure;
 import org.wurtzkit.solvers.workflow.ThresholdDefinition;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Units;
 
 /**
  * Example 4: the gate sweep of the invented wafer {@value DemoLab#WAFER}: n_s against the gate
@@ -39,8 +40,6 @@ public final class GateSweepExample {
     static final double LEVEL_PER_CM2 = 1e11;
     /** How far the sweep reaches below the analytic threshold (V). */
     private static final double BELOW_THRESHOLD_V = 1.5;
-    /** F/m^2 to uF/cm^2. */
-    private static final double UF_PER_CM2 = 100;
 
     private GateSweepExample() {
     }
@@ -152,7 +151,7 @@ public final class GateSweepExample {
                 + " %+.3f V (analytic model)", vthLinear, vthLevel, LEVEL_PER_CM2, vthModel));
         double[] c = r.capacitanceVoltage().capacitanceMicroFaradPerCm2();
         summary.add(String.format(Locale.ROOT, "  C at the top of the sweep %.4f uF/cm^2; series capacitance of the layers above the"
-                + " channel %.4f uF/cm^2", c[0], model.gateCapacitance() * UF_PER_CM2));
+                + " channel %.4f uF/cm^2", c[0], model.gateCapacitance() / Units.UF_PER_CM2));
         summary.add("  model estimates: confirm by measurement");
         return new Result(r, vthLinear, vthLevel, vthModel, slope, tangentZero, List.copyOf(files),
                 List.copyOf(summary));
@@ -202,7 +201,7 @@ public final class GateSweepExample {
         double[] v = cv.midpointBiasV();
         double[] cap = cv.capacitanceMicroFaradPerCm2();
         reverseIfDescending(v, cap);
-        double series = model.gateCapacitance() * UF_PER_CM2;
+        double series = model.gateCapacitance() / Units.UF_PER_CM2;
         double top = BandDiagramExample.niceCeiling(1.3 * Math.max(BandDiagramExample.max(cap), series));
         c.getStyler().setYAxisDecimalPattern("0.00");
         c.getStyler().setYAxisMin(0.0);

@@ -3,7 +3,6 @@ package org.wurtzkit.examples;
 import java.awt.Color;
 import java.awt.Font;
 import java.util.List;
-import java.util.Locale;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 
@@ -89,7 +88,7 @@ final class MapPlot {
         }
 
         String label(int band, int decimals) {
-            return format(edges[band], decimals) + " \u2013 " + format(edges[band + 1], decimals);
+            return Charts.fixed(edges[band], decimals) + " \u2013 " + Charts.fixed(edges[band + 1], decimals);
         }
 
         /** @return decimals needed to print the levels exactly enough */
@@ -101,10 +100,6 @@ final class MapPlot {
             }
             return d;
         }
-    }
-
-    static String format(double v, int decimals) {
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }
 
     /**
@@ -161,7 +156,7 @@ final class MapPlot {
                 if (line.size() < 2) {
                     continue;
                 }
-                String name = legend ? "contours, step " + format(levels.step(), dec) + contourUnit
+                String name = legend ? "contours, step " + Charts.fixed(levels.step(), dec) + contourUnit
                         : "contour " + (count++);
                 XYSeries s = Charts.line(c, name, line.x(), line.y(), Charts.INK, Charts.THIN);
                 s.setShowInLegend(legend);
@@ -171,7 +166,7 @@ final class MapPlot {
                 }
             }
             if (longest != null && longest.length(xSpan, ySpan) > 0.12) {
-                labels.add(new ContourLabel(longest.x(), longest.y(), format(level, dec)));
+                labels.add(new ContourLabel(longest.x(), longest.y(), Charts.fixed(level, dec)));
             }
         }
         return labels;

@@ -131,7 +131,7 @@ public final class ParameterSpreadExample {
         for (int i = 0; i < xs.length; i++) {
             SpreadResult s = spreads.get(i);
             for (SpreadResult.Member m : s.members()) {
-                members.row(xs[i], m.parameterSet(), m.sheetDensityPerCm2(), m.thresholdVoltage(),
+                members.row(xs[i], DemoLabParameterSets.label(m.parameterSet()), m.sheetDensityPerCm2(), m.thresholdVoltage(),
                         m.succeeded() ? "ok" : "failed: " + m.failure());
             }
             SpreadResult.Statistics n = s.sheetDensityPerCm2();

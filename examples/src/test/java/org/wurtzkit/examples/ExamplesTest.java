@@ -173,9 +173,16 @@ class ExamplesTest {
         for (SpreadResult spread : r.spreads()) {
             assertTrue(spread.failures().isEmpty(), () -> "failed members: " + spread.failures());
             SpreadResult.Statistics n = spread.sheetDensityPerCm2();
-            assertTrue(n.min() <= n.median() && n.median() <= n.max());
+            double[] values = spread.members().stream().mapToDouble(SpreadResult.Member::sheetDensityPerCm2).toArray();
+            assertEquals(java.util.Arrays.stream(values).min().orElseThrow(), n.min(), 0.0, "min over the members");
+            assertEquals(java.util.Arrays.stream(values).max().orElseThrow(), n.max(), 0.0, "max over the members");
             assertTrue(n.range() > 0, "published parameter sets disagree");
         }
+        // the invented set is labelled as such wherever it is written out
+        assertTrue(members.stream().anyMatch(m -> m.get("parameter_set").equals(DemoLabParameterSets.NAME + " (invented)")),
+                "invented set labelled in parameter-spread.csv");
+        assertTrue(members.stream().noneMatch(m -> m.get("parameter_set").equals(DemoLabParameterSets.NAME)),
+                "no unlabelled invented set in parameter-spread.csv");
         assertTrue(log().contains("parameter-set spread"), "progress shown:\n" + log());
     }
 }

@@ -182,7 +182,7 @@ public final class JsonParameterSetReader {
     }
 
     /** One value entry: file value, sources, rule, note. */
-    private record Entry(double fileValue, List<Source> sources, String rule, String note, int line) {
+    private record Entry(double fileValue, List<Source> sources, String rule, int line) {
     }
 
     /** Checks the tree against the schema; every failure names set, file, key and line. */
@@ -409,7 +409,7 @@ public final class JsonParameterSetReader {
             if (!noteText.isEmpty()) {
                 notes.put(path, noteText);
             }
-            return new Entry(num.value(), List.copyOf(cited), ruleText, noteText, num.line());
+            return new Entry(num.value(), List.copyOf(cited), ruleText, num.line());
         }
 
         private void addSource(List<Source> out, JsonTree.Node n, String path) {

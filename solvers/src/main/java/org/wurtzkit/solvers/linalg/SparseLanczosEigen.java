@@ -61,7 +61,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private final double relativeTolerance;
     private final int maxKrylovDimension;
     private final SymmetricTridiagonalEigen small = new SymmetricTridiagonalEigen();
-    private long rng;
+    private final SplitMix64 rng = new SplitMix64();
 
     /**
      * Creates a solver with {@link #DEFAULT_RELATIVE_TOLERANCE} and an automatic Krylov
@@ -212,7 +212,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
         double[][] ritzVectors = new double[k][n];
         double[] ritzLambda = new double[k];
 
-        rng = SEED;
+        rng.reset(SEED);
         basis[0] = new double[n];
         randomUnit(basis[0], n, basis, 0);
         int minSteps = Math.min(cap, Math.max(k, Math.min(n, 2 * k + 10)));
@@ -388,7 +388,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private void randomUnit(double[] v, int n, double[][] basis, int count) {
         for (int attempt = 0; attempt < 10; attempt++) {
             for (int i = 0; i < n; i++) {
-                v[i] = nextSigned();
+                v[i] = rng.nextSigned();
             }
             for (int pass = 0; pass < 2; pass++) {
                 for (int b = 0; b < count; b++) {
@@ -406,16 +406,6 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
         }
         throw new ArithmeticException("could not extend the Lanczos basis of " + count
                 + " vectors in dimension " + n);
-    }
-
-    /** SplitMix64 uniform number in (-1, 1) (Steele, Lea, Flood, OOPSLA 2014 [from memory]). */
-    private double nextSigned() {
-        long z = (rng += 0x9E3779B97F4A7C15L);
-        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
-        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
-        z = z ^ (z >>> 31);
-        double u = (z >>> 11) * 0x1.0p-53;
-        return 2.0 * u - 1.0 + 0x1.0p-53;
     }
 
     private static double dot(double[] a, double[] b, int n) {

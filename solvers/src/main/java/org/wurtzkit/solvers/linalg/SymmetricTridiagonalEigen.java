@@ -90,7 +90,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     private double gl;
     private double gu;
     private double lastPivotMagnitude;
-    private long rng;
+    private final SplitMix64 rng = new SplitMix64();
 
     /** Creates a solver with empty work space (it grows on first use). */
     public SymmetricTridiagonalEigen() {
@@ -430,14 +430,11 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     // ------------------------------------------------------------------ bisection
 
     /**
-     * Bisection for the m lowest eigenvalues below hiInit (scaled), into scaledValues. All
-     * unfinished eigenvalues are bisected simultaneously: one sweep over the matrix evaluates the
-     * Sturm counts at the midpoints of all distinct open brackets, as LAPACK's dlaebz does, so
-     * the k independent recurrences interleave instead of running one after another. Every
-     * count narrows the brackets of all wanted eigenvalues.
-     */
-    /**
-     * Bisection on Sturm counts for the m lowest eigenvalues. When eigenvectors follow, an eigenvalue
+     * Bisection on Sturm counts for the m lowest eigenvalues below hiInit (scaled), into
+     * scaledValues. All unfinished eigenvalues are bisected simultaneously: one sweep over the
+     * matrix evaluates the Sturm counts at the midpoints of all distinct open brackets, as LAPACK's
+     * dlaebz does, so the k independent recurrences interleave, and every count narrows the
+     * brackets of all wanted eigenvalues. When eigenvectors follow, an eigenvalue
      * whose bracket is well separated from its neighbours is bisected only to
      * {@link #COARSE_RELATIVE_TOLERANCE} of the norm and finished by the Rayleigh quotient of its
      * inverse-iteration vector, whose error is of the order of the squared residual over the gap
@@ -566,7 +563,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
             }
             return;
         }
-        rng = SEED;
+        rng.reset(SEED);
         double clusterGap = CLUSTER_RELATIVE_GAP * tnorm;
         int clusterStart = 0;
         double previousShift = Double.NEGATIVE_INFINITY;
@@ -799,7 +796,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     private void randomUnit(double[] x, int n) {
         double sum = 0.0;
         for (int i = 0; i < n; i++) {
-            double r = nextSigned();
+            double r = rng.nextSigned();
             x[i] = r;
             sum += r * r;
         }
@@ -807,18 +804,5 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         for (int i = 0; i < n; i++) {
             x[i] *= inv;
         }
-    }
-
-    /**
-     * Uniform pseudo-random number in (-1, 1) from the SplitMix64 generator (G. L. Steele, D. Lea,
-     * C. H. Flood, "Fast splittable pseudorandom number generators", OOPSLA 2014 [from memory]).
-     */
-    private double nextSigned() {
-        long z = (rng += 0x9E3779B97F4A7C15L);
-        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
-        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
-        z = z ^ (z >>> 31);
-        double u = (z >>> 11) * 0x1.0p-53; // [0, 1)
-        return 2.0 * u - 1.0 + 0x1.0p-53;
     }
 }

@@ -10,6 +10,7 @@ import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.EffectiveMasses;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.solvers.mesh.Mesh;
+import org.wurtzkit.solvers.statistics.CarrierDensity;
 import org.wurtzkit.structure.BottomBoundary;
 import org.wurtzkit.structure.DeepLevel;
 import org.wurtzkit.structure.DeltaDoping;
@@ -148,8 +149,8 @@ final class Device {
             ec[k] = eck;
             ev[k] = evk;
             EffectiveMasses em = m.masses();
-            nc[k] = effectiveDensityOfStates(em.electronDensityOfStates(), t);
-            nv[k] = effectiveDensityOfStates(em.heavyHoleDensityOfStates(), t);
+            nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
+            nv[k] = CarrierDensity.effectiveDensityOfStates(em.heavyHoleDensityOfStates(), t);
             massZ[k] = em.electronParallel();
             massXY[k] = em.electronPerpendicular();
         }
@@ -254,13 +255,6 @@ final class Device {
                 quantumNode[i] = true;
             }
         }
-    }
-
-    /** Nc = 2 (2 pi m kT / h^2)^{3/2} (Sze &amp; Ng, Physics of Semiconductor Devices, 3rd ed. 2007, ch. 1). */
-    static double effectiveDensityOfStates(double massRatio, double temperatureK) {
-        double m = massRatio * Constants.ELECTRON_MASS;
-        double a = 2 * Math.PI * m * Constants.BOLTZMANN * temperatureK / (Constants.PLANCK * Constants.PLANCK);
-        return 2 * a * Math.sqrt(a);
     }
 
     private static double[] mergeClose(TreeSet<Double> breaks, double tol) {

@@ -83,13 +83,4 @@ final class QuantumStates {
             }
         }
     }
-
-    /** @return total number of subbands over all windows */
-    int total() {
-        int t = 0;
-        for (int c : count) {
-            t += c;
-        }
-        return t;
-    }
 }

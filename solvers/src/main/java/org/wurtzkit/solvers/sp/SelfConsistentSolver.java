@@ -222,7 +222,8 @@ public final class SelfConsistentSolver {
      * t the ratio of the next step to the last (e.g. (V_next - V_b)/(V_b - V_a)). A first-order
      * predictor in the sense of continuation methods (E. L. Allgower and K. Georg, Introduction to
      * Numerical Continuation Methods, SIAM 2003, ch. 2; from memory); falls back to phi_b when the two
-     * solutions do not share a mesh.
+     * solutions do not share a mesh. The two-point case of
+     * {@link #extrapolate(double[], Solution[], double)}, with a at parameter -1 and b at 0.
      *
      * @param a the solution before b
      * @param b the latest solution
@@ -231,17 +232,7 @@ public final class SelfConsistentSolver {
      */
     public static double[] extrapolate(Solution a, Solution b, double t) {
         Require.finite("extrapolation step ratio", t);
-        double[] pb = b.potential();
-        double[] za = a.depth();
-        double[] zb = b.depth();
-        if (!java.util.Arrays.equals(za, zb)) {
-            return pb;
-        }
-        double[] pa = a.potential();
-        for (int i = 0; i < pb.length; i++) {
-            pb[i] += t * (pb[i] - pa[i]);
-        }
-        return pb;
+        return extrapolate(new double[] {-1, 0}, new Solution[] {a, b}, t);
     }
 
     /**
@@ -405,7 +396,7 @@ public final class SelfConsistentSolver {
         }
         throw failure(d, phi, w, count, history, outer, String.format(Locale.ROOT,
                 "Newton-Poisson not converged in %d steps (tolerance %.3g V)", options.maxNewtonIterations(),
-                options.newtonTolerance()));
+                tolerance));
     }
 
     /**

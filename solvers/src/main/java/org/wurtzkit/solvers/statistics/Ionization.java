@@ -32,13 +32,10 @@ public final class Ionization {
     private Ionization() {
     }
 
-    /** Default donor ground-state degeneracy g_D = 2 (spin; Sze &amp; Ng 2007, ch. 1). */
-    public static final double DEFAULT_DONOR_DEGENERACY = 2.0;
-    /**
-     * Default acceptor ground-state degeneracy g_A = 4 (spin times the two degenerate valence bands
-     * at k = 0 of cubic semiconductors; Sze &amp; Ng 2007, ch. 1).
-     */
-    public static final double DEFAULT_ACCEPTOR_DEGENERACY = 4.0;
+    /** Default donor ground-state degeneracy, {@link org.wurtzkit.structure.Dopant#DONOR_DEGENERACY} (2). */
+    public static final double DEFAULT_DONOR_DEGENERACY = org.wurtzkit.structure.Dopant.DONOR_DEGENERACY;
+    /** Default acceptor ground-state degeneracy, {@link org.wurtzkit.structure.Dopant#ACCEPTOR_DEGENERACY} (4). */
+    public static final double DEFAULT_ACCEPTOR_DEGENERACY = org.wurtzkit.structure.Dopant.ACCEPTOR_DEGENERACY;
 
     /**
      * Ionised fraction of donors, N_D+/N_D = 1/(1 + g_D exp(x)) with x = (E_F - E_D)/kT (Sze &amp;

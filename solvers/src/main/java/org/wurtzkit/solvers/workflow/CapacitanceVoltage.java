@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.List;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Units;
 
 /**
  * Quasi-static C-V curve of a bias sweep, C = dQ_gate/dV_g per unit gate area.
@@ -25,7 +26,6 @@ public final class CapacitanceVoltage implements CsvTable {
             Column.of("interval_end", "V"), Column.of("gate_bias_midpoint", "V"), Column.of("capacitance", "F/m^2"),
             Column.of("capacitance", "uF/cm^2"), Column.of("status", ""));
     /** 1 F/m^2 = 1e6 uF / 1e4 cm^2. */
-    private static final double UF_PER_CM2 = 100;
 
     private final double[] bias;
     private final double[] charge;
@@ -54,7 +54,7 @@ public final class CapacitanceVoltage implements CsvTable {
     public double[] capacitanceMicroFaradPerCm2() {
         double[] out = new double[capacitance.length];
         for (int k = 0; k < out.length; k++) {
-            out[k] = capacitance[k] * UF_PER_CM2;
+            out[k] = capacitance[k] / Units.UF_PER_CM2;
         }
         return out;
     }
@@ -131,7 +131,7 @@ public final class CapacitanceVoltage implements CsvTable {
     public List<String> row(int k) {
         double c = capacitance[k];
         return List.of(CsvTable.cell(bias[k]), CsvTable.cell(bias[k + 1]), CsvTable.cell(0.5 * (bias[k] + bias[k + 1])),
-                CsvTable.cell(c), CsvTable.cell(c * UF_PER_CM2),
+                CsvTable.cell(c), CsvTable.cell(c / Units.UF_PER_CM2),
                 Double.isNaN(c) ? "failed: an end point of the interval did not converge" : "ok");
     }
 }

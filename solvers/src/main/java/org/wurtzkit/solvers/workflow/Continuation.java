@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.workflow;
 
+import java.util.Arrays;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
@@ -27,23 +28,25 @@ final class Continuation {
      */
     static void solveInOrder(SelfConsistentSolver solver, Structure[] at, double[] parameter, Solution[] solutions,
             String[] failures) {
-        // the latest consecutive successes, oldest first
-        Solution[] recent = new Solution[PREDICTOR_POINTS];
-        double[] recentParameter = new double[PREDICTOR_POINTS];
-        int held = 0;
+        Solution lastSuccess = null;
         for (int i = 0; i < at.length; i++) {
-            Solution previous = held == 0 ? null : recent[held - 1];
+            // the predictor uses the run of consecutive successes just before this point
+            int held = 0;
+            while (held < PREDICTOR_POINTS && i - 1 - held >= 0 && solutions[i - 1 - held] != null) {
+                held++;
+            }
             try {
                 if (held >= 2) {
-                    Solution[] from = java.util.Arrays.copyOf(recent, held);
-                    double[] p = java.util.Arrays.copyOf(recentParameter, held);
+                    Solution[] from = Arrays.copyOfRange(solutions, i - held, i);
+                    double[] p = Arrays.copyOfRange(parameter, i - held, i);
                     double[] guess = SelfConsistentSolver.extrapolate(p, from, parameter[i]);
-                    solutions[i] = solver.solve(at[i], previous.depth(), guess);
+                    solutions[i] = solver.solve(at[i], lastSuccess.depth(), guess);
                 } else {
-                    solutions[i] = solver.solve(at[i], previous);
+                    // a cold start, or the last success without a predictor
+                    solutions[i] = solver.solve(at[i], lastSuccess);
                 }
             } catch (RuntimeException first) {
-                if (previous == null) {
+                if (lastSuccess == null) {
                     failures[i] = PointFailure.describe(first);
                 } else {
                     try {
@@ -55,23 +58,7 @@ final class Continuation {
                 }
             }
             if (solutions[i] != null) {
-                boolean consecutive = i > 0 && solutions[i - 1] != null;
-                if (!consecutive) {
-                    held = 0;
-                }
-                if (held == PREDICTOR_POINTS) {
-                    System.arraycopy(recent, 1, recent, 0, held - 1);
-                    System.arraycopy(recentParameter, 1, recentParameter, 0, held - 1);
-                    held--;
-                }
-                recent[held] = solutions[i];
-                recentParameter[held] = parameter[i];
-                held++;
-            } else if (held > 1) {
-                // continue from the last success, without a predictor
-                recent[0] = recent[held - 1];
-                recentParameter[0] = recentParameter[held - 1];
-                held = 1;
+                lastSuccess = solutions[i];
             }
         }
     }

@@ -233,8 +233,8 @@ class HemtPhysicsTest {
      * source needed): evaluated at one of its own parameters it returns that solution's potential;
      * with two points it is the linear predictor. Extrapolating from 0, -0.25 and -0.5 V to -0.75 V,
      * the quadratic guess is closer to the converged potential than the linear one (a third-order
-     * against a second-order error in the step: common practice, no source), and solving from it
-     * takes a single outer iteration and gives the cold answer.
+     * against a second-order error in the step: common practice, no source); solving from it gives
+     * the cold answer in no more outer iterations than from the linear guess.
      */
     @Test
     void quadraticPredictorBeatsTheLinearOne() {
