@@ -8,11 +8,9 @@ import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
-import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.EffectiveMasses;
 import org.wurtzkit.material.ParameterSet;
-import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.solvers.sp.BandAlignment;
 import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Layer;
@@ -282,21 +280,11 @@ public final class ChargeBalanceModel {
         return fromStructure(s);
     }
 
+    /** E_c at a point by the full solver's line-up rule ({@link BandAlignment#edgesEv}). */
     private static double conductionEdge(Structure s, PointState p, SolverOptions o, double t) {
-        WurtziteMaterial m = p.material();
-        double gap = m.bandGap().atTemperature(t);
-        double ec;
-        if (o.bandAlignment() instanceof BandAlignment.ConductionBandFraction f) {
-            WurtziteMaterial gan = s.parameters().binary(Binary.GAN);
-            double ganGap = gan.bandGap().atTemperature(t);
-            ec = gan.valenceBandEdgeEv() + ganGap + f.fraction() * (gap - ganGap);
-        } else {
-            ec = m.valenceBandEdgeEv() + gap;
-        }
-        if (o.strainShiftsBandEdges()) {
-            ec += p.bandShift().conductionEv();
-        }
-        return ec;
+        double[] edges = new double[2];
+        o.bandAlignment().edgesEv(s, p, t, o.strainShiftsBandEdges(), edges);
+        return edges[0];
     }
 
     // ------------------------------------------------------------------ evaluation

@@ -1,6 +1,10 @@
 package org.wurtzkit.solvers.sp;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.material.Binary;
+import org.wurtzkit.material.WurtziteMaterial;
+import org.wurtzkit.structure.PointState;
+import org.wurtzkit.structure.Structure;
 
 /**
  * How the band edges of different materials line up.
@@ -29,6 +33,38 @@ public sealed interface BandAlignment permits BandAlignment.ValenceBandTable, Ba
         public ConductionBandFraction {
             Require.inRange("conduction-band offset fraction", fraction, 0, 1);
         }
+    }
+
+    /**
+     * The band edges at a point of a stack under this alignment, on the parameter set's energy scale
+     * (eV): the one line-up rule of the full solver and of the analytic charge-balance model.
+     *
+     * @param s            the stack (its parameter set supplies GaN for {@link ConductionBandFraction})
+     * @param p            the point
+     * @param temperatureK temperature of the gaps (K)
+     * @param strainShifts whether the point's strain shifts of the band edges are added
+     * @param out          receives E_c in out[0] and E_v in out[1]
+     */
+    default void edgesEv(Structure s, PointState p, double temperatureK, boolean strainShifts, double[] out) {
+        WurtziteMaterial m = p.material();
+        double gap = m.bandGap().atTemperature(temperatureK);
+        double ec;
+        double ev;
+        if (this instanceof ConductionBandFraction f) {
+            WurtziteMaterial gan = s.parameters().binary(Binary.GAN);
+            double ganGap = gan.bandGap().atTemperature(temperatureK);
+            ec = gan.valenceBandEdgeEv() + ganGap + f.fraction() * (gap - ganGap);
+            ev = ec - gap;
+        } else {
+            ev = m.valenceBandEdgeEv();
+            ec = ev + gap;
+        }
+        if (strainShifts) {
+            ec += p.bandShift().conductionEv();
+            ev += p.bandShift().valenceEv();
+        }
+        out[0] = ec;
+        out[1] = ev;
     }
 
     /** @return the tabulated-valence-band alignment */

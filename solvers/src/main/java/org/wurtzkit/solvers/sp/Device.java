@@ -6,7 +6,6 @@ import java.util.TreeSet;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.WurtzkitException;
-import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.EffectiveMasses;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.solvers.mesh.Mesh;
@@ -121,9 +120,7 @@ final class Device {
         massXY = new double[cells];
         layerOfCell = new int[cells];
         double t = s.temperatureK();
-        WurtziteMaterial gan = s.parameters().binary(Binary.GAN);
-        double ganGap = gan.bandGap().atTemperature(t);
-        double ganEc = gan.valenceBandEdgeEv() + ganGap;
+        double[] edges = new double[2];
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
             int li = s.layerIndexAt(mid);
@@ -132,22 +129,9 @@ final class Device {
             WurtziteMaterial m = p.material();
             eps[k] = m.permittivityStatic() * Constants.VACUUM_PERMITTIVITY;
             px[k] = -p.alongGrowth();
-            double gap = m.bandGap().atTemperature(t);
-            double evk;
-            double eck;
-            if (o.bandAlignment() instanceof BandAlignment.ConductionBandFraction f) {
-                eck = ganEc + f.fraction() * (gap - ganGap);
-                evk = eck - gap;
-            } else {
-                evk = m.valenceBandEdgeEv();
-                eck = evk + gap;
-            }
-            if (o.strainShiftsBandEdges()) {
-                eck += p.bandShift().conductionEv();
-                evk += p.bandShift().valenceEv();
-            }
-            ec[k] = eck;
-            ev[k] = evk;
+            o.bandAlignment().edgesEv(s, p, t, o.strainShiftsBandEdges(), edges);
+            ec[k] = edges[0];
+            ev[k] = edges[1];
             EffectiveMasses em = m.masses();
             nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
             nv[k] = CarrierDensity.effectiveDensityOfStates(em.heavyHoleDensityOfStates(), t);

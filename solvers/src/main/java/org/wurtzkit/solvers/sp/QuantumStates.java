@@ -21,6 +21,7 @@ final class QuantumStates {
     boolean limitReached;
     private final EffectiveMassHamiltonian[] hamiltonians;
     private final double[][] potential; // [window][local node]
+    private final double[][] massWeight; // [window][local node] box width (m) times in-plane mass (m0)
 
     QuantumStates(Device d) {
         windows = d.windowStart.length;
@@ -31,6 +32,7 @@ final class QuantumStates {
         massXY = new double[windows][];
         hamiltonians = new EffectiveMassHamiltonian[windows];
         potential = new double[windows][];
+        massWeight = new double[windows][];
         for (int w = 0; w < windows; w++) {
             int a = d.windowStart[w];
             int b = d.windowEnd[w];
@@ -44,6 +46,10 @@ final class QuantumStates {
             }
             hamiltonians[w] = EffectiveMassHamiltonian.of(z, m);
             potential[w] = new double[b - a + 1];
+            massWeight[w] = new double[b - a + 1];
+            for (int i = a; i <= b; i++) {
+                massWeight[w][i - a] = d.box(i) * d.nodeMassXY(i);
+            }
             int kMax = Math.min(d.options.maxSubbands(), hamiltonians[w].maxStates());
             energy[w] = new double[kMax];
             psi[w] = new double[kMax][];
@@ -73,9 +79,10 @@ final class QuantumStates {
                 energy[w][k] = bs.energy(k);
                 psi[w][k] = bs.wavefunction(k);
                 double mxy = 0;
+                double[] weight = massWeight[w];
                 for (int j = 0; j < v.length; j++) {
                     double p = psi[w][k][j];
-                    mxy += p * p * d.box(a + j) * d.nodeMassXY(a + j);
+                    mxy += p * p * weight[j];
                 }
                 // normalised on the window's box widths; the end boxes are half-boxes but psi = 0 there
                 massXY[w][k] = mxy;

@@ -352,5 +352,13 @@ class HemtPhysicsTest {
             total += b.sheetDensity();
         }
         assertEquals(Units.perM2ToPerCm2(total), s.sheetDensityPerCm2(), 1e-9 * s.sheetDensityPerCm2());
+        // independently of the subband sums: the electron density profile (box-integrated node by
+        // node, through the charge model) integrated over the quantum window holds the same electrons;
+        // the window's two end nodes are classical and add a small share (1.1e-5 of the total here),
+        // hence 1e-4; a spin, degeneracy or normalisation error would be of order one
+        double[][] windows = s.quantumWindows();
+        assertEquals(1, windows.length);
+        double inWindow = s.electronSheetDensityBetween(windows[0][0], windows[0][1]);
+        assertEquals(total, inWindow, 1e-4 * total);
     }
 }
