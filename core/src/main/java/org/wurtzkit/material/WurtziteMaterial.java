@@ -203,6 +203,14 @@ public final class WurtziteMaterial {
      * and finite, and that the physically signed ones have the right sign.
      */
     public static final class Builder {
+        /** Parameters that must be strictly positive (lengths, stiffnesses, gap, masses, permittivities). */
+        private static final MaterialParameter[] POSITIVE = {MaterialParameter.LATTICE_A, MaterialParameter.LATTICE_C,
+                MaterialParameter.C11, MaterialParameter.C12, MaterialParameter.C13, MaterialParameter.C33,
+                MaterialParameter.C44, MaterialParameter.BAND_GAP_0K, MaterialParameter.VARSHNI_BETA,
+                MaterialParameter.ELECTRON_MASS_PARALLEL, MaterialParameter.ELECTRON_MASS_PERPENDICULAR,
+                MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR,
+                MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY};
+
         private final String name;
         private Composition composition;
         private final double[] values = new double[ALL.length];
@@ -257,12 +265,7 @@ public final class WurtziteMaterial {
                     throw new InvalidParameterException(p.key() + " of " + name, "missing", "(a finite value must be set)");
                 }
             }
-            for (MaterialParameter p : new MaterialParameter[] {MaterialParameter.LATTICE_A, MaterialParameter.LATTICE_C,
-                    MaterialParameter.C11, MaterialParameter.C12, MaterialParameter.C13, MaterialParameter.C33,
-                    MaterialParameter.C44, MaterialParameter.BAND_GAP_0K, MaterialParameter.VARSHNI_BETA,
-                    MaterialParameter.ELECTRON_MASS_PARALLEL, MaterialParameter.ELECTRON_MASS_PERPENDICULAR,
-                    MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR,
-                    MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY}) {
+            for (MaterialParameter p : POSITIVE) {
                 Require.positive(p.key() + " of " + name, values[p.ordinal()]);
             }
             Require.nonNegative(MaterialParameter.VARSHNI_ALPHA.key() + " of " + name,
