@@ -76,6 +76,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     /** Per eigenvalue: bisected only to the coarse tolerance, to be finished by a Rayleigh quotient. */
     private boolean[] coarse;
     private double[] scaledValues;
+    /** Reciprocals of U's diagonal after factorShifted. */
     private double[] fa;
     private double[] fb;
     private double[] fc;
@@ -676,9 +677,9 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     }
 
     /**
-     * LU factorisation with partial pivoting of T - sigma I (scaled), stored as U (diagonal fa,
-     * superdiagonals fb and fd), multipliers fc and interchange flags; tiny pivots of U are
-     * perturbed to eps*||T||.
+     * LU factorisation with partial pivoting of T - sigma I (scaled), stored as U (reciprocal
+     * diagonal fa, superdiagonals fb and fd), multipliers fc and interchange flags; tiny pivots of
+     * U are perturbed to eps*||T|| before they are inverted.
      */
     private void factorShifted(int n, double sigma) {
         for (int i = 0; i < n; i++) {
@@ -721,6 +722,11 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         if (Math.abs(fa[n - 1]) < pivTol) {
             fa[n - 1] = fa[n - 1] < 0.0 ? -pivTol : pivTol;
         }
+        // Each factorisation serves several solves: keep 1/u_kk so that the back substitution
+        // multiplies instead of divides. |u_kk| >= eps*||T|| here, so the reciprocal is finite.
+        for (int k = 0; k < n; k++) {
+            fa[k] = 1.0 / fa[k];
+        }
     }
 
     /** Solves (T - sigma I) y = x in place with the factors of factorShifted. */
@@ -734,10 +740,10 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
                 x[k + 1] -= fc[k] * x[k];
             }
         }
-        x[n - 1] /= fa[n - 1];
-        x[n - 2] = (x[n - 2] - fb[n - 2] * x[n - 1]) / fa[n - 2];
+        x[n - 1] *= fa[n - 1];
+        x[n - 2] = (x[n - 2] - fb[n - 2] * x[n - 1]) * fa[n - 2];
         for (int k = n - 3; k >= 0; k--) {
-            x[k] = (x[k] - fb[k] * x[k + 1] - fd[k] * x[k + 2]) / fa[k];
+            x[k] = (x[k] - fb[k] * x[k + 1] - fd[k] * x[k + 2]) * fa[k];
         }
     }
 
