@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.schrodinger;
 
+import java.util.Arrays;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.units.Constants;
 
@@ -42,8 +43,9 @@ import org.wurtzkit.solvers.linalg.SymmetricTridiagonalEigen;
  * N nodes (zero at the ends) normalised so that {@code sum_i psi_i² w_i = 1} (units m^-1/2).
  *
  * <p><b>Reuse.</b> An instance prepares the mesh and mass terms once; {@link #lowest} and
- * {@link #below} then cost O(N·k) per call with no allocation except the returned result, so a
- * self-consistent loop should keep one instance per mesh. Instances hold work arrays and are
+ * {@link #below} then cost O(N·k) per call with no allocation except the returned result, and
+ * {@link #belowInto} writes into the caller's arrays without allocating, so a self-consistent
+ * loop should keep one instance per mesh. Instances hold work arrays and are
  * not thread-safe; use one per thread.
  */
 public final class EffectiveMassHamiltonian {
@@ -226,6 +228,78 @@ public final class EffectiveMassHamiltonian {
      *                                  bound or {@code kMax} out of range
      */
     public BoundStates below(double[] potentialEv, double energyBoundEv, int kMax) {
+        checkBelow(potentialEv, energyBoundEv, kMax);
+        return result(solveBelow(potentialEv, energyBoundEv, kMax));
+    }
+
+    /**
+     * The same states as {@link #below(double[], double, int)}, written into caller-owned arrays
+     * instead of a new {@link BoundStates}. A null row of {@code wavefunctionsOut} that receives a
+     * state is replaced by a new array of length N (the output grows to what is found); after
+     * that, and once the work space has grown to {@code kMax} states, nothing is allocated, so a
+     * self-consistent loop that keeps its own arrays solves every iteration allocation-free.
+     * Entries {@code [count, kMax)} of the outputs are left untouched.
+     *
+     * @param potentialEv      potential energy at the nodes (eV), finite, length N
+     * @param energyBoundEv    energy bound (eV), not NaN
+     * @param kMax             largest number of states, in {@code [1, N-2]}
+     * @param energiesOut      receives the energies (eV), ascending; length &ge; {@code kMax}
+     * @param wavefunctionsOut receives the wavefunctions on all N nodes (m^-1/2, zero at both
+     *                         ends, normalised as in {@link BoundStates}); at least {@code kMax}
+     *                         rows, each null or of length N
+     * @return the number of states found, in {@code [0, kMax]}
+     * @throws IllegalArgumentException as {@link #below(double[], double, int)}, or if an output
+     *                                  array is null or too short
+     */
+    public int belowInto(double[] potentialEv, double energyBoundEv, int kMax, double[] energiesOut,
+            double[][] wavefunctionsOut) {
+        checkBelow(potentialEv, energyBoundEv, kMax);
+        if (energiesOut == null) {
+            throw outside("energiesOut", "null", "(a non-null array)");
+        }
+        if (energiesOut.length < kMax) {
+            throw outside("energiesOut.length", energiesOut.length,
+                    "[" + kMax + ", " + Integer.MAX_VALUE + "] (at least kMax)");
+        }
+        if (wavefunctionsOut == null) {
+            throw outside("wavefunctionsOut", "null", "(a non-null array)");
+        }
+        if (wavefunctionsOut.length < kMax) {
+            throw outside("wavefunctionsOut.length", wavefunctionsOut.length,
+                    "[" + kMax + ", " + Integer.MAX_VALUE + "] (at least kMax rows)");
+        }
+        for (int j = 0; j < kMax; j++) {
+            double[] row = wavefunctionsOut[j];
+            if (row != null && row.length != nodes) {
+                throw outside("wavefunctionsOut[" + j + "].length", row.length,
+                        "[" + nodes + ", " + nodes + "] (one value per mesh node, or a null row)");
+            }
+        }
+        int m = solveBelow(potentialEv, energyBoundEv, kMax);
+        for (int j = 0; j < m; j++) {
+            if (wavefunctionsOut[j] == null) {
+                wavefunctionsOut[j] = new double[nodes];
+            }
+        }
+        copyOut(m, energiesOut, wavefunctionsOut);
+        return m;
+    }
+
+    /**
+     * Eigenpairs below the bound into the work arrays, which grow to the number of states found
+     * (a Sturm count, O(N)) rather than to {@code kMax}: a generous cap costs no memory.
+     */
+    private int solveBelow(double[] potentialEv, double energyBoundEv, int kMax) {
+        fillDiagonal(potentialEv);
+        int need = Math.min(kMax, SymmetricTridiagonalEigen.countBelow(diagonalWork, offDiagonal, energyBoundEv));
+        if (need == 0) {
+            return 0;
+        }
+        ensureWork(need);
+        return eigen.belowInto(diagonalWork, offDiagonal, energyBoundEv, need, valuesWork, vectorsWork);
+    }
+
+    private void checkBelow(double[] potentialEv, double energyBoundEv, int kMax) {
         checkPotential(potentialEv);
         if (Double.isNaN(energyBoundEv)) {
             throw outside("energyBoundEv", energyBoundEv, "[-Infinity, +Infinity] (not NaN)");
@@ -233,10 +307,6 @@ public final class EffectiveMassHamiltonian {
         if (kMax < 1 || kMax > unknowns) {
             throw outside("kMax", kMax, "[1, " + unknowns + "]");
         }
-        ensureWork(kMax);
-        fillDiagonal(potentialEv);
-        int m = eigen.belowInto(diagonalWork, offDiagonal, energyBoundEv, kMax, valuesWork, vectorsWork);
-        return result(m);
     }
 
     private void checkPotential(double[] potentialEv) {
@@ -258,7 +328,11 @@ public final class EffectiveMassHamiltonian {
     private void ensureWork(int k) {
         if (valuesWork.length < k) {
             valuesWork = new double[k];
-            vectorsWork = new double[k][unknowns];
+            double[][] grown = Arrays.copyOf(vectorsWork, k);
+            for (int j = vectorsWork.length; j < k; j++) {
+                grown[j] = new double[unknowns];
+            }
+            vectorsWork = grown;
         }
     }
 
@@ -271,15 +345,22 @@ public final class EffectiveMassHamiltonian {
     private BoundStates result(int m) {
         double[] energies = new double[m];
         double[][] psi = new double[m][nodes];
+        copyOut(m, energies, psi);
+        return new BoundStates(energies, psi);
+    }
+
+    /** psi = W^{-1/2} u on the interior nodes, zero at the two Dirichlet ends. */
+    private void copyOut(int m, double[] energies, double[][] psi) {
         for (int j = 0; j < m; j++) {
             energies[j] = valuesWork[j];
             double[] u = vectorsWork[j];
             double[] p = psi[j];
+            p[0] = 0.0;
+            p[nodes - 1] = 0.0;
             for (int q = 0; q < unknowns; q++) {
                 p[q + 1] = u[q] * inverseSqrtWidth[q];
             }
         }
-        return new BoundStates(energies, psi);
     }
 
     private static IllegalArgumentException outside(String name, Object value, String range) {

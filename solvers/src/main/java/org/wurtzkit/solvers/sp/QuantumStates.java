@@ -1,6 +1,5 @@
 package org.wurtzkit.solvers.sp;
 
-import org.wurtzkit.solvers.schrodinger.BoundStates;
 import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
 import org.wurtzkit.units.Constants;
 
@@ -52,6 +51,8 @@ final class QuantumStates {
             }
             int kMax = Math.min(d.options.maxSubbands(), hamiltonians[w].maxStates());
             energy[w] = new double[kMax];
+            // rows owned here, allocated when first filled and overwritten by every later
+            // update; Solution copies what it keeps
             psi[w] = new double[kMax][];
             dos[w] = new double[kMax];
             massXY[w] = new double[kMax];
@@ -70,14 +71,12 @@ final class QuantumStates {
                 v[j] = d.nodeEc(a + j) - phi[a + j];
             }
             int kMax = energy[w].length;
-            BoundStates bs = hamiltonians[w].below(v, bound, kMax);
-            count[w] = bs.size();
-            if (bs.size() == kMax && kMax < hamiltonians[w].maxStates()) {
-                limitReached |= bs.energy(kMax - 1) < bound;
+            int found = hamiltonians[w].belowInto(v, bound, kMax, energy[w], psi[w]);
+            count[w] = found;
+            if (found == kMax && kMax < hamiltonians[w].maxStates()) {
+                limitReached |= energy[w][kMax - 1] < bound;
             }
-            for (int k = 0; k < bs.size(); k++) {
-                energy[w][k] = bs.energy(k);
-                psi[w][k] = bs.wavefunction(k);
+            for (int k = 0; k < found; k++) {
                 double mxy = 0;
                 double[] weight = massWeight[w];
                 for (int j = 0; j < v.length; j++) {

@@ -130,8 +130,9 @@ public final class Solution {
         for (int w = 0; w < nw; w++) {
             int a = d.windowStart[w];
             windows[w] = new double[] {d.x[a], d.x[d.windowEnd[w]]};
+            // zero outside the window; each subband overwrites the window part, and Subband copies it
+            double[] full = new double[nn];
             for (int k = 0; k < qs.count[w]; k++) {
-                double[] full = new double[nn];
                 System.arraycopy(qs.psi[w][k], 0, full, a, qs.psi[w][k].length);
                 // occupation with the same first-order shift (phi - ref) as the density of Poisson
                 double occ = 0;

@@ -12,7 +12,7 @@ class EffectiveMassInputValidationTest {
     private static final double[] MESH = {0, 1e-9, 2e-9, 3e-9, 4e-9};
     private static final double[] MASS = {0.2, 0.2, 0.2, 0.2};
 
-    private static void assertMessage(Executable call, String... parts) {
+    static void assertMessage(Executable call, String... parts) {
         IllegalArgumentException ex = assertThrows(IllegalArgumentException.class, call);
         for (String part : parts) {
             assertTrue(ex.getMessage().contains(part), "message '" + ex.getMessage() + "' lacks '" + part + "'");
