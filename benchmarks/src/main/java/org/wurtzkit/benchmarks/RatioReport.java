@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.infra.BenchmarkParams;
 import org.openjdk.jmh.profile.GCProfiler;
 import org.openjdk.jmh.results.BenchmarkResult;
 import org.openjdk.jmh.results.IterationResult;
@@ -53,9 +54,23 @@ public final class RatioReport {
     private RatioReport() {
     }
 
-    /** One Runner invocation: an include pattern, parameter values and run settings. */
+    /**
+     * One Runner invocation: an include pattern, parameter values and run settings. With
+     * {@code interleaved}, the forks of the parameter values alternate instead of running one
+     * value after the other (ABBA order: 1, 2, 2, 1, ...), so that a slow spell of a shared host
+     * falls on both sides of a ratio; the forks of each value are then pooled as usual.
+     */
     private record Job(String include, String param, String[] values, Mode mode, int forks, int warmups,
-            TimeValue warmupTime, int iterations, TimeValue iterationTime, boolean gc) {
+            TimeValue warmupTime, int iterations, TimeValue iterationTime, boolean gc, boolean interleaved) {
+        Job(String include, String param, String[] values, Mode mode, int forks, int warmups,
+                TimeValue warmupTime, int iterations, TimeValue iterationTime, boolean gc) {
+            this(include, param, values, mode, forks, warmups, warmupTime, iterations, iterationTime, gc, false);
+        }
+
+        Job single(String value) {
+            return new Job(include, param, new String[] {value}, mode, 1, warmups, warmupTime, iterations,
+                    iterationTime, gc, false);
+        }
     }
 
     /** Median and extremes of a set of per-iteration values. */
@@ -122,9 +137,10 @@ public final class RatioReport {
         jobs.add(new Job("ColdSolveBenchmark\\.", null, null, Mode.AverageTime, 1, 5, S1, 4, S1, true));
         jobs.add(new Job("SweepBenchmark\\.(coldPoints|continuationWorkflow)$", null, null, Mode.AverageTime, 1, 4, S1, 4,
                 S1, false));
-        // four 2 s warm-ups: with two 1 s ones the 1-thread map (about 3 maps) was still being compiled
-        jobs.add(new Job("DesignMapBenchmark\\.workflowMap$", "threads", new String[] {"1", "2"}, Mode.AverageTime, 1,
-                4, S2, 5, S1, false));
+        // 2-s warm-ups: with two 1 s ones the 1-thread map (about 3 maps) was still being compiled; two
+        // interleaved forks per side (1, 2, 2, 1), as the map ratio is the one a shared host disturbs
+        jobs.add(new Job("DesignMapBenchmark\\.workflowMap$", "threads", new String[] {"1", "2"}, Mode.AverageTime, 2,
+                3, S2, 3, S1, false, true));
         return jobs;
     }
 
@@ -155,7 +171,7 @@ public final class RatioReport {
         jobs.add(new Job("ColdSolveBenchmark\\.", null, null, Mode.AverageTime, 5, 10, S1, 10, S1, true));
         jobs.add(new Job("SweepBenchmark\\.", null, null, Mode.AverageTime, 5, 4, S2, 6, S2, false));
         jobs.add(new Job("DesignMapBenchmark\\.", "threads", new String[] {"1", "2"}, Mode.AverageTime, 5, 4, S2, 6, S2,
-                false));
+                false, true));
         return jobs;
     }
 
@@ -187,7 +203,7 @@ public final class RatioReport {
             long t0 = System.nanoTime();
             System.err.printf(Locale.ROOT, "[%d/%d] %s %s ...%n", j + 1, jobs.size(), job.include(),
                     job.values() == null ? "" : job.param() + "=" + String.join(",", job.values()));
-            for (RunResult r : run(job, verbose)) {
+            for (RunResult r : job.interleaved() ? runInterleaved(job, verbose) : run(job, verbose)) {
                 Figure f = figure(r, job.mode());
                 figures.put(key(f.benchmark(), f.param()), f);
             }
@@ -199,6 +215,27 @@ public final class RatioReport {
         if (out != null) {
             Files.writeString(out, md, StandardCharsets.UTF_8);
         }
+    }
+
+    /** The job's forks one at a time, alternating its parameter values; forks of one value pooled. */
+    private static Collection<RunResult> runInterleaved(Job job, boolean verbose) throws RunnerException {
+        Map<String, BenchmarkParams> params = new LinkedHashMap<>();
+        Map<String, List<BenchmarkResult>> forks = new LinkedHashMap<>();
+        for (int round = 0; round < job.forks(); round++) {
+            for (int v = 0; v < job.values().length; v++) {
+                String value = job.values()[round % 2 == 0 ? v : job.values().length - 1 - v];
+                for (RunResult r : run(job.single(value), verbose)) {
+                    String k = r.getParams().id();
+                    params.putIfAbsent(k, r.getParams());
+                    forks.computeIfAbsent(k, x -> new ArrayList<>()).addAll(r.getBenchmarkResults());
+                }
+            }
+        }
+        List<RunResult> pooled = new ArrayList<>();
+        for (Map.Entry<String, List<BenchmarkResult>> e : forks.entrySet()) {
+            pooled.add(new RunResult(params.get(e.getKey()), e.getValue()));
+        }
+        return pooled;
     }
 
     private static Collection<RunResult> run(Job job, boolean verbose) throws RunnerException {
