@@ -101,7 +101,9 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
 
     /**
      * Sturm count: the number of eigenvalues of {@code T} smaller than {@code x} (an eigenvalue
-     * within a few units of roundoff times {@code ||T||} of {@code x} may be counted either way).
+     * within a few units of roundoff times {@code ||T||} of {@code x} may be counted either way,
+     * and so may one within about {@link Double#MIN_NORMAL} of it: a pivot that small counts as
+     * negative, which matters only for a matrix whose entries are near underflow).
      * O(N), no allocation. The pivot rule is that described in the class documentation.
      *
      * @param diag diagonal, length {@code n >= 1}, finite
