@@ -30,7 +30,7 @@ import org.wurtzkit.units.Units;
  *
  * <h2>Derivation (re-derived here; not copied from a formula in the literature)</h2>
  *
- * <p>The project's physics notes (shared/physics/REFERENCES.md section 4) record a published
+ * <p>A paper in Chinese Physics B (abstract seen, details not) gives a published
  * warning about "a longstanding confusion" in a widely cited 2DEG-density formula, whose details
  * were not available; the balance is therefore derived from Gauss's law alone.
  *
@@ -67,16 +67,16 @@ import org.wurtzkit.units.Units;
  *
  * <p>For a single barrier (thickness d, permittivity eps, S = sigma) at V = 0 this is
  * n_s = sigma/e - eps/(e^2 d) [e phi_B + E_F - dE_c], the form in which A00's model is usually
- * quoted (as recalled in shared/physics/REFERENCES.md section 4; the paper itself was not at hand).
+ * quoted (from memory; the paper itself was not at hand).
  * For a GaN cap on AlGaN on GaN the cap has the channel's polarization, so S_cap = 0 and
  * E_c(top) = E_c(ch): the two band-offset steps cancel and n_s = [sigma d/eps_b - (phi_B + E_F/e)] /
- * [e (d/eps_b + t_c/eps_c)], the cap expression of REFERENCES.md section 4.
+ * [e (d/eps_b + t_c/eps_c)], the cap expression used by the tests.
  *
  * <p>The Fermi level above the well bottom is E_F = E_0 + pi hbar^2 n_s / m_dos with the lowest
  * level of a triangular well in the mean field e n_s / (2 eps_w):
  * E_0 = [9 pi hbar e^2 n_s / (8 eps_w sqrt(8 m_z))]^{2/3} (the asymptotic Airy level, T. Ando, A.
- * B. Fowler and F. Stern, Rev. Mod. Phys. 54, 437 (1982); the expression A00 uses, as recalled in
- * REFERENCES.md). One subband, zero temperature.
+ * B. Fowler and F. Stern, Rev. Mod. Phys. 54, 437 (1982); the expression A00 uses, as recalled
+ * from memory). One subband, zero temperature.
  *
  * <p>Units: SI inside (m, m^-2, F/m^2, C/m^2); energies in eV and voltages in V as named.
  */

@@ -137,7 +137,7 @@ class BiasSweepTest {
      * above eps/(d + 5 nm): the charge-control picture with an effective distance d + Delta d (the
      * 2DEG centroid a few nm below the interface plus the quantum-capacitance term; D. Delagebeaudeuf
      * and N. T. Linh, IEEE Trans. Electron Devices 29, 955 (1982), from memory; Fang-Howard centroid
-     * 2.3 nm at 1e13 cm^-2, REFERENCES.md 5.6 "[computed]").
+     * 2.3 nm at 1e13 cm^-2, computed from F. F. Fang and W. E. Howard, Phys. Rev. Lett. 16, 797 (1966)).
      */
     @Test
     void capacitanceMatchesFineStepDerivative() {
