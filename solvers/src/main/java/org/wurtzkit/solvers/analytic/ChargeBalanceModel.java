@@ -121,7 +121,7 @@ public final class ChargeBalanceModel {
             Require.inRange("polarization charge below layer \"" + name + "\" (C/m^2)", chargeBelow, -1, 1);
         }
 
-        /** @return thickness (nm) */
+        /** {@return thickness (nm)} */
         public double thicknessNm() {
             return Units.mToNm(thickness);
         }
@@ -164,12 +164,12 @@ public final class ChargeBalanceModel {
         this.dosCoefficient = Math.PI * HBAR * HBAR / (densityOfStatesMass * M0) / E;
     }
 
-    /** @return an empty builder */
+    /** {@return an empty builder} */
     public static Builder builder() {
         return new Builder();
     }
 
-    /** @return a builder pre-filled with this model */
+    /** {@return a builder pre-filled with this model} */
     public Builder toBuilder() {
         Builder b = new Builder();
         Collections.addAll(b.layers, layers);
@@ -299,17 +299,17 @@ public final class ChargeBalanceModel {
         return schottkyBarrierEv - surfaceOffsetEv - polarizationVoltage;
     }
 
-    /** @return the series capacitance of the layers above the channel, 1 / sum_j t_j/eps_j (F/m&sup2;) */
+    /** {@return the series capacitance of the layers above the channel, 1 / sum_j t_j/eps_j (F/m&sup2;)} */
     public double gateCapacitance() {
         return 1 / inverseCapacitance;
     }
 
-    /** @return 2DEG sheet density at the model's own gate bias (m^-2) */
+    /** {@return 2DEG sheet density at the model's own gate bias (m^-2)} */
     public double sheetDensity() {
         return sheetDensity(gateBiasV);
     }
 
-    /** @return 2DEG sheet density at the model's own gate bias (cm^-2) */
+    /** {@return 2DEG sheet density at the model's own gate bias (cm^-2)} */
     public double sheetDensityPerCm2() {
         return Units.perM2ToPerCm2(sheetDensity());
     }
@@ -432,42 +432,42 @@ public final class ChargeBalanceModel {
         return b.build();
     }
 
-    /** @return the layers between the gate and the channel, top first */
+    /** {@return the layers between the gate and the channel, top first} */
     public List<BarrierLayer> layers() {
         return List.of(layers);
     }
 
-    /** @return phi_B (eV) */
+    /** {@return phi_B (eV)} */
     public double schottkyBarrierEv() {
         return schottkyBarrierEv;
     }
 
-    /** @return the gate bias the model is evaluated at by default (V) */
+    /** {@return the gate bias the model is evaluated at by default (V)} */
     public double gateBiasV() {
         return gateBiasV;
     }
 
-    /** @return E_c(top layer) - E_c(channel) (eV) */
+    /** {@return E_c(top layer) - E_c(channel) (eV)} */
     public double surfaceOffsetEv() {
         return surfaceOffsetEv;
     }
 
-    /** @return sum_j S_j t_j / eps_j (V) */
+    /** {@return sum_j S_j t_j / eps_j (V)} */
     public double polarizationVoltage() {
         return polarizationVoltage;
     }
 
-    /** @return relative permittivity used for E_0 */
+    /** {@return relative permittivity used for E_0} */
     public double wellPermittivity() {
         return wellPermittivity;
     }
 
-    /** @return mass along the growth direction used for E_0 (m0) */
+    /** {@return mass along the growth direction used for E_0 (m0)} */
     public double quantizationMass() {
         return quantizationMass;
     }
 
-    /** @return in-plane density-of-states mass (m0) */
+    /** {@return in-plane density-of-states mass (m0)} */
     public double densityOfStatesMass() {
         return densityOfStatesMass;
     }
@@ -565,7 +565,11 @@ public final class ChargeBalanceModel {
             return this;
         }
 
-        /** @return the model @throws InvalidParameterException for a missing or out-of-range value */
+        /**
+         * {@return the model}
+         *
+         * @throws InvalidParameterException for a missing or out-of-range value
+         */
         public ChargeBalanceModel build() {
             return new ChargeBalanceModel(this);
         }
