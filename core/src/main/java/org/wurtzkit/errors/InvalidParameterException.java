@@ -26,22 +26,22 @@ public class InvalidParameterException extends IllegalArgumentException {
         this.allowedRange = allowedRange;
     }
 
-    /** @return the parameter's name */
+    /** {@return the parameter's name} */
     public String parameter() {
         return parameter;
     }
 
-    /** @return the offending value, as text */
+    /** {@return the offending value, as text} */
     public String value() {
         return value;
     }
 
-    /** @return the allowed range, as text */
+    /** {@return the allowed range, as text} */
     public String allowedRange() {
         return allowedRange;
     }
 
-    /** @return {@link ErrorKind#INVALID_PARAMETER} */
+    /** {@return {@link ErrorKind#INVALID_PARAMETER}} */
     public ErrorKind kind() {
         return ErrorKind.INVALID_PARAMETER;
     }

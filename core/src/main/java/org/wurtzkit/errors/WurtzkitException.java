@@ -28,7 +28,7 @@ public class WurtzkitException extends RuntimeException {
         this.kind = kind;
     }
 
-    /** @return the kind of failure */
+    /** {@return the kind of failure} */
     public ErrorKind kind() {
         return kind;
     }

@@ -15,7 +15,7 @@ public enum Binary {
         this.formula = formula;
     }
 
-    /** @return the chemical formula, e.g. "GaN" (also the key prefix in parameter-set files) */
+    /** {@return the chemical formula, e.g. "GaN" (also the key prefix in parameter-set files)} */
     public String formula() {
         return formula;
     }

@@ -67,7 +67,7 @@ public record Composition(double aluminium, double indium) {
         return new Composition(x, y);
     }
 
-    /** @return Ga fraction 1 - x - y (never negative) */
+    /** {@return Ga fraction 1 - x - y (never negative)} */
     public double gallium() {
         return Math.max(0.0, 1.0 - aluminium - indium);
     }
@@ -84,7 +84,7 @@ public record Composition(double aluminium, double indium) {
         };
     }
 
-    /** @return true if this is one of the three binaries */
+    /** {@return true if this is one of the three binaries} */
     public boolean isBinary() {
         return aluminium == 1 || indium == 1 || (aluminium == 0 && indium == 0);
     }
@@ -105,7 +105,7 @@ public record Composition(double aluminium, double indium) {
         return new Composition(Math.max(0.0, x), Math.max(0.0, y));
     }
 
-    /** @return a readable formula, e.g. "Al0.25Ga0.75N", "In0.18Al0.82N", "GaN" */
+    /** {@return a readable formula, e.g. "Al0.25Ga0.75N", "In0.18Al0.82N", "GaN"} */
     public String formula() {
         double ga = gallium();
         if (aluminium == 0 && indium == 0) {

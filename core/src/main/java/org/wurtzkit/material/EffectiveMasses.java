@@ -10,12 +10,12 @@ package org.wurtzkit.material;
  */
 public record EffectiveMasses(double electronParallel, double electronPerpendicular, double heavyHoleParallel,
         double heavyHolePerpendicular) {
-    /** @return density-of-states mass of the conduction band (m_perp&sup2; m_par)^(1/3) */
+    /** {@return density-of-states mass of the conduction band (m_perp&sup2; m_par)^(1/3)} */
     public double electronDensityOfStates() {
         return Math.cbrt(electronPerpendicular * electronPerpendicular * electronParallel);
     }
 
-    /** @return density-of-states mass of the heavy-hole band (m_perp&sup2; m_par)^(1/3) */
+    /** {@return density-of-states mass of the heavy-hole band (m_perp&sup2; m_par)^(1/3)} */
     public double heavyHoleDensityOfStates() {
         return Math.cbrt(heavyHolePerpendicular * heavyHolePerpendicular * heavyHoleParallel);
     }

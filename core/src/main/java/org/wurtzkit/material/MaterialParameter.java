@@ -96,22 +96,22 @@ public enum MaterialParameter {
         this.fileToSi = fileToSi;
     }
 
-    /** @return the key in parameter-set files, e.g. "C13" */
+    /** {@return the key in parameter-set files, e.g. "C13"} */
     public String key() {
         return key;
     }
 
-    /** @return the unit of {@link WurtziteMaterial#get(MaterialParameter)} */
+    /** {@return the unit of {@link WurtziteMaterial#get(MaterialParameter)}} */
     public String siUnit() {
         return siUnit;
     }
 
-    /** @return the unit in which parameter-set files state the value */
+    /** {@return the unit in which parameter-set files state the value} */
     public String fileUnit() {
         return fileUnit;
     }
 
-    /** @return the factor that converts a file value to the library unit */
+    /** {@return the factor that converts a file value to the library unit} */
     public double fileToSi() {
         return fileToSi;
     }

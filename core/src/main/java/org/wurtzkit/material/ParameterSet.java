@@ -14,10 +14,10 @@ import org.wurtzkit.polarization.PolarizationModel;
  * {@link ParameterSets}.
  */
 public interface ParameterSet {
-    /** @return the unique name by which the set is selected, e.g. "vurgaftman-meyer-2003" */
+    /** {@return the unique name by which the set is selected, e.g. "vurgaftman-meyer-2003"} */
     String name();
 
-    /** @return one sentence saying what the set follows */
+    /** {@return one sentence saying what the set follows} */
     String description();
 
     /**
@@ -26,7 +26,7 @@ public interface ParameterSet {
      */
     WurtziteMaterial binary(Binary binary);
 
-    /** @return the bowing parameters of the three ternary pairs */
+    /** {@return the bowing parameters of the three ternary pairs} */
     AlloyBowing bowing();
 
     /**
@@ -35,7 +35,7 @@ public interface ParameterSet {
      */
     PolarizationModel recommendedPolarizationModel();
 
-    /** @return every source cited by the set, without duplicates */
+    /** {@return every source cited by the set, without duplicates} */
     List<Source> sources();
 
     /**

@@ -8,6 +8,6 @@ import java.util.List;
  * {@code META-INF/services/org.wurtzkit.material.ParameterSetProvider}.
  */
 public interface ParameterSetProvider {
-    /** @return the sets this provider offers (loaded eagerly or lazily, but thread-safely) */
+    /** {@return the sets this provider offers (loaded eagerly or lazily, but thread-safely)} */
     List<ParameterSet> parameterSets();
 }

@@ -42,12 +42,12 @@ public final class ParameterSets {
         }
     }
 
-    /** @return the names of every registered set, in discovery order */
+    /** {@return the names of every registered set, in discovery order} */
     public static List<String> names() {
         return new ArrayList<>(Holder.SETS.keySet());
     }
 
-    /** @return every registered set, in discovery order */
+    /** {@return every registered set, in discovery order} */
     public static List<ParameterSet> all() {
         return new ArrayList<>(Holder.SETS.values());
     }
@@ -67,7 +67,7 @@ public final class ParameterSets {
         return s;
     }
 
-    /** @return the set named {@value #DEFAULT_NAME} */
+    /** {@return the set named {@value #DEFAULT_NAME}} */
     public static ParameterSet defaultSet() {
         return named(DEFAULT_NAME);
     }

@@ -34,12 +34,12 @@ public final class WurtziteMaterial {
         this.provenance = provenance;
     }
 
-    /** @return a readable name, e.g. "Al0.25Ga0.75N (vurgaftman-meyer-2003)" */
+    /** {@return a readable name, e.g. "Al0.25Ga0.75N (vurgaftman-meyer-2003)"} */
     public String name() {
         return name;
     }
 
-    /** @return the composition, or null for a custom material that declares none */
+    /** {@return the composition, or null for a custom material that declares none} */
     public Composition composition() {
         return composition;
     }
@@ -60,23 +60,23 @@ public final class WurtziteMaterial {
         return provenance[p.ordinal()];
     }
 
-    /** @return in-plane lattice constant a (m) */
+    /** {@return in-plane lattice constant a (m)} */
     public double latticeA() {
         return get(MaterialParameter.LATTICE_A);
     }
 
-    /** @return lattice constant c (m) */
+    /** {@return lattice constant c (m)} */
     public double latticeC() {
         return get(MaterialParameter.LATTICE_C);
     }
 
-    /** @return the elastic stiffness constants (Pa) */
+    /** {@return the elastic stiffness constants (Pa)} */
     public ElasticConstants elastic() {
         return new ElasticConstants(get(MaterialParameter.C11), get(MaterialParameter.C12),
                 get(MaterialParameter.C13), get(MaterialParameter.C33), get(MaterialParameter.C44));
     }
 
-    /** @return the piezoelectric constants (C/m&sup2;) */
+    /** {@return the piezoelectric constants (C/m&sup2;)} */
     public PiezoelectricConstants piezoelectric() {
         return new PiezoelectricConstants(get(MaterialParameter.E31), get(MaterialParameter.E33),
                 get(MaterialParameter.E15), get(MaterialParameter.PIEZO_NONLINEAR_LINEAR),
@@ -103,35 +103,35 @@ public final class WurtziteMaterial {
         return get(MaterialParameter.SPONTANEOUS_POLARIZATION) + get(MaterialParameter.SPONTANEOUS_POLARIZATION_BOWING);
     }
 
-    /** @return the band gap model (eV, Varshni) */
+    /** {@return the band gap model (eV, Varshni)} */
     public BandGap bandGap() {
         return new BandGap(get(MaterialParameter.BAND_GAP_0K), get(MaterialParameter.VARSHNI_ALPHA),
                 get(MaterialParameter.VARSHNI_BETA));
     }
 
-    /** @return effective masses relative to m0 */
+    /** {@return effective masses relative to m0} */
     public EffectiveMasses masses() {
         return new EffectiveMasses(get(MaterialParameter.ELECTRON_MASS_PARALLEL),
                 get(MaterialParameter.ELECTRON_MASS_PERPENDICULAR), get(MaterialParameter.HEAVY_HOLE_MASS_PARALLEL),
                 get(MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR));
     }
 
-    /** @return static relative permittivity */
+    /** {@return static relative permittivity} */
     public double permittivityStatic() {
         return get(MaterialParameter.PERMITTIVITY_STATIC);
     }
 
-    /** @return high-frequency relative permittivity */
+    /** {@return high-frequency relative permittivity} */
     public double permittivityHighFrequency() {
         return get(MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY);
     }
 
-    /** @return unstrained valence-band maximum relative to that of GaN (eV) */
+    /** {@return unstrained valence-band maximum relative to that of GaN (eV)} */
     public double valenceBandEdgeEv() {
         return get(MaterialParameter.VALENCE_BAND_EDGE);
     }
 
-    /** @return the conduction- and valence-band deformation potentials (eV) */
+    /** {@return the conduction- and valence-band deformation potentials (eV)} */
     public DeformationPotentials deformationPotentials() {
         return new DeformationPotentials(get(MaterialParameter.DEFORMATION_CB_PARALLEL),
                 get(MaterialParameter.DEFORMATION_CB_PERPENDICULAR), get(MaterialParameter.DEFORMATION_D1),
@@ -173,7 +173,7 @@ public final class WurtziteMaterial {
         return new Builder(name);
     }
 
-    /** @return all values keyed by parameter (a copy) */
+    /** {@return all values keyed by parameter (a copy)} */
     public Map<MaterialParameter, Double> values() {
         Map<MaterialParameter, Double> m = new EnumMap<>(MaterialParameter.class);
         for (MaterialParameter p : ALL) {

@@ -18,12 +18,12 @@ public enum Polarity {
         this.sign = sign;
     }
 
-    /** @return +1 for metal-face, -1 for N-face */
+    /** {@return +1 for metal-face, -1 for N-face} */
     public int sign() {
         return sign;
     }
 
-    /** @return the other polarity */
+    /** {@return the other polarity} */
     public Polarity inverted() {
         return this == METAL_FACE ? N_FACE : METAL_FACE;
     }

@@ -61,7 +61,7 @@ public record Polarization(double spontaneous, double piezoelectric) {
         return e.nonlinearLinear() * eps + a2 * eps * eps;
     }
 
-    /** @return P_sp + P_pz along [0001] (C/m&sup2;) */
+    /** {@return P_sp + P_pz along [0001] (C/m&sup2;)} */
     public double total() {
         return spontaneous + piezoelectric;
     }

@@ -26,7 +26,7 @@ public record BandEdgeShift(double conductionEv, double valenceEv) {
         return new BandEdgeShift(dc, dv);
     }
 
-    /** @return the change of the gap dEc - dEv (eV) */
+    /** {@return the change of the gap dEc - dEv (eV)} */
     public double gapEv() {
         return conductionEv - valenceEv;
     }

@@ -63,12 +63,12 @@ public record Strain(double xx, double zz) {
         return inPlaneA + relaxation * (ownA - inPlaneA);
     }
 
-    /** @return eps_yy (equal to eps_xx for c-plane biaxial strain) */
+    /** {@return eps_yy (equal to eps_xx for c-plane biaxial strain)} */
     public double yy() {
         return xx;
     }
 
-    /** @return the trace eps_xx + eps_yy + eps_zz (relative volume change) */
+    /** {@return the trace eps_xx + eps_yy + eps_zz (relative volume change)} */
     public double trace() {
         return 2 * xx + zz;
     }

@@ -22,7 +22,7 @@ public sealed interface BottomBoundary permits BottomBoundary.ZeroField, BottomB
         }
     }
 
-    /** @return the zero-field boundary */
+    /** {@return the zero-field boundary} */
     static ZeroField zeroField() {
         return new ZeroField();
     }

@@ -33,7 +33,7 @@ public record DeltaDoping(Dopant.Kind kind, double sheetDensityPerM2, double ion
                 offsetFromLayerTop);
     }
 
-    /** @return the degeneracy factor: {@link Dopant#DONOR_DEGENERACY} or {@link Dopant#ACCEPTOR_DEGENERACY} */
+    /** {@return the degeneracy factor: {@link Dopant#DONOR_DEGENERACY} or {@link Dopant#ACCEPTOR_DEGENERACY}} */
     public double degeneracy() {
         return kind == Dopant.Kind.DONOR ? Dopant.DONOR_DEGENERACY : Dopant.ACCEPTOR_DEGENERACY;
     }

@@ -63,7 +63,7 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
         return new Dopant(Kind.ACCEPTOR, Units.perCm3ToPerM3(densityPerCm3), ionizationEnergyEv, ACCEPTOR_DEGENERACY);
     }
 
-    /** @return density (cm^-3) */
+    /** {@return density (cm^-3)} */
     public double densityPerCm3() {
         return Units.perM3ToPerCm3(densityPerM3);
     }

@@ -12,12 +12,12 @@ import org.wurtzkit.units.Units;
  * @param sigma      bound sheet charge (C/m&sup2;)
  */
 public record InterfaceCharge(double depth, String upperLayer, String lowerLayer, double sigma) {
-    /** @return sigma / e (cm^-2), signed */
+    /** {@return sigma / e (cm^-2), signed} */
     public double sheetDensityPerCm2() {
         return Units.chargeToPerCm2(sigma);
     }
 
-    /** @return depth (nm) */
+    /** {@return depth (nm)} */
     public double depthNm() {
         return Units.mToNm(depth);
     }

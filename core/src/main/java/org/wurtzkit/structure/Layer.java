@@ -112,7 +112,7 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
         return new Layer(name, material, t, dopants, deepLevels, deltaSheets, relaxation);
     }
 
-    /** @return thickness (nm) */
+    /** {@return thickness (nm)} */
     public double thicknessNm() {
         return org.wurtzkit.units.Units.mToNm(thickness);
     }

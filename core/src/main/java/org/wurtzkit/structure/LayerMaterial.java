@@ -15,10 +15,10 @@ public sealed interface LayerMaterial permits LayerMaterial.Alloy, LayerMaterial
      */
     WurtziteMaterial at(double fromBottom, ParameterSet set);
 
-    /** @return true if the material changes across the layer */
+    /** {@return true if the material changes across the layer} */
     boolean isGraded();
 
-    /** @return a short description, e.g. "Al0.25Ga0.75N" or "GaN -> Al0.3Ga0.7N" */
+    /** {@return a short description, e.g. "Al0.25Ga0.75N" or "GaN -> Al0.3Ga0.7N"} */
     String describe();
 
     /**

@@ -115,7 +115,7 @@ public final class Structure {
         return new Builder(set);
     }
 
-    /** @return a builder pre-filled with this structure, to derive a variant */
+    /** {@return a builder pre-filled with this structure, to derive a variant} */
     public Builder toBuilder() {
         Builder b = new Builder(parameters);
         b.layers.addAll(bottomUp);
@@ -140,64 +140,64 @@ public final class Structure {
         return b.build();
     }
 
-    /** @return the parameter set */
+    /** {@return the parameter set} */
     public ParameterSet parameters() {
         return parameters;
     }
 
-    /** @return the layers in growth order, bottom (first grown) first */
+    /** {@return the layers in growth order, bottom (first grown) first} */
     public List<Layer> layersBottomUp() {
         return bottomUp;
     }
 
-    /** @return the layers from the surface down, top first */
+    /** {@return the layers from the surface down, top first} */
     public List<Layer> layersTopDown() {
         List<Layer> l = new ArrayList<>(bottomUp);
         Collections.reverse(l);
         return Collections.unmodifiableList(l);
     }
 
-    /** @return every layer in place, from the surface down, with depths, strain and polarization */
+    /** {@return every layer in place, from the surface down, with depths, strain and polarization} */
     public List<LayerState> layerStates() {
         return states;
     }
 
-    /** @return the in-plane lattice constant the bottom layer grows on (m) */
+    /** {@return the in-plane lattice constant the bottom layer grows on (m)} */
     public double referenceLatticeA() {
         return referenceLatticeA;
     }
 
-    /** @return polarity */
+    /** {@return polarity} */
     public Polarity polarity() {
         return polarity;
     }
 
-    /** @return the polarization model in force */
+    /** {@return the polarization model in force} */
     public PolarizationModel polarizationModel() {
         return polarizationModel;
     }
 
-    /** @return temperature (K) */
+    /** {@return temperature (K)} */
     public double temperatureK() {
         return temperatureK;
     }
 
-    /** @return the top boundary */
+    /** {@return the top boundary} */
     public TopBoundary top() {
         return top;
     }
 
-    /** @return the bottom boundary */
+    /** {@return the bottom boundary} */
     public BottomBoundary bottom() {
         return bottom;
     }
 
-    /** @return total thickness (m) */
+    /** {@return total thickness (m)} */
     public double totalThickness() {
         return totalThickness;
     }
 
-    /** @return depths of the internal interfaces below the surface, shallowest first (m) */
+    /** {@return depths of the internal interfaces below the surface, shallowest first (m)} */
     public double[] interfaceDepths() {
         double[] d = new double[states.size() - 1];
         for (int i = 0; i < d.length; i++) {
@@ -256,7 +256,7 @@ public final class Structure {
         return Collections.unmodifiableList(out);
     }
 
-    /** @return the bound charge at the top surface, sigma = P_z(top layer) - 0 */
+    /** {@return the bound charge at the top surface, sigma = P_z(top layer) - 0} */
     public InterfaceCharge surfaceCharge() {
         LayerState t = states.get(0);
         return new InterfaceCharge(0, "vacuum", t.layer().name(), t.top().alongGrowth());
@@ -278,7 +278,7 @@ public final class Structure {
         return Collections.unmodifiableList(out);
     }
 
-    /** @return the layers beyond the Matthews-Blakeslee thickness with the default 60-degree geometry */
+    /** {@return the layers beyond the Matthews-Blakeslee thickness with the default 60-degree geometry} */
     public List<LayerState> layersBeyondCriticalThickness() {
         return layersBeyondCriticalThickness(CriticalThickness.MATTHEWS_BLAKESLEE_60);
     }

@@ -33,7 +33,7 @@ class MaterialTest {
     }
 
     /**
-     * Eg(x) = x Eg(AlN) + (1-x) Eg(GaN) - b x(1-x), b = 1.0 eV in A00 (REFERENCES.md section 4). The bowing
+     * Eg(x) = x Eg(AlN) + (1-x) Eg(GaN) - b x(1-x), b = 1.0 eV in A00 (Ambacher et al., J. Appl. Phys. 87, 334 (2000), from memory). The bowing
      * acts on Eg(0 K); Varshni's alpha and beta follow Vegard's law, so at 300 K A00's formula (written for
      * 300 K) is met to within the few meV by which the interpolated Varshni shift differs.
      */
@@ -51,7 +51,7 @@ class MaterialTest {
         assertTrue(m.source(MaterialParameter.BAND_GAP_0K).sources().contains(A00TestSet.A00));
     }
 
-    /** Varshni, Physica 34, 149 (1967) with VM03 GaN constants: Eg(300 K) = 3.438 eV (REFERENCES.md 1.2, computed). */
+    /** Varshni, Physica 34, 149 (1967) with VM03 GaN constants: Eg(300 K) = 3.438 eV (computed). */
     @Test
     void varshni() {
         BandGap g = new BandGap(3.510, 0.909e-3, 830);

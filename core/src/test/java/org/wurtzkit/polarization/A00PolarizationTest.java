@@ -32,12 +32,11 @@ class A00PolarizationTest {
     }
 
     /**
-     * Expected sigma/e: REFERENCES.md table 5.1 row A, "[computed]" there from A00's linear
+     * Expected sigma/e: computed by the project from A00's linear
      * formulas sigma(x) = |P_pz(x) + P_sp(x) - P_sp(0)| with P_pz = 2 (a(0) - a(x))/a(x) (e31 - e33
      * C13/C33). Those values are given to 3-4 significant digits, hence the 2e-3 tolerance (well
      * inside the issue's 3 %). We could not read A00's own plot of sigma(x) (the paper was not
-     * available while writing); A00's formulas are themselves transcribed from memory in
-     * REFERENCES.md.
+     * available while writing); A00's formulas are themselves recalled from memory.
      */
     @ParameterizedTest
     @CsvSource({"0.10, 5.38e12", "0.15, 8.15e12", "0.20, 1.098e13", "0.25, 1.385e13", "0.30, 1.678e13",
@@ -45,11 +44,12 @@ class A00PolarizationTest {
     void sheetChargeMatchesA00Formulas(double x, double expectedPerCm2) {
         InterfaceCharge c = alGaNOnGaN(x, PolarizationModel.LINEAR).interfaceCharges().get(0);
         assertEquals(expectedPerCm2, c.sheetDensityPerCm2(), 2e-3 * expectedPerCm2);
-        // positive: electrons gather on the GaN side (REFERENCES.md section 3 sign convention)
+        // positive: electrons gather on the GaN side; sign convention of
+        // O. Ambacher et al., J. Appl. Phys. 85, 3222 (1999)
         assertTrue(c.sigma() > 0);
     }
 
-    /** The intermediate numbers of REFERENCES.md 5.1 for x = 0.3 ("[computed]" there). */
+    /** The intermediate numbers of A00's linear fits for x = 0.3 (computed by the project). */
     @Test
     void intermediateValuesAtX03() {
         WurtziteMaterial m = A00TestSet.INSTANCE.material(Composition.alGaN(0.3));
@@ -70,7 +70,7 @@ class A00PolarizationTest {
 
     /**
      * The surface of metal-face AlGaN carries sigma = P_z of the top layer (vacuum above), negative:
-     * with REFERENCES.md 5.1's intermediate values at x = 0.3 ("[computed]" there, as in
+     * with the A00 intermediate values at x = 0.3 (computed by the project, as in
      * {@link #intermediateValuesAtX03}), P_sp + P_pz = -0.0446 - 0.01129 C/m^2.
      */
     @Test

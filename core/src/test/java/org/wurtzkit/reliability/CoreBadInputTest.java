@@ -8,6 +8,7 @@ import static org.wurtzkit.units.Units.NM;
 
 import java.util.List;
 import java.util.stream.Stream;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.function.Executable;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -47,6 +48,7 @@ import org.wurtzkit.units.Units;
  * entry point documents; a second table checks that the documented end points themselves are
  * accepted, so that no check is broader than its documentation.
  */
+@Tag("reliability")
 class CoreBadInputTest {
     private static final ParameterSet SET = A00TestSet.INSTANCE;
     private static final WurtziteMaterial GAN = SET.binary(Binary.GAN);

@@ -18,7 +18,7 @@ class StrainTest {
     private static final WurtziteMaterial GAN = A00TestSet.INSTANCE.binary(Binary.GAN);
     private static final WurtziteMaterial ALN = A00TestSet.INSTANCE.binary(Binary.ALN);
 
-    /** eps_zz = -2 (C13/C33) eps_xx for c-plane biaxial strain (REFERENCES.md section 3). */
+    /** eps_zz = -2 (C13/C33) eps_xx for c-plane biaxial strain (common practice, no source). */
     @Property(tries = 100)
     void zzFollowsFromXxByTheElasticRatio(@ForAll @DoubleRange(min = 0, max = 1) double x,
             @ForAll @DoubleRange(min = 0, max = 1) double r) {
@@ -33,7 +33,7 @@ class StrainTest {
     @Test
     void alnOnGanIsTensile() {
         Strain s = Strain.pseudomorphic(ALN, GAN);
-        // (3.189 - 3.112) / 3.112 (lattice constants from REFERENCES.md 1.1)
+        // (3.189 - 3.112) / 3.112 (lattice constants of I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003), from memory)
         assertEquals((3.189 - 3.112) / 3.112, s.xx(), 1e-12);
         assertTrue(s.zz() < 0);
     }
@@ -61,7 +61,7 @@ class StrainTest {
     /**
      * Matthews & Blakeslee, J. Cryst. Growth 27, 118 (1974): the returned h_c solves its own equation;
      * AlN on GaN with alpha = lambda = 60 degrees gives about 2.3 nm (computed here by hand from the
-     * same formula: f = 0.0247, nu = 0.225, K = 0.772 nm). REFERENCES.md 5.10 recalls "~6 nm for AlN on
+     * same formula: f = 0.0247, nu = 0.225, K = 0.772 nm). From memory, low confidence: "~6 nm for AlN on
      * GaN" with low confidence; the model is an estimate and the order of magnitude is what matters.
      */
     @Test

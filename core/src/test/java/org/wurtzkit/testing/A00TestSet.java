@@ -15,23 +15,23 @@ import org.wurtzkit.polarization.PolarizationModel;
  *
  * <p>The polarization-relevant values (a, C13, C33, e31, e33, Psp, eps, Eg at 300 K, gap bowing) are
  * the end points x = 0 and x = 1 of the linear Al<sub>x</sub>Ga<sub>1-x</sub>N formulas of O.
- * Ambacher et al., J. Appl. Phys. 87, 334 (2000), as transcribed in shared/physics/REFERENCES.md
- * section 4 (from memory there; the paper itself not seen): a(x) = -0.077x + 3.189 A, C13 = 5x + 103
+ * Ambacher et al., J. Appl. Phys. 87, 334 (2000), as recalled from memory (the paper
+ * itself not seen): a(x) = -0.077x + 3.189 A, C13 = 5x + 103
  * GPa, C33 = -32x + 405 GPa, e31 = -0.11x - 0.49, e33 = 0.73x + 0.73 C/m^2, Psp = -0.052x - 0.029
  * C/m^2, eps = -0.5x + 9.5, Eg = 6.13x + 3.42(1-x) - 1.0x(1-x) eV. Because Vegard's law is linear,
  * resolving an AlGaN alloy from these end points reproduces the linear formulas exactly.
  *
  * <p>Every other value (needed only to build a complete record) is a VM03 value from
- * REFERENCES.md section 1 (from memory there), or a plain filler marked as such; InN is the VM03
+ * I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003) (from memory), or a plain filler marked as such; InN is the VM03
  * set. No test of a published number relies on a filler.
  */
 public final class A00TestSet implements ParameterSet {
-    /** A00 as transcribed in REFERENCES.md. */
+    /** A00's linear fits, recalled from memory. */
     public static final Source A00 = new Source("A00", "O. Ambacher et al., J. Appl. Phys. 87, 334 (2000)",
-            "linear x-dependent formulas as transcribed in REFERENCES.md section 4, from memory");
-    /** VM03 as transcribed in REFERENCES.md. */
+            "linear x-dependent formulas, from memory");
+    /** VM03's recommended values, recalled from memory. */
     public static final Source VM03 = new Source("VM03", "I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003)",
-            "REFERENCES.md section 1, from memory");
+            "recommended values, from memory");
     /** Values with no physical weight in any test. */
     public static final Source FILLER = new Source("filler", "test filler value", "no physical meaning");
 
@@ -118,7 +118,7 @@ public final class A00TestSet implements ParameterSet {
     @Override
     public AlloyBowing bowing() {
         Bowing zero = new Bowing(0, A00);
-        // A00: AlGaN gap bowing 1.0 eV; VM03: InGaN 1.4, InAlN 2.5 eV (REFERENCES.md section 2, from memory)
+        // A00: AlGaN gap bowing 1.0 eV; VM03: InGaN 1.4, InAlN 2.5 eV (from memory)
         return new AlloyBowing(new Bowing(1.0, A00), new Bowing(1.4, VM03), new Bowing(2.5, VM03), zero, zero, zero);
     }
 

@@ -16,6 +16,7 @@ import java.nio.file.Path;
 import java.util.function.ToIntFunction;
 import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -37,6 +38,7 @@ import org.wurtzkit.materials.data.ParameterSetFormatException;
  * the file, the key and the line. The expected line is found by plain text search in the edited
  * text, independently of the JSON parser.
  */
+@Tag("reliability")
 class DataFileBadInputTest {
     private static final String FILE = "edited.json";
     private static final String SET = DataFiles.DEFAULT_SET;

@@ -10,6 +10,7 @@ import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.IntRange;
 import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.MaterialParameter;
@@ -23,6 +24,7 @@ import org.wurtzkit.materials.data.ParameterSetFormatException;
  * damaged text. No other exception type (NullPointerException, NumberFormatException,
  * IllegalStateException, a bare InvalidParameterException, ...) may escape the reader.
  */
+@Tag("reliability")
 class DataFileFuzzProperties {
     private static final String FILE = "fuzzed.json";
     private static final String TEXT = DataFiles.TEXT;

@@ -11,6 +11,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.Composition;
@@ -25,6 +26,7 @@ import org.wurtzkit.materials.data.FileParameterSet;
  * threads resolving alloys from one shared set, give values identical (bit for bit) to a serial
  * run. The reader and the sets are documented as stateless/immutable and thread-safe.
  */
+@Tag("reliability")
 class ParameterSetConcurrencyTest {
     private static final int THREADS = 8;
 

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.wurtzkit.units.Units.NM;
 
 import java.time.Duration;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -24,6 +25,7 @@ import org.wurtzkit.structure.TopBoundary;
  * converge, reduced by hand from the fuzz output (layers and dopants removed while the failure
  * stayed). Each is a physically ordinary stack that must converge and satisfy {@link Invariants}.
  */
+@Tag("reliability")
 class ConvergenceReproducersTest {
     private static final SelfConsistentSolver SOLVER = new SelfConsistentSolver();
     private static final Duration LIMIT = Duration.ofSeconds(20);

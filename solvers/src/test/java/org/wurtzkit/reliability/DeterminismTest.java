@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
@@ -26,6 +27,7 @@ import org.wurtzkit.structure.Structure;
  * difference would come from unordered parallel reductions, hash-order iteration or shared
  * mutable state in the library.
  */
+@Tag("reliability")
 class DeterminismTest {
     private static final SelfConsistentSolver SOLVER = new SelfConsistentSolver();
     private static Map<String, String> here;

@@ -9,6 +9,7 @@ import static org.wurtzkit.units.Units.NM;
 import java.time.Duration;
 import java.util.function.Supplier;
 import java.util.stream.Stream;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -43,6 +44,7 @@ import org.wurtzkit.structure.TopBoundary;
  * each must converge or fail with the documented {@link NotConvergedException}, never anything
  * else and never a hang.
  */
+@Tag("reliability")
 class SolverBadInputTest {
     private static final ParameterSet SET = ParameterSets.defaultSet();
     private static final double NAN = Double.NaN;

@@ -15,6 +15,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.GenerationMode;
 import net.jqwik.api.Property;
 import net.jqwik.api.ShrinkingMode;
+import net.jqwik.api.Tag;
 import net.jqwik.api.lifecycle.AfterProperty;
 import net.jqwik.api.lifecycle.BeforeProperty;
 import org.wurtzkit.errors.ErrorKind;
@@ -39,6 +40,7 @@ import org.wurtzkit.structure.Structure;
  * Each try draws one long, from which {@link Stacks#random(long)} builds the whole stack, so a case
  * is reproduced from one number; shrinking is off because a smaller seed is not a simpler stack.
  */
+@Tag("reliability")
 class SolverFuzzProperties {
     private static final SolverOptions OPTIONS = SolverOptions.defaults();
     /** One shared solver: it is documented stateless and thread-safe. */

@@ -11,6 +11,7 @@ import net.jqwik.api.EdgeCasesMode;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.ShrinkingMode;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
 import org.wurtzkit.material.Composition;
@@ -51,6 +52,7 @@ import org.wurtzkit.structure.TopBoundary;
  * pseudomorphically on the relaxed GaN lattice.</li>
  * </ul>
  */
+@Tag("reliability")
 class SymmetryProperties {
     private static final ParameterSet SET = ParameterSets.defaultSet();
     private static final Source SRC = Source.of("SYM", "reliability test variant");

@@ -16,6 +16,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.MaterialParameter;
@@ -33,6 +34,7 @@ import org.wurtzkit.structure.Structure;
  * they warm-start from one shared solution, and while other threads query the shared sets and
  * structures. The solver, structures, sets and solutions are documented immutable/stateless.
  */
+@Tag("reliability")
 class ThreadSafetyTest {
     private static final int THREADS = 8;
     private static final SelfConsistentSolver SHARED = new SelfConsistentSolver();

@@ -9,6 +9,7 @@ import static org.wurtzkit.units.Units.NM;
 
 import java.util.List;
 import java.util.stream.Stream;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -43,6 +44,7 @@ import org.wurtzkit.structure.TopBoundary;
  * definitions. Every rejection is an {@link org.wurtzkit.errors.InvalidParameterException} naming
  * parameter, value and allowed range, raised before any solve; the ranges are those of the Javadoc.
  */
+@Tag("reliability")
 class WorkflowBadInputTest {
     private static final ParameterSet SET = ParameterSets.defaultSet();
     private static final double NAN = Double.NaN;

@@ -11,6 +11,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
@@ -33,6 +34,7 @@ import org.wurtzkit.structure.Structure;
  * 1 and 4 threads (its Javadoc promises this), a shared bias sweep run from several threads at
  * once equals a serial run, and a parameter-set spread does not depend on its thread count.
  */
+@Tag("reliability")
 class WorkflowThreadSafetyTest {
     private static final SelfConsistentSolver SOLVER = new SelfConsistentSolver();
 

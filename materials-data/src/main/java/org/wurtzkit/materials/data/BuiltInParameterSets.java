@@ -51,13 +51,13 @@ public final class BuiltInParameterSets implements ParameterSetProvider {
         return s;
     }
 
-    /** @return the two built-in sets, the default first */
+    /** {@return the two built-in sets, the default first} */
     @Override
     public List<ParameterSet> parameterSets() {
         return List.of(vurgaftmanMeyer2003(), ambacher2002());
     }
 
-    /** @return the {@value #VURGAFTMAN_MEYER_2003} set, without going through the service loader */
+    /** {@return the {@value #VURGAFTMAN_MEYER_2003} set, without going through the service loader} */
     public static FileParameterSet vurgaftmanMeyer2003() {
         FileParameterSet s = vm03;
         if (s == null) {
@@ -72,7 +72,7 @@ public final class BuiltInParameterSets implements ParameterSetProvider {
         return s;
     }
 
-    /** @return the {@value #AMBACHER_2002} set, without going through the service loader */
+    /** {@return the {@value #AMBACHER_2002} set, without going through the service loader} */
     public static FileParameterSet ambacher2002() {
         FileParameterSet s = a02;
         if (s == null) {

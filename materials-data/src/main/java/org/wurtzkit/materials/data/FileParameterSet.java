@@ -53,7 +53,7 @@ public final class FileParameterSet implements ParameterSet {
         return description;
     }
 
-    /** @return the file name the set was read from (as given to the reader) */
+    /** {@return the file name the set was read from (as given to the reader)} */
     public String fileName() {
         return fileName;
     }

@@ -25,10 +25,10 @@ final class JsonTree {
 
     /** A JSON value with the line on which it starts. */
     sealed interface Node permits Obj, Arr, Str, Num, Other {
-        /** @return 1-based line on which the value starts */
+        /** {@return 1-based line on which the value starts} */
         int line();
 
-        /** @return a short description for messages, e.g. "the string \"abc\"" */
+        /** {@return a short description for messages, e.g. "the string \"abc\""} */
         String describe();
     }
 
@@ -50,12 +50,12 @@ final class JsonTree {
             return line;
         }
 
-        /** @return members in file order (unmodifiable) */
+        /** {@return members in file order (unmodifiable)} */
         Map<String, Member> members() {
             return Collections.unmodifiableMap(members);
         }
 
-        /** @return the member, or null */
+        /** {@return the member, or null} */
         Member get(String key) {
             return members.get(key);
         }

@@ -56,27 +56,27 @@ public class ParameterSetFormatException extends WurtzkitException {
                 + (line > 0 ? ", line " + line : ", no line (the file could not be read)") + ": " + problem;
     }
 
-    /** @return the set's name, or {@link #UNNAMED} if the file failed before its name was read */
+    /** {@return the set's name, or {@link #UNNAMED} if the file failed before its name was read} */
     public String setName() {
         return setName;
     }
 
-    /** @return the file name given to the reader */
+    /** {@return the file name given to the reader} */
     public String fileName() {
         return fileName;
     }
 
-    /** @return dotted path of the offending key, e.g. "binaries.GaN.C13" */
+    /** {@return dotted path of the offending key, e.g. "binaries.GaN.C13"} */
     public String key() {
         return key;
     }
 
-    /** @return 1-based line number of the offending token, or 0 if the file could not be read at all */
+    /** {@return 1-based line number of the offending token, or 0 if the file could not be read at all} */
     public int line() {
         return line;
     }
 
-    /** @return what is wrong, without the location prefix */
+    /** {@return what is wrong, without the location prefix} */
     public String problem() {
         return problem;
     }

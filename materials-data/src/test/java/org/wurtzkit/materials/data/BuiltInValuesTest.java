@@ -15,7 +15,9 @@ import org.wurtzkit.polarization.PolarizationModel;
 
 /**
  * The binary values and bowing parameters of the built-in sets equal the published tables they
- * cite. Numbers and tags come from shared/physics/REFERENCES.md (sections 1 and 2); the tag of each
+ * cite: VM03 = I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003); BF01 = F. Bernardini
+ * and V. Fiorentini, Phys. Rev. B 64, 085207 (2001); A00 = O. Ambacher et al., J. Appl. Phys. 87, 334
+ * (2000); A02 = O. Ambacher et al., J. Phys.: Condens. Matter 14, 3399 (2002). The tag of each
  * number says whether it was seen in the original ([verified: ...]), recalled ([from memory]) or
  * derived ([computed]).
  */
@@ -39,7 +41,7 @@ class BuiltInValuesTest {
 
         @Test
         void latticeConstants() {
-            // Vurgaftman & Meyer, J. Appl. Phys. 94, 3675 (2003), REFERENCES 1.1 [from memory];
+            // Vurgaftman & Meyer, J. Appl. Phys. 94, 3675 (2003) [from memory];
             // GaN and AlN a, c also in the Kansas State Univ. GaN-group table [verified: KSU]
             check(s, GAN, MaterialParameter.LATTICE_A, 3.189);
             check(s, ALN, MaterialParameter.LATTICE_A, 3.112);
@@ -51,7 +53,7 @@ class BuiltInValuesTest {
 
         @Test
         void elasticConstants() {
-            // VM03 recommended C11, C12, C13, C33, C44 (GPa), REFERENCES 1.1 [from memory]:
+            // VM03 recommended C11, C12, C13, C33, C44 (GPa) [from memory]:
             // GaN after Polian et al., J. Appl. Phys. 79, 3343 (1996); AlN, InN after Wright, J. Appl. Phys. 82, 2833 (1997)
             double[][] c = {{390, 145, 106, 398, 105}, {396, 137, 108, 373, 116}, {223, 115, 92, 224, 48}};
             MaterialParameter[] ps = {MaterialParameter.C11, MaterialParameter.C12, MaterialParameter.C13,
@@ -68,7 +70,7 @@ class BuiltInValuesTest {
 
         @Test
         void polarizationConstantsOfBernardiniFiorentiniVanderbilt() {
-            // Bernardini, Fiorentini & Vanderbilt, Phys. Rev. B 56, R10024 (1997), LDA, REFERENCES 1.1 [from memory]
+            // Bernardini, Fiorentini & Vanderbilt, Phys. Rev. B 56, R10024 (1997), LDA [from memory]
             check(s, GAN, MaterialParameter.SPONTANEOUS_POLARIZATION, -0.029);
             check(s, ALN, MaterialParameter.SPONTANEOUS_POLARIZATION, -0.081);
             check(s, INN, MaterialParameter.SPONTANEOUS_POLARIZATION, -0.032);
@@ -78,7 +80,7 @@ class BuiltInValuesTest {
             check(s, ALN, MaterialParameter.E33, 1.46);
             check(s, INN, MaterialParameter.E31, -0.57);
             check(s, INN, MaterialParameter.E33, 0.97);
-            // e15: REFERENCES 1.1 [from memory, low confidence]: GaN ~ -0.3, AlN ~ -0.48 (exp.), InN fallback e15 = e31
+            // e15 [from memory, low confidence]: GaN ~ -0.3, AlN ~ -0.48 (exp.), InN fallback e15 = e31
             check(s, GAN, MaterialParameter.E15, -0.3);
             check(s, ALN, MaterialParameter.E15, -0.48);
             check(s, INN, MaterialParameter.E15, s.binary(INN).get(MaterialParameter.E31));
@@ -86,7 +88,7 @@ class BuiltInValuesTest {
 
         @Test
         void bandGapsAndVarshni() {
-            // VM03 Eg(0 K) and Varshni alpha (meV/K), beta (K), REFERENCES 1.2 [from memory]
+            // VM03 Eg(0 K) and Varshni alpha (meV/K), beta (K) [from memory]
             check(s, GAN, MaterialParameter.BAND_GAP_0K, 3.510);
             check(s, ALN, MaterialParameter.BAND_GAP_0K, 6.25);
             check(s, INN, MaterialParameter.BAND_GAP_0K, 0.78);
@@ -100,7 +102,7 @@ class BuiltInValuesTest {
 
         @Test
         void gapsAt300KelvinByVarshni() {
-            // REFERENCES 1.2 [computed]: Eg(300 K) = Eg(0) - alpha T^2/(T + beta) = 3.438, 6.158, 0.756 eV (3 decimals)
+            // Varshni, Physica 34, 149 (1967) [computed]: Eg(300 K) = Eg(0) - alpha T^2/(T + beta) = 3.438, 6.158, 0.756 eV (3 decimals)
             assertEquals(3.438, s.binary(GAN).bandGap().atTemperature(300), 5e-4);
             assertEquals(6.158, s.binary(ALN).bandGap().atTemperature(300), 5e-4);
             assertEquals(0.756, s.binary(INN).bandGap().atTemperature(300), 5e-4);
@@ -108,7 +110,7 @@ class BuiltInValuesTest {
 
         @Test
         void electronMasses() {
-            // VM03, REFERENCES 1.2 [from memory; GaN anisotropy uncertain]
+            // VM03 [from memory; GaN anisotropy uncertain]
             check(s, GAN, MaterialParameter.ELECTRON_MASS_PARALLEL, 0.20);
             check(s, GAN, MaterialParameter.ELECTRON_MASS_PERPENDICULAR, 0.20);
             check(s, ALN, MaterialParameter.ELECTRON_MASS_PARALLEL, 0.32);
@@ -128,7 +130,7 @@ class BuiltInValuesTest {
                 checkRelative(s, bs[i], MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, -1 / (a[i][0] + a[i][2]), 5e-6);
                 checkRelative(s, bs[i], MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR, -1 / (a[i][1] + a[i][3]), 5e-6);
             }
-            // REFERENCES 1.2 quotes GaN m_hh,par = 1.89 = -1/(A1 + A3) [from memory]
+            // GaN m_hh,par = 1.89 = -1/(A1 + A3) [from memory]
             assertEquals(1.89, s.binary(GAN).masses().heavyHoleParallel(), 5e-3);
         }
 
@@ -148,7 +150,7 @@ class BuiltInValuesTest {
 
         @Test
         void valenceBandEdges() {
-            // GaN VBM = 0 defines the scale; VM03 offsets AlN/GaN ~0.8, GaN/InN ~0.5 eV, REFERENCES 1.3 [from memory, uncertain]
+            // GaN VBM = 0 defines the scale; VM03 offsets AlN/GaN ~0.8, GaN/InN ~0.5 eV [from memory, uncertain]
             check(s, GAN, MaterialParameter.VALENCE_BAND_EDGE, 0);
             check(s, ALN, MaterialParameter.VALENCE_BAND_EDGE, -0.8);
             check(s, INN, MaterialParameter.VALENCE_BAND_EDGE, 0.5);
@@ -156,8 +158,8 @@ class BuiltInValuesTest {
 
         @Test
         void deformationPotentials() {
-            // VM03 a1, a2, D1..D4 (eV), REFERENCES 1.4 [from memory]; a_cz = a1 + D1, a_ct = a2 + D2 is the
-            // interpretation of REFERENCES 1.4 (not verified)
+            // VM03 a1, a2, D1..D4 (eV) [from memory]; a_cz = a1 + D1, a_ct = a2 + D2 is the
+            // project's reading of VM03 (not verified)
             double[][] t = {{-4.9, -11.3, -3.7, 4.5, 8.2, -4.1}, {-3.4, -11.8, -17.1, 7.9, 8.8, -3.9},
                 {-3.5, -3.5, -3.7, 4.5, 8.2, -4.1}};
             Binary[] bs = {GAN, ALN, INN};
@@ -170,14 +172,14 @@ class BuiltInValuesTest {
                 check(s, bs[i], MaterialParameter.DEFORMATION_D3, r[4]);
                 check(s, bs[i], MaterialParameter.DEFORMATION_D4, r[5]);
             }
-            // REFERENCES 1.4: GaN a_cz, a_ct = -8.6, -6.8 eV
+            // [computed] with that reading: GaN a_cz, a_ct = -8.6, -6.8 eV
             assertEquals(-8.6, s.binary(GAN).deformationPotentials().conductionParallel(), 1e-12);
             assertEquals(-6.8, s.binary(GAN).deformationPotentials().conductionPerpendicular(), 1e-12);
         }
 
         @Test
         void bowingAndModel() {
-            // gap bowing, VM03, REFERENCES 2 [from memory]: AlGaN 0.7, InGaN 1.4, InAlN 2.5 eV
+            // gap bowing, VM03 [from memory]: AlGaN 0.7, InGaN 1.4, InAlN 2.5 eV
             assertEquals(0.7, s.bowing().gapAlGaN().value(), 0);
             assertEquals(1.4, s.bowing().gapInGaN().value(), 0);
             assertEquals(2.5, s.bowing().gapInAlN().value(), 0);
@@ -198,7 +200,7 @@ class BuiltInValuesTest {
         @Test
         void nonlinearSpontaneousPolarization() {
             // Bernardini & Fiorentini, Phys. Rev. B 64, 085207 (2001), as used by Ambacher et al., J. Phys.:
-            // Condens. Matter 14, 3399 (2002), REFERENCES 1.1 and 2 [from memory]
+            // Condens. Matter 14, 3399 (2002) [from memory]
             check(s, GAN, MaterialParameter.SPONTANEOUS_POLARIZATION, -0.034);
             check(s, ALN, MaterialParameter.SPONTANEOUS_POLARIZATION, -0.090);
             check(s, INN, MaterialParameter.SPONTANEOUS_POLARIZATION, -0.042);
@@ -210,7 +212,7 @@ class BuiltInValuesTest {
 
         @Test
         void elasticAndPiezoelectricConstantsOfAmbacher() {
-            // Ambacher et al., J. Appl. Phys. 87, 334 (2000) linear fits at x = 0, 1, REFERENCES 4 [from memory]:
+            // Ambacher et al., J. Appl. Phys. 87, 334 (2000) linear fits at x = 0, 1 [from memory]:
             // C13 = 5x + 103, C33 = -32x + 405 GPa, e31 = -0.11x - 0.49, e33 = 0.73x + 0.73 C/m^2, a = -0.077x + 3.189 A
             check(s, GAN, MaterialParameter.C13, 103);
             check(s, ALN, MaterialParameter.C13, 108);
@@ -222,7 +224,7 @@ class BuiltInValuesTest {
             check(s, ALN, MaterialParameter.E33, 1.46);
             check(s, GAN, MaterialParameter.LATTICE_A, 3.189);
             check(s, ALN, MaterialParameter.LATTICE_A, 3.112);
-            // eps(x) = -0.5x + 9.5 and m* = 0.22 of A00, REFERENCES 4 [from memory]
+            // eps(x) = -0.5x + 9.5 and m* = 0.22 of A00 [from memory]
             check(s, GAN, MaterialParameter.PERMITTIVITY_STATIC, 9.5);
             check(s, ALN, MaterialParameter.PERMITTIVITY_STATIC, 9.0);
             check(s, GAN, MaterialParameter.ELECTRON_MASS_PARALLEL, 0.22);
@@ -231,7 +233,7 @@ class BuiltInValuesTest {
 
         @Test
         void valuesWithoutAnAmbacherValueAreTheVurgaftmanMeyerOnes() {
-            // VM03, REFERENCES 1.1 / 1.2 [from memory]: InN lattice, GaN C11, gaps
+            // VM03 [from memory]: InN lattice, GaN C11, gaps
             check(s, INN, MaterialParameter.LATTICE_A, 3.545);
             check(s, INN, MaterialParameter.C13, 92);
             check(s, GAN, MaterialParameter.C11, 390);
@@ -242,7 +244,7 @@ class BuiltInValuesTest {
 
         @Test
         void valenceBandEdgesFollowTheSeventyThirtyRule() {
-            // A00's Delta Ec = 0.7 Delta Eg, REFERENCES 1.3 [from memory], so Ev = -0.3 (Eg0 - Eg0(GaN)) with the
+            // A00's Delta Ec = 0.7 Delta Eg [from memory], so Ev = -0.3 (Eg0 - Eg0(GaN)) with the
             // VM03 0 K gaps 3.510, 6.25, 0.78 eV: AlN -0.822, InN +0.819 eV
             check(s, GAN, MaterialParameter.VALENCE_BAND_EDGE, 0);
             check(s, ALN, MaterialParameter.VALENCE_BAND_EDGE, -0.3 * (6.25 - 3.510));
@@ -251,7 +253,7 @@ class BuiltInValuesTest {
 
         @Test
         void gapBowing() {
-            // AlGaN 1.0 eV (A00, REFERENCES 2 [from memory]); InGaN 1.4, InAlN 2.5 eV (VM03 [from memory])
+            // AlGaN 1.0 eV (A00 [from memory]); InGaN 1.4, InAlN 2.5 eV (VM03 [from memory])
             assertEquals(1.0, s.bowing().gapAlGaN().value(), 0);
             assertEquals(1.4, s.bowing().gapInGaN().value(), 0);
             assertEquals(2.5, s.bowing().gapInAlN().value(), 0);
@@ -260,7 +262,7 @@ class BuiltInValuesTest {
 
     @Test
     void nonlinearPiezoelectricCoefficientsInBothSets() {
-        // BF01 as reproduced in A02, REFERENCES 2 [from memory]: AlN a1 = -1.808, a2 = +5.624 (eps < 0),
+        // BF01 as reproduced in A02 [from memory]: AlN a1 = -1.808, a2 = +5.624 (eps < 0),
         // -7.888 (eps > 0); GaN -0.918, 9.541; InN -1.373, 7.559
         for (ParameterSet s : new ParameterSet[] {BuiltInParameterSets.vurgaftmanMeyer2003(),
             BuiltInParameterSets.ambacher2002()}) {

@@ -21,9 +21,11 @@ import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 
 /**
- * Strain and bound charge with the built-in sets against the check values of
- * shared/physics/REFERENCES.md section 5 ("[computed]" there from the cited formulas and
- * constants, which are themselves recalled from VM03, BFV97 and BF01).
+ * Strain and bound charge with the built-in sets against check values the
+ * project computed from the cited formulas and constants, which are themselves recalled from
+ * VM03 (I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003)), BFV97 (F. Bernardini,
+ * V. Fiorentini and D. Vanderbilt, Phys. Rev. B 56, R10024 (1997)) and BF01 (F. Bernardini and
+ * V. Fiorentini, Phys. Rev. B 64, 085207 (2001)).
  */
 class PublishedPolarizationTest {
     private static final ParameterSet VM03 = ParameterSets.named("vurgaftman-meyer-2003");
@@ -36,7 +38,7 @@ class PublishedPolarizationTest {
                 .top(TopBoundary.schottky(1, 0)).build();
     }
 
-    /** REFERENCES.md section 3: Al0.3Ga0.7N on GaN with VM03, eps_xx = 7.30e-3 and eps_zz = -3.98e-3. */
+    /** Computed: Al0.3Ga0.7N on GaN with VM03, eps_xx = 7.30e-3 and eps_zz = -3.98e-3. */
     @Test
     void vm03StrainOfAl03() {
         Strain s = Strain.pseudomorphic(VM03.material(Composition.alGaN(0.3)), VM03.material(Composition.GAN));
@@ -45,9 +47,10 @@ class PublishedPolarizationTest {
     }
 
     /**
-     * Table 5.1 row B (BFV97 Psp and e, VM03 C13/C33 and a, all linear) with the default set and the
-     * linear model; row C (BF01 nonlinear Psp and P_pz, VM03 a) with the ambacher-2002 set and the
-     * nonlinear model. The table gives 3-4 digits, hence 2e-3 relative.
+     * Computed sigma/e, column B (BFV97 Psp and e, VM03 C13/C33 and a, all linear) with the default
+     * set and the linear model; column C (BF01 nonlinear Psp and P_pz, VM03 a) with the ambacher-2002
+     * set and the nonlinear model. The values were computed by the project from those formulas and
+     * printed to 3-4 digits, hence 2e-3 relative.
      */
     @ParameterizedTest
     @CsvSource({"0.10, 5.41e12, 3.92e12", "0.15, 8.19e12, 6.06e12", "0.20, 1.103e13, 8.32e12",
@@ -62,7 +65,7 @@ class PublishedPolarizationTest {
         assertEquals(rowC, c, 2e-3 * rowC);
     }
 
-    /** REFERENCES.md 5.3 (set C): lattice-matched In0.1778Al0.8222N on GaN gives sigma/e = 2.32e13 cm^-2. */
+    /** Computed (set C, BF01 nonlinear): lattice-matched In0.1778Al0.8222N on GaN gives sigma/e = 2.32e13 cm^-2. */
     @Test
     void latticeMatchedInAlN() {
         Structure s = onGaN(A02, Composition.inAlN(0.1778), PolarizationModel.NONLINEAR);
@@ -70,7 +73,7 @@ class PublishedPolarizationTest {
         assertEquals(2.32e13, s.interfaceCharges().get(0).sheetDensityPerCm2(), 0.01e13);
     }
 
-    /** REFERENCES.md 5.3 (set C): In0.15Ga0.85N on GaN has sigma/e = -1.40e13 cm^-2 at its lower interface. */
+    /** Computed (set C, BF01 nonlinear): In0.15Ga0.85N on GaN has sigma/e = -1.40e13 cm^-2 at its lower interface. */
     @Test
     void inGaNOnGaN() {
         Structure s = onGaN(A02, Composition.inGaN(0.15), PolarizationModel.NONLINEAR);

@@ -45,7 +45,7 @@ class TeamSetTest {
         List<String> c13Sources = al30.source(MaterialParameter.C13).sources().stream().map(Source::key).toList();
         assertTrue(c13Sources.containsAll(List.of("LAB", "VM03")), c13Sources.toString());
         assertEquals("Vegard's law", al30.source(MaterialParameter.C13).rule());
-        // REFERENCES section 3 [computed]: Al0.3Ga0.7N on GaN with VM03 lattice constants, eps_xx = 7.30e-3
+        // [computed]: Al0.3Ga0.7N on GaN with VM03 lattice constants, eps_xx = 7.30e-3
         double epsXx = (team.binary(Binary.GAN).latticeA() - al30.latticeA()) / al30.latticeA();
         assertEquals(7.30e-3, epsXx, 0.005e-3);
         // gap with VM03 bowing 0.7 eV [from memory]: 0.3 x 6.25 + 0.7 x 3.510 - 0.7 x 0.21 = 4.185 eV at 0 K

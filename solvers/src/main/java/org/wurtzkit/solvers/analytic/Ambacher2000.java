@@ -9,8 +9,8 @@ import org.wurtzkit.units.Units;
  * and the analytic 2DEG model built from them ({@link ChargeBalanceModel}).
  *
  * <p><b>Provenance.</b> The paper itself was not available while this was written; the linear
- * fits below are those transcribed, from memory, in shared/physics/REFERENCES.md section 4. They
- * are used exactly as written there:
+ * fits below were recalled from memory (not checked against the printed paper). They are used
+ * exactly as listed here:
  * <ul>
  * <li>a(x) = (-0.077 x + 3.189) &Aring;; C13 = (5x + 103) GPa; C33 = (-32x + 405) GPa</li>
  * <li>e31 = (-0.11x - 0.49) C/m&sup2;; e33 = (0.73x + 0.73) C/m&sup2;; P_sp = (-0.052x - 0.029) C/m&sup2;</li>

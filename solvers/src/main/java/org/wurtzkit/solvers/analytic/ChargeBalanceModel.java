@@ -30,7 +30,7 @@ import org.wurtzkit.units.Units;
  *
  * <h2>Derivation (re-derived here; not copied from a formula in the literature)</h2>
  *
- * <p>The project's physics notes (shared/physics/REFERENCES.md section 4) record a published
+ * <p>A paper in Chinese Physics B (abstract seen, details not) gives a published
  * warning about "a longstanding confusion" in a widely cited 2DEG-density formula, whose details
  * were not available; the balance is therefore derived from Gauss's law alone.
  *
@@ -67,16 +67,16 @@ import org.wurtzkit.units.Units;
  *
  * <p>For a single barrier (thickness d, permittivity eps, S = sigma) at V = 0 this is
  * n_s = sigma/e - eps/(e^2 d) [e phi_B + E_F - dE_c], the form in which A00's model is usually
- * quoted (as recalled in shared/physics/REFERENCES.md section 4; the paper itself was not at hand).
+ * quoted (from memory; the paper itself was not at hand).
  * For a GaN cap on AlGaN on GaN the cap has the channel's polarization, so S_cap = 0 and
  * E_c(top) = E_c(ch): the two band-offset steps cancel and n_s = [sigma d/eps_b - (phi_B + E_F/e)] /
- * [e (d/eps_b + t_c/eps_c)], the cap expression of REFERENCES.md section 4.
+ * [e (d/eps_b + t_c/eps_c)], the cap expression used by the tests.
  *
  * <p>The Fermi level above the well bottom is E_F = E_0 + pi hbar^2 n_s / m_dos with the lowest
  * level of a triangular well in the mean field e n_s / (2 eps_w):
  * E_0 = [9 pi hbar e^2 n_s / (8 eps_w sqrt(8 m_z))]^{2/3} (the asymptotic Airy level, T. Ando, A.
- * B. Fowler and F. Stern, Rev. Mod. Phys. 54, 437 (1982); the expression A00 uses, as recalled in
- * REFERENCES.md). One subband, zero temperature.
+ * B. Fowler and F. Stern, Rev. Mod. Phys. 54, 437 (1982); the expression A00 uses, as recalled
+ * from memory). One subband, zero temperature.
  *
  * <p>Units: SI inside (m, m^-2, F/m^2, C/m^2); energies in eV and voltages in V as named.
  */
@@ -121,7 +121,7 @@ public final class ChargeBalanceModel {
             Require.inRange("polarization charge below layer \"" + name + "\" (C/m^2)", chargeBelow, -1, 1);
         }
 
-        /** @return thickness (nm) */
+        /** {@return thickness (nm)} */
         public double thicknessNm() {
             return Units.mToNm(thickness);
         }
@@ -164,12 +164,12 @@ public final class ChargeBalanceModel {
         this.dosCoefficient = Math.PI * HBAR * HBAR / (densityOfStatesMass * M0) / E;
     }
 
-    /** @return an empty builder */
+    /** {@return an empty builder} */
     public static Builder builder() {
         return new Builder();
     }
 
-    /** @return a builder pre-filled with this model */
+    /** {@return a builder pre-filled with this model} */
     public Builder toBuilder() {
         Builder b = new Builder();
         Collections.addAll(b.layers, layers);
@@ -299,17 +299,17 @@ public final class ChargeBalanceModel {
         return schottkyBarrierEv - surfaceOffsetEv - polarizationVoltage;
     }
 
-    /** @return the series capacitance of the layers above the channel, 1 / sum_j t_j/eps_j (F/m&sup2;) */
+    /** {@return the series capacitance of the layers above the channel, 1 / sum_j t_j/eps_j (F/m&sup2;)} */
     public double gateCapacitance() {
         return 1 / inverseCapacitance;
     }
 
-    /** @return 2DEG sheet density at the model's own gate bias (m^-2) */
+    /** {@return 2DEG sheet density at the model's own gate bias (m^-2)} */
     public double sheetDensity() {
         return sheetDensity(gateBiasV);
     }
 
-    /** @return 2DEG sheet density at the model's own gate bias (cm^-2) */
+    /** {@return 2DEG sheet density at the model's own gate bias (cm^-2)} */
     public double sheetDensityPerCm2() {
         return Units.perM2ToPerCm2(sheetDensity());
     }
@@ -432,42 +432,42 @@ public final class ChargeBalanceModel {
         return b.build();
     }
 
-    /** @return the layers between the gate and the channel, top first */
+    /** {@return the layers between the gate and the channel, top first} */
     public List<BarrierLayer> layers() {
         return List.of(layers);
     }
 
-    /** @return phi_B (eV) */
+    /** {@return phi_B (eV)} */
     public double schottkyBarrierEv() {
         return schottkyBarrierEv;
     }
 
-    /** @return the gate bias the model is evaluated at by default (V) */
+    /** {@return the gate bias the model is evaluated at by default (V)} */
     public double gateBiasV() {
         return gateBiasV;
     }
 
-    /** @return E_c(top layer) - E_c(channel) (eV) */
+    /** {@return E_c(top layer) - E_c(channel) (eV)} */
     public double surfaceOffsetEv() {
         return surfaceOffsetEv;
     }
 
-    /** @return sum_j S_j t_j / eps_j (V) */
+    /** {@return sum_j S_j t_j / eps_j (V)} */
     public double polarizationVoltage() {
         return polarizationVoltage;
     }
 
-    /** @return relative permittivity used for E_0 */
+    /** {@return relative permittivity used for E_0} */
     public double wellPermittivity() {
         return wellPermittivity;
     }
 
-    /** @return mass along the growth direction used for E_0 (m0) */
+    /** {@return mass along the growth direction used for E_0 (m0)} */
     public double quantizationMass() {
         return quantizationMass;
     }
 
-    /** @return in-plane density-of-states mass (m0) */
+    /** {@return in-plane density-of-states mass (m0)} */
     public double densityOfStatesMass() {
         return densityOfStatesMass;
     }
@@ -565,7 +565,11 @@ public final class ChargeBalanceModel {
             return this;
         }
 
-        /** @return the model @throws InvalidParameterException for a missing or out-of-range value */
+        /**
+         * {@return the model}
+         *
+         * @throws InvalidParameterException for a missing or out-of-range value
+         */
         public ChargeBalanceModel build() {
             return new ChargeBalanceModel(this);
         }

@@ -9,7 +9,7 @@
  * charge-control line. Built by hand, or from a {@link org.wurtzkit.structure.Structure} and its
  * parameter set.</li>
  * <li>{@link org.wurtzkit.solvers.analytic.Ambacher2000}: the composition-dependent expressions
- * of that paper for AlGaN/GaN, as transcribed in the project's physics notes.</li>
+ * of that paper for AlGaN/GaN, as recalled from memory (the paper was not at hand).</li>
  * </ul>
  */
 package org.wurtzkit.solvers.analytic;

@@ -13,7 +13,7 @@ final class SplitMix64 {
         state = seed;
     }
 
-    /** @return a uniform number in (-1, 1) */
+    /** {@return a uniform number in (-1, 1)} */
     double nextSigned() {
         long z = (state += 0x9E3779B97F4A7C15L);
         z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;

@@ -99,7 +99,7 @@ public final class Mesh {
         return len - Math.min(len / 2, phiHalfInverse(total - phi, h0, c, hMax));
     }
 
-    /** @return the number of nodes */
+    /** {@return the number of nodes} */
     public int size() {
         return nodes.length;
     }
@@ -109,7 +109,7 @@ public final class Mesh {
         return nodes[i];
     }
 
-    /** @return a copy of the node depths (m) */
+    /** {@return a copy of the node depths (m)} */
     public double[] nodes() {
         return nodes.clone();
     }
@@ -138,7 +138,7 @@ public final class Mesh {
         return depth - nodes[ins - 1] <= nodes[ins] - depth ? ins - 1 : ins;
     }
 
-    /** @return the largest spacing (m) */
+    /** {@return the largest spacing (m)} */
     public double maxSpacing() {
         double m = 0;
         for (int i = 0; i + 1 < nodes.length; i++) {

@@ -67,7 +67,7 @@ public sealed interface BandAlignment permits BandAlignment.ValenceBandTable, Ba
         out[1] = ev;
     }
 
-    /** @return the tabulated-valence-band alignment */
+    /** {@return the tabulated-valence-band alignment} */
     static BandAlignment valenceBandTable() {
         return new ValenceBandTable();
     }

@@ -17,13 +17,13 @@ public record ConvergenceRecord(boolean converged, int iterations, int newtonIte
         residualHistory = residualHistory.clone();
     }
 
-    /** @return a copy of the residual history (V) */
+    /** {@return a copy of the residual history (V)} */
     @Override
     public double[] residualHistory() {
         return residualHistory.clone();
     }
 
-    /** @return the last residual (V), or 0 when there was no outer iteration */
+    /** {@return the last residual (V), or 0 when there was no outer iteration} */
     public double finalResidual() {
         return residualHistory.length == 0 ? 0 : residualHistory[residualHistory.length - 1];
     }

@@ -20,17 +20,17 @@ public class NotConvergedException extends WurtzkitException {
         this.potential = potential.clone();
     }
 
-    /** @return iterations, residual history and the reason */
+    /** {@return iterations, residual history and the reason} */
     public ConvergenceRecord record() {
         return record;
     }
 
-    /** @return node depths of the last iterate (m) */
+    /** {@return node depths of the last iterate (m)} */
     public double[] lastDepth() {
         return depth.clone();
     }
 
-    /** @return electrostatic potential of the last iterate (V), finite */
+    /** {@return electrostatic potential of the last iterate (V), finite} */
     public double[] lastPotential() {
         return potential.clone();
     }

@@ -80,12 +80,12 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
         }
     }
 
-    /** @return the default automatic region: 40 nm on both sides of every interface */
+    /** {@return the default automatic region: 40 nm on both sides of every interface} */
     static QuantumRegion automatic() {
         return new Automatic(40 * Units.NM);
     }
 
-    /** @return no quantum region */
+    /** {@return no quantum region} */
     static QuantumRegion none() {
         return new None();
     }

@@ -58,7 +58,7 @@ public final class SelfConsistentSolver {
         this.options = Require.nonNull("solver options", options);
     }
 
-    /** @return the settings */
+    /** {@return the settings} */
     public SolverOptions options() {
         return options;
     }

@@ -160,17 +160,17 @@ public final class Solution {
         }
     }
 
-    /** @return the structure that was solved */
+    /** {@return the structure that was solved} */
     public Structure structure() {
         return structure;
     }
 
-    /** @return node depths (m) */
+    /** {@return node depths (m)} */
     public double[] depth() {
         return depth.clone();
     }
 
-    /** @return node depths (nm) */
+    /** {@return node depths (nm)} */
     public double[] depthNm() {
         double[] out = new double[depth.length];
         for (int i = 0; i < out.length; i++) {
@@ -179,57 +179,57 @@ public final class Solution {
         return out;
     }
 
-    /** @return number of mesh nodes */
+    /** {@return number of mesh nodes} */
     public int nodeCount() {
         return depth.length;
     }
 
-    /** @return electrostatic potential (V) */
+    /** {@return electrostatic potential (V)} */
     public double[] potential() {
         return potential.clone();
     }
 
-    /** @return conduction-band edge E_c - E_F (eV), of the layer below at interface nodes */
+    /** {@return conduction-band edge E_c - E_F (eV), of the layer below at interface nodes} */
     public double[] conductionBand() {
         return ec.clone();
     }
 
-    /** @return valence-band edge E_v - E_F (eV), of the layer below at interface nodes */
+    /** {@return valence-band edge E_v - E_F (eV), of the layer below at interface nodes} */
     public double[] valenceBand() {
         return ev.clone();
     }
 
-    /** @return the electron Fermi level (eV): 0 by construction */
+    /** {@return the electron Fermi level (eV): 0 by construction} */
     public double fermiLevelEv() {
         return 0;
     }
 
-    /** @return the holes' quasi-Fermi level (eV) */
+    /** {@return the holes' quasi-Fermi level (eV)} */
     public double holeFermiLevelEv() {
         return holeFermiEv;
     }
 
-    /** @return band diagram for plotting: rows depth (m), E_c (eV), E_v (eV), both sides of every step */
+    /** {@return band diagram for plotting: rows depth (m), E_c (eV), E_v (eV), both sides of every step} */
     public double[][] bandDiagram() {
         return new double[][] {plotDepth.clone(), plotEc.clone(), plotEv.clone()};
     }
 
-    /** @return electron density (m^-3), box-averaged; subband electrons inside windows */
+    /** {@return electron density (m^-3), box-averaged; subband electrons inside windows} */
     public double[] electronDensity() {
         return n.clone();
     }
 
-    /** @return hole density (m^-3), box-averaged */
+    /** {@return hole density (m^-3), box-averaged} */
     public double[] holeDensity() {
         return p.clone();
     }
 
-    /** @return ionised donors and empty donor-like traps (m^-3), box-averaged */
+    /** {@return ionised donors and empty donor-like traps (m^-3), box-averaged} */
     public double[] ionizedDonors() {
         return donors.clone();
     }
 
-    /** @return ionised acceptors and filled acceptor-like traps (m^-3), box-averaged */
+    /** {@return ionised acceptors and filled acceptor-like traps (m^-3), box-averaged} */
     public double[] ionizedAcceptors() {
         return acceptors.clone();
     }
@@ -242,22 +242,22 @@ public final class Solution {
         return charge.clone();
     }
 
-    /** @return midpoints of the mesh cells (m) */
+    /** {@return midpoints of the mesh cells (m)} */
     public double[] cellMidpoints() {
         return midpoints.clone();
     }
 
-    /** @return electric field along the depth direction in each cell (V/m) */
+    /** {@return electric field along the depth direction in each cell (V/m)} */
     public double[] electricField() {
         return field.clone();
     }
 
-    /** @return every subband of every window, windows in order, energies ascending within a window */
+    /** {@return every subband of every window, windows in order, energies ascending within a window} */
     public List<Subband> subbands() {
         return subbands;
     }
 
-    /** @return the quantum windows [top, bottom] depth (m) */
+    /** {@return the quantum windows [top, bottom] depth (m)} */
     public double[][] quantumWindows() {
         double[][] c = new double[windows.length][];
         for (int i = 0; i < c.length; i++) {
@@ -266,12 +266,12 @@ public final class Solution {
         return c;
     }
 
-    /** @return electron sheet density held in the subbands of each window (m^-2) */
+    /** {@return electron sheet density held in the subbands of each window (m^-2)} */
     public double[] wellSheetDensities() {
         return wellSheetDensity.clone();
     }
 
-    /** @return all electrons of the stack, the integral of n over depth (m^-2) */
+    /** {@return all electrons of the stack, the integral of n over depth (m^-2)} */
     public double electronSheetDensity() {
         return electronSheet;
     }
@@ -301,7 +301,7 @@ public final class Solution {
         return sum;
     }
 
-    /** @return all holes of the stack (m^-2) */
+    /** {@return all holes of the stack (m^-2)} */
     public double holeSheetDensity() {
         return holeSheet;
     }
@@ -323,7 +323,7 @@ public final class Solution {
         return Units.perM2ToPerCm2(s);
     }
 
-    /** @return sheet charge on the gate metal (C/m^2); 0 for a free surface */
+    /** {@return sheet charge on the gate metal (C/m^2); 0 for a free surface} */
     public double gateCharge() {
         return gateCharge;
     }
@@ -345,7 +345,7 @@ public final class Solution {
         return subbandLimitReached;
     }
 
-    /** @return how the solve converged */
+    /** {@return how the solve converged} */
     public ConvergenceRecord convergence() {
         return record;
     }

@@ -44,7 +44,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         Require.nonNull("band alignment", bandAlignment);
     }
 
-    /** @return the defaults listed in the class documentation */
+    /** {@return the defaults listed in the class documentation} */
     public static SolverOptions defaults() {
         return DEFAULTS;
     }

@@ -20,13 +20,13 @@ public record Subband(int window, int index, double energyEv, double[] wavefunct
         wavefunction = wavefunction.clone();
     }
 
-    /** @return a copy of psi (1/sqrt(m)) */
+    /** {@return a copy of psi (1/sqrt(m))} */
     @Override
     public double[] wavefunction() {
         return wavefunction.clone();
     }
 
-    /** @return occupation (cm^-2) */
+    /** {@return occupation (cm^-2)} */
     public double sheetDensityPerCm2() {
         return Units.perM2ToPerCm2(sheetDensity);
     }

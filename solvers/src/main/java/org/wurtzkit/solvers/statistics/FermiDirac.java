@@ -210,8 +210,8 @@ public final class FermiDirac {
     /** A_1 = 2^(-3/2) (exact, from the series F = z - z^2/2^(3/2) + ...). */
     private static final double JD_A1 = 0.35355339059327373;
     /**
-     * A_2..A_4 of Joyce &amp; Dixon, APL 31, 354 (1977), from memory (as listed in the project's
-     * REFERENCES 5.9). They only shape the Newton seed, so an error in them can change the number
+     * A_2..A_4 of Joyce &amp; Dixon, APL 31, 354 (1977), from memory (not checked against the
+     * printed paper). They only shape the Newton seed, so an error in them can change the number
      * of iterations, never the result.
      */
     private static final double JD_A2 = -4.95009e-3;

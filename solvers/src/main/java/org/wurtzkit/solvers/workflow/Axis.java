@@ -56,27 +56,27 @@ public final class Axis {
         return new Axis(Column.of(name, unit), v);
     }
 
-    /** @return the axis as a table column */
+    /** {@return the axis as a table column} */
     public Column column() {
         return column;
     }
 
-    /** @return the parameter's name */
+    /** {@return the parameter's name} */
     public String name() {
         return column.name();
     }
 
-    /** @return its unit */
+    /** {@return its unit} */
     public String unit() {
         return column.unit();
     }
 
-    /** @return the values (a copy) */
+    /** {@return the values (a copy)} */
     public double[] values() {
         return values.clone();
     }
 
-    /** @return number of values */
+    /** {@return number of values} */
     public int size() {
         return values.length;
     }

@@ -65,12 +65,12 @@ public final class BiasGrid {
         return new BiasGrid(v);
     }
 
-    /** @return the biases (V), a copy */
+    /** {@return the biases (V), a copy} */
     public double[] values() {
         return values.clone();
     }
 
-    /** @return number of biases */
+    /** {@return number of biases} */
     public int size() {
         return values.length;
     }

@@ -30,7 +30,7 @@ public final class BiasSweep {
         this.solver = Require.nonNull("solver", solver);
     }
 
-    /** @return the solver */
+    /** {@return the solver} */
     public SelfConsistentSolver solver() {
         return solver;
     }

@@ -70,22 +70,22 @@ public final class BiasSweepResult implements CsvTable {
         this.cv = new CapacitanceVoltage(bias, gateCharge);
     }
 
-    /** @return the structure as given to the sweep (its own bias is not one of the points, unless listed) */
+    /** {@return the structure as given to the sweep (its own bias is not one of the points, unless listed)} */
     public Structure structure() {
         return structure;
     }
 
-    /** @return number of bias points */
+    /** {@return number of bias points} */
     public int size() {
         return bias.length;
     }
 
-    /** @return the gate biases in solving order (V) */
+    /** {@return the gate biases in solving order (V)} */
     public double[] gateBiasV() {
         return bias.clone();
     }
 
-    /** @return 2DEG sheet density, the subband electrons of the quantum windows (m^-2) */
+    /** {@return 2DEG sheet density, the subband electrons of the quantum windows (m^-2)} */
     public double[] sheetDensity() {
         double[] out = new double[sheet.length];
         for (int i = 0; i < out.length; i++) {
@@ -94,22 +94,22 @@ public final class BiasSweepResult implements CsvTable {
         return out;
     }
 
-    /** @return 2DEG sheet density (cm^-2), exactly as {@link Solution#sheetDensityPerCm2()} reports it */
+    /** {@return 2DEG sheet density (cm^-2), exactly as {@link Solution#sheetDensityPerCm2()} reports it} */
     public double[] sheetDensityPerCm2() {
         return sheet.clone();
     }
 
-    /** @return sheet charge on the gate metal (C/m&sup2;) */
+    /** {@return sheet charge on the gate metal (C/m&sup2;)} */
     public double[] gateCharge() {
         return gateCharge.clone();
     }
 
-    /** @return all electrons of the stack (m^-2) */
+    /** {@return all electrons of the stack (m^-2)} */
     public double[] electronSheetDensity() {
         return allElectrons.clone();
     }
 
-    /** @return outer Schroedinger-Poisson iterations per point, -1 for a failed point */
+    /** {@return outer Schroedinger-Poisson iterations per point, -1 for a failed point} */
     public int[] iterations() {
         return iterations.clone();
     }
@@ -130,12 +130,12 @@ public final class BiasSweepResult implements CsvTable {
         return Optional.ofNullable(solutions[i]);
     }
 
-    /** @return the failed points with their reasons, in sweep order (empty if all converged) */
+    /** {@return the failed points with their reasons, in sweep order (empty if all converged)} */
     public List<PointFailure> failures() {
         return failures;
     }
 
-    /** @return the quasi-static C-V curve C = dQ_gate/dV on the intervals between the points */
+    /** {@return the quasi-static C-V curve C = dQ_gate/dV on the intervals between the points} */
     public CapacitanceVoltage capacitanceVoltage() {
         return cv;
     }

@@ -40,17 +40,17 @@ public final class CapacitanceVoltage implements CsvTable {
         }
     }
 
-    /** @return number of intervals (one fewer than the sweep's points) */
+    /** {@return number of intervals (one fewer than the sweep's points)} */
     public int intervals() {
         return capacitance.length;
     }
 
-    /** @return C on each interval (F/m&sup2;) */
+    /** {@return C on each interval (F/m&sup2;)} */
     public double[] capacitance() {
         return capacitance.clone();
     }
 
-    /** @return C on each interval (&mu;F/cm&sup2;) */
+    /** {@return C on each interval (&mu;F/cm&sup2;)} */
     public double[] capacitanceMicroFaradPerCm2() {
         double[] out = new double[capacitance.length];
         for (int k = 0; k < out.length; k++) {
@@ -59,21 +59,21 @@ public final class CapacitanceVoltage implements CsvTable {
         return out;
     }
 
-    /** @return the bias at the start of each interval (V), in solving order */
+    /** {@return the bias at the start of each interval (V), in solving order} */
     public double[] intervalStartV() {
         double[] out = new double[capacitance.length];
         System.arraycopy(bias, 0, out, 0, out.length);
         return out;
     }
 
-    /** @return the bias at the end of each interval (V) */
+    /** {@return the bias at the end of each interval (V)} */
     public double[] intervalEndV() {
         double[] out = new double[capacitance.length];
         System.arraycopy(bias, 1, out, 0, out.length);
         return out;
     }
 
-    /** @return the midpoint bias of each interval (V), where C_k is second-order accurate */
+    /** {@return the midpoint bias of each interval (V), where C_k is second-order accurate} */
     public double[] midpointBiasV() {
         double[] out = new double[capacitance.length];
         for (int k = 0; k < out.length; k++) {

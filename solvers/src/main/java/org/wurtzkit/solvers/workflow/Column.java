@@ -45,7 +45,7 @@ public record Column(String name, String unit) {
         return new Column(name, unit);
     }
 
-    /** @return the CSV header, {@code name_unit}, or {@code name} for an empty unit */
+    /** {@return the CSV header, {@code name_unit}, or {@code name} for an empty unit} */
     public String header() {
         return unit.isEmpty() ? name : name + "_" + unit;
     }

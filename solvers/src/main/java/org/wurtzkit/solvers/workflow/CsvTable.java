@@ -18,10 +18,10 @@ import org.wurtzkit.errors.Require;
  * does not exist (a failed point) is an empty cell, and the row's {@code status} column says why.
  */
 public interface CsvTable {
-    /** @return the columns, in order */
+    /** {@return the columns, in order} */
     List<Column> columns();
 
-    /** @return number of data rows */
+    /** {@return number of data rows} */
     int rowCount();
 
     /**
@@ -30,7 +30,7 @@ public interface CsvTable {
      */
     List<String> row(int row);
 
-    /** @return the header line's cells */
+    /** {@return the header line's cells} */
     default List<String> headers() {
         return columns().stream().map(Column::header).toList();
     }

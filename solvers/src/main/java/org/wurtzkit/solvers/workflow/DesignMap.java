@@ -69,12 +69,12 @@ public final class DesignMap {
         return new Builder(factory);
     }
 
-    /** @return the axes, in order */
+    /** {@return the axes, in order} */
     public List<Axis> axes() {
         return axes;
     }
 
-    /** @return the number of points, the product of the axis sizes */
+    /** {@return the number of points, the product of the axis sizes} */
     public int size() {
         int n = 1;
         for (Axis a : axes) {
@@ -83,7 +83,7 @@ public final class DesignMap {
         return n;
     }
 
-    /** @return the thread count the map runs with */
+    /** {@return the thread count the map runs with} */
     public int threads() {
         return threads;
     }
@@ -203,7 +203,11 @@ public final class DesignMap {
             return this;
         }
 
-        /** @return the map @throws InvalidParameterException if there is no axis */
+        /**
+         * {@return the map}
+         *
+         * @throws InvalidParameterException if there is no axis
+         */
         public DesignMap build() {
             return new DesignMap(this);
         }

@@ -67,17 +67,17 @@ public final class DesignMapResult implements CsvTable {
         return sb.toString();
     }
 
-    /** @return the axes */
+    /** {@return the axes} */
     public List<Axis> axes() {
         return axes;
     }
 
-    /** @return the computed columns (without the axes and the status) */
+    /** {@return the computed columns (without the axes and the status)} */
     public List<Column> quantities() {
         return quantities;
     }
 
-    /** @return number of points */
+    /** {@return number of points} */
     public int size() {
         return values.length;
     }
@@ -159,7 +159,7 @@ public final class DesignMapResult implements CsvTable {
         return Optional.ofNullable(failures[i]);
     }
 
-    /** @return every failed point, in map order */
+    /** {@return every failed point, in map order} */
     public List<PointFailure> failures() {
         return failureList;
     }

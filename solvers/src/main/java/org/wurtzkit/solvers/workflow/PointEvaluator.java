@@ -14,7 +14,7 @@ import org.wurtzkit.structure.Structure;
  * equals a serial one bit for bit. An exception thrown by {@link #evaluate} marks the point failed.
  */
 public interface PointEvaluator {
-    /** @return the output columns, one per value returned by {@link #evaluate} */
+    /** {@return the output columns, one per value returned by {@link #evaluate}} */
     List<Column> columns();
 
     /**

@@ -28,7 +28,7 @@ public final class SpreadResult implements CsvTable {
      * @param failure             why it failed, or null
      */
     public record Member(String parameterSet, double sheetDensityPerCm2, double thresholdVoltage, String failure) {
-        /** @return true if the member was computed */
+        /** {@return true if the member was computed} */
         public boolean succeeded() {
             return failure == null;
         }
@@ -54,7 +54,7 @@ public final class SpreadResult implements CsvTable {
             return new Statistics(v[0], med, v[n - 1], n);
         }
 
-        /** @return max - min */
+        /** {@return max - min} */
         public double range() {
             return max - min;
         }
@@ -91,7 +91,7 @@ public final class SpreadResult implements CsvTable {
         this.extraction = extraction;
     }
 
-    /** @return every member, in the order of the sets */
+    /** {@return every member, in the order of the sets} */
     public List<Member> members() {
         return members;
     }
@@ -104,22 +104,22 @@ public final class SpreadResult implements CsvTable {
         return members.stream().filter(x -> x.parameterSet().equals(parameterSet)).findFirst();
     }
 
-    /** @return statistics of n_s (cm^-2) */
+    /** {@return statistics of n_s (cm^-2)} */
     public Statistics sheetDensityPerCm2() {
         return sheet;
     }
 
-    /** @return statistics of V_th (V) */
+    /** {@return statistics of V_th (V)} */
     public Statistics thresholdVoltage() {
         return threshold;
     }
 
-    /** @return how V_th was obtained */
+    /** {@return how V_th was obtained} */
     public ThresholdExtraction thresholdExtraction() {
         return extraction;
     }
 
-    /** @return the members that failed */
+    /** {@return the members that failed} */
     public List<PointFailure> failures() {
         return failures;
     }

@@ -10,7 +10,7 @@ import org.wurtzkit.structure.Structure;
  * deterministic. Ready-made families are in {@link StructureFamilies}.
  */
 public interface StructureFamily {
-    /** @return the parameter's name and unit */
+    /** {@return the parameter's name and unit} */
     Column parameter();
 
     /**

@@ -33,32 +33,32 @@ public class TargetOutOfReachException extends InvalidParameterException {
         this.upperBound = upperBound;
     }
 
-    /** @return the requested target */
+    /** {@return the requested target} */
     public double target() {
         return target;
     }
 
-    /** @return the smaller of the values at the two ends of the interval */
+    /** {@return the smaller of the values at the two ends of the interval} */
     public double reachableMin() {
         return reachableMin;
     }
 
-    /** @return the larger of the values at the two ends of the interval */
+    /** {@return the larger of the values at the two ends of the interval} */
     public double reachableMax() {
         return reachableMax;
     }
 
-    /** @return the searched parameter, as a column header (name_unit) */
+    /** {@return the searched parameter, as a column header (name_unit)} */
     public String searchedParameter() {
         return searchedParameter;
     }
 
-    /** @return lower end of the searched interval */
+    /** {@return lower end of the searched interval} */
     public double lowerBound() {
         return lowerBound;
     }
 
-    /** @return upper end of the searched interval */
+    /** {@return upper end of the searched interval} */
     public double upperBound() {
         return upperBound;
     }

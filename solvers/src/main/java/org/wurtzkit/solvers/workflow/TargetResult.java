@@ -36,52 +36,52 @@ public final class TargetResult implements CsvTable {
         this.columns = List.of(Column.of("evaluation", ""), parameter, quantity, Column.of("accepted", ""));
     }
 
-    /** @return the searched parameter's name and unit */
+    /** {@return the searched parameter's name and unit} */
     public Column parameter() {
         return parameter;
     }
 
-    /** @return the target quantity's name and unit */
+    /** {@return the target quantity's name and unit} */
     public Column quantity() {
         return quantity;
     }
 
-    /** @return the requested target, in the quantity's unit */
+    /** {@return the requested target, in the quantity's unit} */
     public double target() {
         return target;
     }
 
-    /** @return the accepted absolute deviation from the target, in the quantity's unit */
+    /** {@return the accepted absolute deviation from the target, in the quantity's unit} */
     public double tolerance() {
         return tolerance;
     }
 
-    /** @return the parameter value found, in its unit */
+    /** {@return the parameter value found, in its unit} */
     public double value() {
         return value;
     }
 
-    /** @return the quantity at that value, within {@link #tolerance()} of the target */
+    /** {@return the quantity at that value, within {@link #tolerance()} of the target} */
     public double achieved() {
         return achieved;
     }
 
-    /** @return the structure at the value found */
+    /** {@return the structure at the value found} */
     public Structure structure() {
         return structure;
     }
 
-    /** @return number of evaluations (each one a full solve or bias sweep) */
+    /** {@return number of evaluations (each one a full solve or bias sweep)} */
     public int evaluations() {
         return evaluatedParameters.length;
     }
 
-    /** @return the parameter values evaluated, in order */
+    /** {@return the parameter values evaluated, in order} */
     public double[] evaluatedParameters() {
         return evaluatedParameters.clone();
     }
 
-    /** @return the quantity at each evaluated value */
+    /** {@return the quantity at each evaluated value} */
     public double[] evaluatedValues() {
         return evaluatedValues.clone();
     }

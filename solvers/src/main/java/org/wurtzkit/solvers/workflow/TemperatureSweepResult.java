@@ -81,27 +81,27 @@ public final class TemperatureSweepResult implements CsvTable {
         return e;
     }
 
-    /** @return the structure as given */
+    /** {@return the structure as given} */
     public Structure structure() {
         return structure;
     }
 
-    /** @return number of points */
+    /** {@return number of points} */
     public int size() {
         return temperature.length;
     }
 
-    /** @return temperatures in solving order (K) */
+    /** {@return temperatures in solving order (K)} */
     public double[] temperatureK() {
         return temperature.clone();
     }
 
-    /** @return 2DEG sheet density (cm^-2) */
+    /** {@return 2DEG sheet density (cm^-2)} */
     public double[] sheetDensityPerCm2() {
         return sheet.clone();
     }
 
-    /** @return gate charge (C/m&sup2;), 0 for a free surface */
+    /** {@return gate charge (C/m&sup2;), 0 for a free surface} */
     public double[] gateCharge() {
         return gateCharge.clone();
     }
@@ -114,12 +114,12 @@ public final class TemperatureSweepResult implements CsvTable {
         return groundSubband.clone();
     }
 
-    /** @return E_c - E_v at the deepest node (eV) */
+    /** {@return E_c - E_v at the deepest node (eV)} */
     public double[] bottomBandGapEv() {
         return bottomGap.clone();
     }
 
-    /** @return outer iterations per point, -1 for a failed point */
+    /** {@return outer iterations per point, -1 for a failed point} */
     public int[] iterations() {
         return iterations.clone();
     }
@@ -132,7 +132,7 @@ public final class TemperatureSweepResult implements CsvTable {
         return Optional.ofNullable(solutions[i]);
     }
 
-    /** @return the failed points, in sweep order */
+    /** {@return the failed points, in sweep order} */
     public List<PointFailure> failures() {
         return failures;
     }

@@ -53,7 +53,7 @@ public sealed interface ThresholdDefinition permits ThresholdDefinition.Constant
         }
     }
 
-    /** @return a short description for reports */
+    /** {@return a short description for reports} */
     String describe();
 
     /**
@@ -64,7 +64,7 @@ public sealed interface ThresholdDefinition permits ThresholdDefinition.Constant
         return new ConstantDensity(levelPerCm2);
     }
 
-    /** @return the linear-extrapolation definition */
+    /** {@return the linear-extrapolation definition} */
     static ThresholdDefinition linearExtrapolation() {
         return new LinearExtrapolation();
     }

@@ -23,7 +23,7 @@ import org.wurtzkit.units.Constants;
 
 /** The set-fed variant of the charge-balance model ({@link ChargeBalanceModel#fromStructure}). */
 class ChargeBalanceModelTest {
-    /** A00's rule dE_c = 0.7 dE_g (REFERENCES.md section 1.3, from memory). */
+    /** A00's rule dE_c = 0.7 dE_g (Ambacher et al., J. Appl. Phys. 87, 334 (2000), from memory). */
     private static final SolverOptions A00_LINEUP = SolverOptions.defaults()
             .withBandAlignment(BandAlignment.conductionBandFraction(0.7));
 
@@ -39,8 +39,8 @@ class ChargeBalanceModelTest {
 
     /**
      * Fed by core's structure with the constants of A00 (core's {@code A00TestSet}: A00's linear
-     * end points, 300 K gaps, m = 0.22) and A00's 0.7 line-up, the model reproduces REFERENCES.md
-     * table 5.2 ("[computed]" from A00's expressions as recalled) within 3e-3 relative. It cannot
+     * end points, 300 K gaps, m = 0.22) and A00's 0.7 line-up, the model reproduces the table
+     * {@code reference/ambacher2000-sheet-density.csv} (computed from A00's expressions as recalled) within 3e-3 relative. It cannot
      * be exact, for two reasons, both bounded here: (1) E_0 uses the channel's permittivity (GaN,
      * 9.5), as the field of the well is in GaN, whereas the expression of the table uses the
      * barrier's eps(x); that moves n_s by at most 2.7e-3 relative in this range (x = 0.3, d = 5 nm;
@@ -66,7 +66,8 @@ class ChargeBalanceModelTest {
     }
 
     /**
-     * REFERENCES.md GaN-cap table (x = 0.3, d = 20 nm, phi_b = 0.84 eV on the cap, "[computed]"),
+     * The GaN-cap values of {@link Ambacher2000Test} (x = 0.3, d = 20 nm, phi_b = 0.84 eV on the cap,
+     * computed by the project from the cap expression),
      * reproduced from a real three-layer structure within 2 %: core puts -sigma at the cap/barrier
      * interface by itself, and the two offsets cancel, as the cap expression assumes.
      */

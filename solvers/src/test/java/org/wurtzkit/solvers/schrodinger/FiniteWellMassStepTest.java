@@ -10,6 +10,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.wurtzkit.testing.ReferenceTable;
 
 /**
  * Finite square well of width L and depth V0 with a mass step at both interfaces, against the
@@ -22,8 +23,9 @@ import org.junit.jupiter.params.provider.MethodSource;
  * equations are multiplied by cos(kL/2) resp. sin(kL/2), which changes no root (the two factors
  * never vanish together with the other term).
  *
- * <p>The cases and the table values are those of /work/shared/physics/REFERENCES.md section 5.7,
- * which are themselves "[computed]" (Brent roots) in that file, not published data.
+ * <p>The cases and the table values are in the test resource {@code reference/finite-well-levels.csv};
+ * they are computed (Brent roots of the matching conditions, recomputed with an independent
+ * root finder), not published data.
  */
 class FiniteWellMassStepTest {
 
@@ -32,10 +34,22 @@ class FiniteWellMassStepTest {
 
     static List<Arguments> cases() {
         List<Arguments> list = new ArrayList<>();
-        // L (nm), V0 (eV), m_w, m_b, table values (REFERENCES.md 5.7, [computed])
-        list.add(Arguments.of(5.0, 0.4, 0.20, 0.20, new double[] {0.045788, 0.177432, 0.362957}));
-        list.add(Arguments.of(5.0, 0.4, 0.20, 0.25, new double[] {0.043712, 0.171509, 0.359372}));
-        list.add(Arguments.of(3.0, 0.5, 0.20, 0.30, new double[] {0.092189, 0.355838}));
+        // rows of reference/finite-well-levels.csv: L (nm), V0 (eV), m_w, m_b, n, E_n (eV), grouped per case
+        double[][] rows = ReferenceTable.rows("/reference/finite-well-levels.csv");
+        int start = 0;
+        for (int i = 1; i <= rows.length; i++) {
+            boolean sameCase = i < rows.length && rows[i][0] == rows[start][0] && rows[i][1] == rows[start][1]
+                    && rows[i][2] == rows[start][2] && rows[i][3] == rows[start][3];
+            if (!sameCase) {
+                double[] levels = new double[i - start];
+                for (int j = start; j < i; j++) {
+                    levels[j - start] = rows[j][5];
+                }
+                double[] r = rows[start];
+                list.add(Arguments.of(r[0], r[1], r[2], r[3], levels));
+                start = i;
+            }
+        }
         return list;
     }
 

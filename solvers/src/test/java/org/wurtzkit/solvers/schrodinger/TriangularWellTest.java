@@ -4,13 +4,15 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.wurtzkit.testing.ReferenceTable;
 
 /**
  * Triangular well V = eFz with a hard wall at z = 0: exact E_n = -a_n (hbar² e² F² / 2m)^{1/3},
  * a_n the zeros of the Airy function Ai (T. Ando, A. B. Fowler, F. Stern, Rev. Mod. Phys. 54, 437
  * (1982), Sec. III [from memory]). The zeros are those of M. Abramowitz and I. A. Stegun,
- * <i>Handbook of Mathematical Functions</i>, NBS 1964, Table 10.13 (also DLMF Sec. 9.9), as listed
- * to 8 decimals in /work/shared/physics/REFERENCES.md 5.4.
+ * <i>Handbook of Mathematical Functions</i>, NBS 1964, Table 10.13 (also DLMF Sec. 9.9), kept to 8
+ * decimals in the test resource {@code reference/airy-zeros.csv} (its header says how they were
+ * obtained).
  *
  * <p>m = 0.20, F = 1 MV/cm; the decay length (hbar²/(2 m e F))^{1/3} is 1.24 nm and the third
  * level's classical turning point is at 6.8 nm, so a 30 nm window makes the far Dirichlet wall
@@ -18,8 +20,8 @@ import org.junit.jupiter.api.Test;
  */
 class TriangularWellTest {
 
-    /** Airy zeros a_1..a_5 (A&amp;S Table 10.13, via REFERENCES.md 5.4). */
-    private static final double[] AIRY_ZEROS = {-2.33810741, -4.08794944, -5.52055983, -6.78670809, -7.94413359};
+    /** Airy zeros a_1..a_5 (A&amp;S Table 10.13), column 1 of {@code reference/airy-zeros.csv}. */
+    private static final double[] AIRY_ZEROS = ReferenceTable.column("/reference/airy-zeros.csv", 1);
 
     private static final double MASS = 0.20;
     private static final double FIELD_V_PER_M = 1e8; // 1 MV/cm
@@ -43,7 +45,9 @@ class TriangularWellTest {
 
     @Test
     void closedFormReproducesTheReferenceValues() {
-        // REFERENCES.md 5.5, "[computed]" there from the same formula: 0.289843, 0.506761, 0.684354 eV.
+        // Levels at m = 0.20, F = 1 MV/cm computed by the project from the exact Airy form of Ando,
+        // Fowler & Stern, Rev. Mod. Phys. 54, 437 (1982), with CODATA 2018 constants (computed here;
+        // guards the Airy-zero table and the constants against a typo).
         assertEquals(0.289843, exact(1), 1e-6);
         assertEquals(0.506761, exact(2), 1e-6);
         assertEquals(0.684354, exact(3), 1e-6);

@@ -22,6 +22,7 @@ import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Constants;
+import org.wurtzkit.testing.StandardStacks;
 import org.wurtzkit.units.Units;
 
 /** The self-consistent solver on metal-face and N-face AlGaN/GaN stacks with the default parameter set. */
@@ -30,13 +31,7 @@ class HemtPhysicsTest {
     private static final SelfConsistentSolver SOLVER = new SelfConsistentSolver();
 
     static Structure hemt(double x, double barrierNm, double capNm, TopBoundary top) {
-        Structure.Builder b = Structure.builder(SET)
-                .grow(Layer.of("buffer", Composition.GAN, 2000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(x), barrierNm * NM));
-        if (capNm > 0) {
-            b.grow(Layer.of("cap", Composition.GAN, capNm * NM));
-        }
-        return b.top(top).build();
+        return StandardStacks.hemt(SET, 2000, x, barrierNm, capNm, top);
     }
 
     static double ns(Structure s) {

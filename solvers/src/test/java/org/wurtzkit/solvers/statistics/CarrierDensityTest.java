@@ -17,26 +17,27 @@ class CarrierDensityTest {
     private static final double CM2 = 1e4; // m^-2 per cm^-2
 
     // ---------------------------------------------------------------------------------------
-    // Values from /work/shared/physics/REFERENCES.md 5.8 (marked [computed] there, from the
-    // formulas and CODATA 2018 constants), each asserted to half a unit of its last printed digit.
+    // Values computed by the project from the textbook formulas (kT/q; Nc = 2 (2 pi m kT / h^2)^{3/2};
+    // m / (pi hbar^2), T. Ando, A. B. Fowler, F. Stern, Rev. Mod. Phys. 54, 437 (1982)) with
+    // CODATA 2018 constants (E. Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021)), each asserted to half a unit of its last printed digit.
     // ---------------------------------------------------------------------------------------
 
     @Test
     void thermalVoltageAt300K() {
-        // kT/q(300 K) = 25.852 mV (REFERENCES 5.8).
+        // kT/q(300 K) = 25.852 mV (computed).
         assertEquals(25.852e-3, CarrierDensity.thermalEnergyEv(300.0), 0.0005e-3);
     }
 
     @Test
     void effectiveDensityOfStatesAt300K() {
-        // Nc(300 K) = 2.24e18 cm^-3 (m* = 0.20) and 2.59e18 cm^-3 (m* = 0.22) (REFERENCES 5.8).
+        // Nc(300 K) = 2.24e18 cm^-3 (m* = 0.20) and 2.59e18 cm^-3 (m* = 0.22) (computed).
         assertEquals(2.24e18 * CM3, CarrierDensity.effectiveDensityOfStates(0.20, 300.0), 0.005e18 * CM3);
         assertEquals(2.59e18 * CM3, CarrierDensity.effectiveDensityOfStates(0.22, 300.0), 0.005e18 * CM3);
     }
 
     @Test
     void twoDimensionalDensityOfStates() {
-        // m* / (pi hbar^2) = 8.355e13 (m* = 0.20), 9.190e13 (0.22) cm^-2 eV^-1 (REFERENCES 5.8).
+        // m* / (pi hbar^2) = 8.355e13 (m* = 0.20), 9.190e13 (0.22) cm^-2 eV^-1 (computed).
         assertEquals(8.355e13 * CM2, CarrierDensity.subbandDensityOfStates(0.20, 1), 0.0005e13 * CM2);
         assertEquals(9.190e13 * CM2, CarrierDensity.subbandDensityOfStates(0.22, 1), 0.0005e13 * CM2);
         // Valley degeneracy multiplies the density of states (Ando, Fowler, Stern 1982).
@@ -45,7 +46,8 @@ class CarrierDensityTest {
     }
 
     /**
-     * REFERENCES 5.6 ([computed]): in the A00 model with m* = 0.22 and n_s = 1e13 cm^-2, E_F - E0 =
+     * Computed here from the A00 Fermi level E_F = E0 + pi hbar^2 n_s / m* (Ambacher et al., J. Appl.
+     * Phys. 87, 334 (2000), from memory): in the A00 model with m* = 0.22 and n_s = 1e13 cm^-2, E_F - E0 =
      * 0.1088 eV. At low temperature one subband holds n = D (E_F - E0); the four printed digits
      * of 0.1088 allow 4.6e-4 relative.
      */

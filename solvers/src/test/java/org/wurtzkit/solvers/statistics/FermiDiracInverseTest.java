@@ -30,8 +30,8 @@ class FermiDiracInverseTest {
     }
 
     /**
-     * Published check values: the inverse of the REFERENCES.md 5.9 table ([computed], mpmath
-     * polylog) and the Joyce-Dixon regime, where eta = ln y + y/2^(3/2) + O(y^2) (Joyce &amp;
+     * Published check values: the inverse of the table in test resource
+     * {@code reference/fermi-dirac-half.csv} (computed, mpmath polylog) and the Joyce-Dixon regime, where eta = ln y + y/2^(3/2) + O(y^2) (Joyce &amp;
      * Dixon, Appl. Phys. Lett. 31, 354 (1977), A1 = 2^(-3/2) exact).
      */
     @Test

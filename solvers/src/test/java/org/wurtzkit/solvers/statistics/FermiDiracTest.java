@@ -9,6 +9,8 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvFileSource;
 
 /** Checks of {@link FermiDirac#f12(double)} and {@link FermiDirac#fm12(double)}. */
 class FermiDiracTest {
@@ -53,27 +55,21 @@ class FermiDiracTest {
     }
 
     // ---------------------------------------------------------------------------------------
-    // 2. Published check table: /work/shared/physics/REFERENCES.md section 5.9, values marked
-    //    [computed] there (mpmath polylog, 30 digits) and printed to 7-8 significant digits. The
-    //    printed digits limit the comparison: each value is asserted to half a unit of its last
-    //    printed digit (relative 5e-10 .. 7e-8), which is the best those values support; the
-    //    1e-9 relative tolerance suggested there is below the rounding of most printed entries.
+    // 2. Check table in test resources reference/fermi-dirac-half.csv (computed with mpmath
+    //    polylog, 30 digits; normalisation of J. S. Blakemore, Solid-State Electron. 25, 1067
+    //    (1982); tables also in M. Goano, Solid-State Electron. 36, 217 (1993)), printed to 7-8
+    //    significant digits. The printed digits limit the comparison: each value is asserted to
+    //    half a unit of its last printed digit (relative 5e-10 .. 7e-8), the best those values
+    //    support.
     // ---------------------------------------------------------------------------------------
 
-    @Test
-    void referencesTable59() {
-        Object[][] table = {
-            {-5.0, "6.721954e-3"}, {-2.0, "0.1292985"}, {-1.0, "0.3277952"}, {0.0, "0.7651470"},
-            {1.0, "1.5756408"}, {2.0, "2.8237213"}, {5.0, "8.8442089"}, {10.0, "24.084657"},
-            {20.0, "67.491512"},
-        };
-        for (Object[] row : table) {
-            double eta = (Double) row[0];
-            BigDecimal printed = new BigDecimal((String) row[1]);
-            double halfLastDigit = 0.5 * printed.ulp().doubleValue();
-            double value = FermiDirac.f12(eta);
-            assertEquals(printed.doubleValue(), value, halfLastDigit * (1 + 1e-9), "F_1/2(" + eta + ")");
-        }
+    @ParameterizedTest(name = "F_1/2({0}) = {1}")
+    @CsvFileSource(resources = "/reference/fermi-dirac-half.csv")
+    void publishedCheckTable(double eta, String printedText) {
+        BigDecimal printed = new BigDecimal(printedText);
+        double halfLastDigit = 0.5 * printed.ulp().doubleValue();
+        double value = FermiDirac.f12(eta);
+        assertEquals(printed.doubleValue(), value, halfLastDigit * (1 + 1e-9), "F_1/2(" + eta + ")");
     }
 
     // ---------------------------------------------------------------------------------------

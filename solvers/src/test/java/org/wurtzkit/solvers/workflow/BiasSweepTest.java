@@ -19,9 +19,9 @@ import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
-import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 import org.wurtzkit.units.Constants;
 
 /** Bias sweeps with continuation, quasi-static C-V and threshold extraction on Al0.25Ga0.75N/GaN. */
@@ -137,7 +137,7 @@ class BiasSweepTest {
      * above eps/(d + 5 nm): the charge-control picture with an effective distance d + Delta d (the
      * 2DEG centroid a few nm below the interface plus the quantum-capacitance term; D. Delagebeaudeuf
      * and N. T. Linh, IEEE Trans. Electron Devices 29, 955 (1982), from memory; Fang-Howard centroid
-     * 2.3 nm at 1e13 cm^-2, REFERENCES.md 5.6 "[computed]").
+     * 2.3 nm at 1e13 cm^-2, computed from F. F. Fang and W. E. Howard, Phys. Rev. Lett. 16, 797 (1966)).
      */
     @Test
     void capacitanceMatchesFineStepDerivative() {
@@ -247,9 +247,7 @@ class BiasSweepTest {
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
                 () -> SWEEP.run(Hemts.standard(), 0, 30));
         assertTrue(e.getMessage().contains("gate bias (V) = 30.0"), e.getMessage());
-        Structure free = Structure.builder(Hemts.DEFAULT_SET).grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.freeSurface(1.65, 1e14))
-                .build();
+        Structure free = StandardStacks.hemt(Hemts.DEFAULT_SET, 500, 0.25, 25, 0, TopBoundary.freeSurface(1.65, 1e14));
         e = assertThrows(InvalidParameterException.class, () -> SWEEP.run(free, 0, -1));
         assertTrue(e.getMessage().contains("top boundary"), e.getMessage());
         assertThrows(InvalidParameterException.class, () -> ThresholdDefinition.constantDensity(0));

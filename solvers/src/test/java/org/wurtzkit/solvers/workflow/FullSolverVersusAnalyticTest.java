@@ -18,8 +18,8 @@ import org.wurtzkit.units.Constants;
 
 /**
  * The full Schroedinger-Poisson solver against the closed-form charge balance of O. Ambacher et
- * al., J. Appl. Phys. 87, 334 (2000) (formulas as recalled in shared/physics/REFERENCES.md section
- * 4), on standard metal-face AlGaN/GaN stacks without cap.
+ * al., J. Appl. Phys. 87, 334 (2000) (formulas from memory; the paper was
+ * not at hand), on standard metal-face AlGaN/GaN stacks without cap.
  */
 class FullSolverVersusAnalyticTest {
     private static final ThresholdDefinition LEVEL = ThresholdDefinition.constantDensity(1e11);
@@ -88,7 +88,8 @@ class FullSolverVersusAnalyticTest {
      * estimate E_0 + pi hbar^2 n_s/m*; so the relative gap shrinks roughly as 1/d. Delta E comes from:
      * the real subband ladder (several subbands are occupied, which lowers E_F, while the
      * self-consistent E_0 lies above the triangular estimate, which raises it: the Fang-Howard E_0 at
-     * 1e13 cm^-2 is 0.37 eV against 0.27 eV for the triangular one, REFERENCES.md 5.6 "[computed]");
+     * 1e13 cm^-2 is 0.37 eV against 0.27 eV for the triangular one, computed from F. F. Fang and W. E. Howard, Phys. Rev.
+     * Lett. 16, 797 (1966));
      * the 300 K Fermi tail; wavefunction penetration into the barrier. The band offset, permittivities
      * and masses are the set's in both, so they do not contribute here (they do between sets, see
      * {@link ParameterSetSpreadTest}). Observed while writing this test: +2.0 % at 10 nm, +1.0 % at 25

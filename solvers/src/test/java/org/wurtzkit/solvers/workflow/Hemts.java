@@ -2,15 +2,13 @@ package org.wurtzkit.solvers.workflow;
 
 import static org.wurtzkit.units.Units.NM;
 
-import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.SolverOptions;
-import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
-import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /** Test stacks and a coarse-mesh solver that keeps the workflow tests fast. */
 final class Hemts {
@@ -25,24 +23,14 @@ final class Hemts {
     static final SelfConsistentSolver SOLVER = new SelfConsistentSolver(COARSE);
     static final ParameterSet DEFAULT_SET = ParameterSets.defaultSet();
 
-    /** GaN buffer (500 nm) / Al_xGa_(1-x)N barrier, Schottky gate phi_B at bias 0. */
+    /** GaN buffer (500 nm) / Al_xGa_(1-x)N barrier, Schottky gate phi_B at bias 0 ({@link StandardStacks}). */
     static Structure hemt(ParameterSet set, double x, double barrierNm, double phiB) {
-        return Structure.builder(set)
-                .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(x), barrierNm * NM))
-                .top(TopBoundary.schottky(phiB, 0))
-                .build();
+        return StandardStacks.gatedHemt(set, x, barrierNm, 0, phiB);
     }
 
     /** The same with a GaN cap (thickness 0: none). */
     static Structure cappedHemt(ParameterSet set, double x, double barrierNm, double capNm, double phiB) {
-        Structure.Builder b = Structure.builder(set)
-                .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(x), barrierNm * NM));
-        if (capNm > 0) {
-            b.grow(Layer.of("cap", Composition.GAN, capNm * NM));
-        }
-        return b.top(TopBoundary.schottky(phiB, 0)).build();
+        return StandardStacks.gatedHemt(set, x, barrierNm, capNm, phiB);
     }
 
     /** Al0.25Ga0.75N (25 nm) on GaN with the default set and a 1.0 eV Schottky gate. */

@@ -40,8 +40,10 @@ class ParameterSetSpreadTest {
 
     /**
      * The spread is reported and is not zero. It should be large: the registered sets differ by
-     * about 25 % in sigma (REFERENCES.md 5.1, rows B and C at x = 0.25: 1.392e13 vs 1.072e13 cm^-2,
-     * "[computed]"; section 7 on the ~20 % disagreement of the polarization constants), so we
+     * about 25 % in sigma (computed by the project at x = 0.25: 1.392e13 cm^-2 with the linear constants of Bernardini,
+     * Fiorentini &amp; Vanderbilt, Phys. Rev. B 56, R10024 (1997), vs 1.072e13 cm^-2 with the nonlinear
+     * ones of Bernardini &amp; Fiorentini, Phys. Rev. B 64, 085207 (2001); the spontaneous polarization
+     * difference AlN - GaN alone differs by ~20 % between published sets), so we
      * require a range above 5 % of the median n_s.
      */
     @Test

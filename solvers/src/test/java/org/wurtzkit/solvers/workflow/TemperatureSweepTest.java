@@ -41,9 +41,9 @@ class TemperatureSweepTest {
     /**
      * The gap the solver uses at the bottom (GaN buffer) follows the Varshni law with the
      * constants of I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003): E_g(0) = 3.510 eV,
-     * alpha = 0.909 meV/K, beta = 830 K (REFERENCES.md 1.2, "[from memory]"), to 1e-9 eV, i.e. the
-     * temperature reaches the band structure without anything to set by hand; REFERENCES.md gives
-     * 3.438 eV at 300 K ("[computed]", 4 digits).
+     * alpha = 0.909 meV/K, beta = 830 K (from memory), to 1e-9 eV, i.e. the
+     * temperature reaches the band structure without anything to set by hand; the Varshni law
+     * (Y. P. Varshni, Physica 34, 149 (1967)) gives 3.438 eV at 300 K (computed, 4 digits).
      */
     @Test
     void bandGapFollowsVarshniLaw() {

@@ -1,0 +1,13 @@
+/**
+ * The published parameter sets shipped with wurtzkit, and the reader for parameter-set files.
+ * {@link org.wurtzkit.materials.data.BuiltInParameterSets} registers the built-in sets (JSON
+ * resources beside this package) with {@link java.util.ServiceLoader};
+ * {@link org.wurtzkit.materials.data.JsonParameterSetReader} reads any set in the same file format
+ * with Jackson's streaming parser, converts file units to SI once, validates every value (present,
+ * finite, in range, citing a listed source) and returns an immutable, thread-safe
+ * {@link org.wurtzkit.materials.data.FileParameterSet}. A file that cannot become a set raises
+ * {@link org.wurtzkit.materials.data.ParameterSetFormatException} naming the set, the file, the key
+ * and the line. This is the only module that reads data files; a team adds its own set by shipping a
+ * JSON file and a small provider in its own jar.
+ */
+package org.wurtzkit.materials.data;

@@ -1,0 +1,34 @@
+/**
+ * The self-consistent Schroedinger-Poisson solver for a c-plane stack: one entry point,
+ * {@link org.wurtzkit.solvers.sp.SelfConsistentSolver}, its settings
+ * ({@link org.wurtzkit.solvers.sp.SolverOptions}, every default documented) and its result
+ * ({@link org.wurtzkit.solvers.sp.Solution}, an immutable holder of node arrays, subbands, sheet
+ * densities and the {@link org.wurtzkit.solvers.sp.ConvergenceRecord}).
+ *
+ * <h2>Map of one solve</h2>
+ * <ol>
+ * <li><b>Resolve.</b> The {@code Structure} is laid once onto a non-uniform
+ * {@link org.wurtzkit.solvers.mesh.Mesh} with a node on every interface, as a package-private
+ * {@code Device}: per-cell arrays of permittivity, polarization, band edges, densities of states,
+ * masses and dopant or trap species; polarization sheets become nodal charges.</li>
+ * <li><b>Classical start.</b> A damped Newton solve of the box-integrated Poisson equation with
+ * Fermi-Dirac electrons everywhere (package-private {@code ChargeModel} for the charge and its
+ * derivative; each Newton step one O(N) tridiagonal solve). As planned, this Newton-Poisson loop
+ * lives in its own package-private class, {@code NewtonPoisson}.</li>
+ * <li><b>Outer loop</b> (A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81,
+ * 7880 (1997)): {@code QuantumStates} solves the BenDaniel-Duke equation in every quantum window
+ * ({@link org.wurtzkit.solvers.sp.QuantumRegion}) for the lowest subbands, O(N k); then Newton-Poisson
+ * runs with the predictor density g<sub>k</sub> ln(1 + e<sup>eta</sup>) |psi<sub>k</sub>|<sup>2</sup>,
+ * whose one home is planned to be {@code SubbandDensity}; repeat until max |delta phi| is below the
+ * tolerance.</li>
+ * <li><b>Result or failure.</b> A converged solve returns a {@code Solution} (copies, no NaN); one
+ * that runs out of budget throws {@link org.wurtzkit.solvers.sp.NotConvergedException} carrying its
+ * record and last finite iterate.</li>
+ * </ol>
+ * A sweep starts each point from a potential extrapolated through the last converged solutions
+ * (public static predictors, planned to move to a small public class {@code PotentialPredictor}),
+ * which skips the classical start; the convergence test is unchanged, so the start never moves the
+ * answer beyond the tolerance. The solver holds no state between calls: one instance serves many
+ * threads.
+ */
+package org.wurtzkit.solvers.sp;
