@@ -134,7 +134,7 @@ public final class SelfConsistentSolver {
         if (nw == 0) {
             ConvergenceRecord rec = new ConvergenceRecord(true, 0, newtonCount[0], new double[0],
                     "classical solve converged");
-            return new Solution(d, phi, null, null, charges, rec);
+            return new Solution(d, phi, null, null, charges.report(phi, null, null), rec);
         }
         QuantumStates qs = new QuantumStates(d);
         double[] ref = new double[d.n];
@@ -170,7 +170,7 @@ public final class SelfConsistentSolver {
                         Arrays.copyOf(history, it + 1), String.format(Locale.ROOT,
                                 "converged: max |delta phi| = %.3g V < %.3g V after %d iterations", delta,
                                 options.tolerance(), it + 1));
-                return new Solution(d, phi, ref, qs, charges, rec);
+                return new Solution(d, phi, ref, qs, charges.report(phi, ref, qs), rec);
             }
         }
         int m = options.maxIterations();
@@ -191,6 +191,7 @@ public final class SelfConsistentSolver {
         final double[] delta;
         final double[] scratch;
         final double[] backup;
+        final PointDensities cell = new PointDensities();
 
         Work(Device d) {
             int n = d.n;
@@ -255,7 +256,7 @@ public final class SelfConsistentSolver {
         double maxStep = options.maxNewtonStep();
         boolean floating = !d.topDirichlet && !d.bottomDirichlet;
         boolean limited = true;
-        charges.evaluate(phi, ref, qs, w.q, w.dq);
+        charges.evaluate(phi, ref, qs, w.q, w.dq, w.cell);
         double norm = residual(d, phi, w.q, w.rhs);
         for (int it = 0; it < options.maxNewtonIterations(); it++) {
             if (floating && limited) {
@@ -263,7 +264,7 @@ public final class SelfConsistentSolver {
                 // charge, whose capacitance freezes out at low temperature. Restore global neutrality
                 // by a monotone scalar root search first, so the Newton step need not find it.
                 if (neutralityShift(d, charges, phi, ref, qs, w)) {
-                    charges.evaluate(phi, ref, qs, w.q, w.dq);
+                    charges.evaluate(phi, ref, qs, w.q, w.dq, w.cell);
                     norm = residual(d, phi, w.q, w.rhs);
                 }
             }
@@ -296,7 +297,7 @@ public final class SelfConsistentSolver {
                 for (int i = 0; i < n; i++) {
                     phi[i] = w.backup[i] + t * w.delta[i];
                 }
-                charges.evaluate(phi, ref, qs, w.q, w.dq);
+                charges.evaluate(phi, ref, qs, w.q, w.dq, w.cell);
                 trialNorm = residual(d, phi, w.q, w.rhs);
                 if (trialNorm <= (1 - 1e-4 * t) * norm || t < 1e-6 || big < tolerance) {
                     break;
@@ -330,7 +331,7 @@ public final class SelfConsistentSolver {
             for (int i = 0; i < n; i++) {
                 trial[i] = phi[i] + s;
             }
-            charges.evaluate(trial, ref, qs, w.q, w.dq);
+            charges.evaluate(trial, ref, qs, w.q, w.dq, w.cell);
             double sum = 0;
             for (int i = 0; i < n; i++) {
                 sum += w.q[i];
