@@ -164,7 +164,8 @@ final class Device {
                 speciesDensity[li][j] = d.densityPerM3();
                 speciesEnergy[li][j] = d.ionizationEnergyEv();
                 speciesDegeneracy[li][j] = d.degeneracy();
-                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR ? ChargeSpecies.SHALLOW_DONOR : ChargeSpecies.SHALLOW_ACCEPTOR;
+                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR ? ChargeSpecies.SHALLOW_DONOR
+                        : ChargeSpecies.SHALLOW_ACCEPTOR;
                 j++;
             }
             for (DeepLevel d : l.deepLevels()) {

@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.sp;
 
+import java.util.Locale;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.wurtzkit.solvers.linalg.SingularPivotException;
@@ -19,7 +20,8 @@ import org.wurtzkit.solvers.linalg.Tridiagonal;
  * Nonlinear Equations, SIAM 1996, sec. 6.3), which keeps the iteration convergent where the
  * Jacobian is nearly singular (e.g. a free surface whose states are all full or all empty). With
  * both boundaries free, the uniform level of phi is fixed only by global neutrality: it is restored
- * by a scalar root search (Brent) before every full step, so that Newton need not find it.
+ * by a scalar root search (Brent) before the first step and after every step that the maximum step
+ * limited, so that Newton need not find it.
  *
  * <p>One instance per solve: it owns the scratch arrays, so repeated solves allocate nothing.
  * Not thread-safe.
@@ -149,7 +151,7 @@ final class NewtonPoisson {
                 return steps;
             }
         }
-        throw new Failure(String.format(java.util.Locale.ROOT, "Newton-Poisson not converged in %d steps (tolerance %.3g V)",
+        throw new Failure(String.format(Locale.ROOT, "Newton-Poisson not converged in %d steps (tolerance %.3g V)",
                 maxSteps, tolerance), steps, lastIterate(phi), null);
     }
 
