@@ -27,8 +27,8 @@ import org.wurtzkit.structure.Structure;
  * checks) on a box-integrated Poisson Jacobian of order N, beside a baseline measured in the same
  * run: one plain tridiagonal matrix-vector product written in this class (three reads and one
  * write per row, the memory-traffic floor of any O(N) step on this machine). The rest of the
- * step (charge model, residual, Jacobian assembly, line search) is private to
- * {@code SelfConsistentSolver}; it is reached whole through {@link #classicalSolve}, the
+ * step (charge model, residual, Jacobian assembly, line search) is package-private to the solver
+ * ({@code org.wurtzkit.solvers.sp.NewtonPoisson}); it is reached whole through {@link #classicalSolve}, the
  * classical (no Schroedinger) solve of the reference HEMT on a mesh refined to about N nodes,
  * whose Newton step count does not depend on N (14 on every mesh), so that its time divided by
  * that count, reported by {@link RatioReport}, is the cost of one complete Newton-Poisson step

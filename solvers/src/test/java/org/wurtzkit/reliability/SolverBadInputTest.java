@@ -25,6 +25,7 @@ import org.wurtzkit.solvers.sp.BandAlignment;
 import org.wurtzkit.solvers.sp.HoleFermiLevel;
 import org.wurtzkit.solvers.sp.NotConvergedException;
 import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -258,24 +259,24 @@ class SolverBadInputTest {
                         "null depths, 3 potentials", "both null, or arrays of equal length"),
                 row("guess of unequal lengths", () -> solver.solve(hemt(), z, new double[] {0, 0}), "initial guess",
                         "3 depths, 2 potentials", "both null, or arrays of equal length"),
-                row("extrapolation ratio NaN", () -> SelfConsistentSolver.extrapolate(solver.solve(hemt()),
+                row("extrapolation ratio NaN", () -> PotentialPredictor.extrapolate(solver.solve(hemt()),
                         solver.solve(hemt()), NAN), "extrapolation step ratio", NAN, "(finite)"),
-                row("extrapolation through no solution", () -> SelfConsistentSolver.extrapolate(new double[0],
+                row("extrapolation through no solution", () -> PotentialPredictor.extrapolate(new double[0],
                         new Solution[0], 0.0), "extrapolation points", "0 solutions, 0 parameters",
                         "1 to 4 solutions with one parameter each"),
-                row("extrapolation with a parameter missing", () -> SelfConsistentSolver.extrapolate(
+                row("extrapolation with a parameter missing", () -> PotentialPredictor.extrapolate(
                         new double[] {0.0}, new Solution[] {solved(), solved()}, -0.1), "extrapolation points",
                         "2 solutions, 1 parameters", "1 to 4 solutions with one parameter each"),
-                row("extrapolation through five solutions", () -> SelfConsistentSolver.extrapolate(
+                row("extrapolation through five solutions", () -> PotentialPredictor.extrapolate(
                         new double[] {0, 1, 2, 3, 4}, new Solution[] {solved(), solved(), solved(), solved(), solved()},
                         5.0), "extrapolation points", "5 solutions, 5 parameters",
                         "1 to 4 solutions with one parameter each"),
-                row("extrapolation target NaN", () -> SelfConsistentSolver.extrapolate(new double[] {0.0, -0.1},
+                row("extrapolation target NaN", () -> PotentialPredictor.extrapolate(new double[] {0.0, -0.1},
                         new Solution[] {solved(), solved()}, NAN), "extrapolation target parameter", NAN, "(finite)"),
-                row("extrapolation parameter infinite", () -> SelfConsistentSolver.extrapolate(
+                row("extrapolation parameter infinite", () -> PotentialPredictor.extrapolate(
                         new double[] {0.0, INF}, new Solution[] {solved(), solved()}, -0.1),
                         "extrapolation parameter 1", INF, "(finite)"),
-                row("extrapolation parameter repeated", () -> SelfConsistentSolver.extrapolate(
+                row("extrapolation parameter repeated", () -> PotentialPredictor.extrapolate(
                         new double[] {-0.1, -0.1}, new Solution[] {solved(), solved()}, -0.2),
                         "extrapolation parameter 1", -0.1, "distinct from the other parameters"));
     }

@@ -8,21 +8,13 @@ import org.wurtzkit.solvers.statistics.Ionization;
  * integration: each half of a box takes the material of its own cell, so abrupt heterointerfaces
  * need no averaging. Electrons inside quantum windows come from the subbands through the
  * predictor of A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81, 7880
- * (1997): n_i(phi) = sum_k g_k ln(1 + exp((E_F - E_k + (phi_i - phi_ref,i))/kT)) |psi_k,i|^2.
+ * (1997), written once in {@link SubbandDensity}. Stateless after construction: every result goes
+ * into caller arrays or a caller-owned {@link PointDensities}, so one instance may serve many
+ * threads.
  */
 final class ChargeModel {
     private final Device d;
     private final double invVt;
-
-    // accumulator of one half-cell evaluation, reused (no allocation per node)
-    private double n;
-    private double dn;
-    private double p;
-    private double dp;
-    private double donors;
-    private double dDonors;
-    private double acceptors;
-    private double dAcceptors;
 
     ChargeModel(Device d) {
         this.d = d;
@@ -35,8 +27,11 @@ final class ChargeModel {
      * @param phi    potential (V)
      * @param phiRef potential at which the subbands were computed (V), or null without subbands
      * @param qs     the subbands, or null for classical electrons everywhere
+     * @param q      receives the box charges (C/m^2)
+     * @param dq     receives their derivatives (C/m^2 per V)
+     * @param cell   scratch for one half-cell's densities
      */
-    void evaluate(double[] phi, double[] phiRef, QuantumStates qs, double[] q, double[] dq) {
+    void evaluate(double[] phi, double[] phiRef, QuantumStates qs, double[] q, double[] dq, PointDensities cell) {
         int nn = d.n;
         boolean quantum = qs != null;
         for (int i = 0; i < nn; i++) {
@@ -45,21 +40,21 @@ final class ChargeModel {
             double dqi = 0;
             if (d.sameCellsAround[i]) {
                 // both half-boxes hold the same material: one evaluation serves the whole box
-                half(i, phi[i], skipN);
+                half(i, phi[i], skipN, cell);
                 double w = 0.5 * (d.h[i - 1] + d.h[i]);
-                qi += w * (p - n + donors - acceptors);
-                dqi += w * (dp - dn + dDonors - dAcceptors);
+                qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
+                dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             } else if (i > 0) {
-                half(i - 1, phi[i], skipN);
+                half(i - 1, phi[i], skipN, cell);
                 double w = 0.5 * d.h[i - 1];
-                qi += w * (p - n + donors - acceptors);
-                dqi += w * (dp - dn + dDonors - dAcceptors);
+                qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
+                dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             }
             if (i < nn - 1 && !d.sameCellsAround[i]) {
-                half(i, phi[i], skipN);
+                half(i, phi[i], skipN, cell);
                 double w = 0.5 * d.h[i];
-                qi += w * (p - n + donors - acceptors);
-                dqi += w * (dp - dn + dDonors - dAcceptors);
+                qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
+                dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             }
             if (d.deltaDensity[i] > 0) {
                 double e = d.nodeEc(i) - phi[i];
@@ -83,32 +78,10 @@ final class ChargeModel {
                 dqi += d.surfaceDonorDensity * Ionization.donorLikeTrapChargedFractionDerivative(x, 1) * invVt;
             }
             if (skipN) {
-                double nq = 0;
-                double dnq = 0;
-                for (int w = 0; w < qs.windows; w++) {
-                    int a = d.windowStart[w];
-                    if (i <= a || i >= d.windowEnd[w]) {
-                        continue;
-                    }
-                    double shift = (phi[i] - phiRef[i]) * invVt;
-                    for (int k = 0; k < qs.count[w]; k++) {
-                        double psi = qs.psi[w][k][i - a];
-                        double eta = -qs.energy[w][k] * invVt + shift;
-                        double g = qs.dos[w][k] * psi * psi;
-                        // ln(1 + e^eta) and its derivative 1/(1 + e^-eta) from one exponential
-                        double ex = Math.exp(-Math.abs(eta));
-                        if (eta > 0) {
-                            nq += g * (eta + Math.log1p(ex));
-                            dnq += g * invVt / (1 + ex);
-                        } else {
-                            nq += g * Math.log1p(ex);
-                            dnq += g * invVt * ex / (1 + ex);
-                        }
-                    }
-                }
+                SubbandDensity.atNode(d, qs, i, phi[i], phiRef[i], cell);
                 double box = d.box(i);
-                qi -= box * nq;
-                dqi -= box * dnq;
+                qi -= box * cell.n;
+                dqi -= box * cell.dn;
             }
             q[i] = Device.Q * qi;
             dq[i] = Device.Q * dqi;
@@ -120,63 +93,96 @@ final class ChargeModel {
         return d.ec[k] - d.ev[k];
     }
 
-    /** Densities of one cell's material at node potential phi (m^-3) and derivatives (per V). */
-    private void half(int k, double phi, boolean skipElectrons) {
+    /**
+     * Densities of one cell's material at node potential phi (m^-3) and derivatives (per V), into
+     * every field of {@code out}.
+     */
+    private void half(int k, double phi, boolean skipElectrons, PointDensities out) {
         double ecn = d.ec[k] - phi;
         double evn = d.ev[k] - phi;
-        if (skipElectrons) {
-            n = 0;
-            dn = 0;
-        } else {
+        double n = 0;
+        double dn = 0;
+        if (!skipElectrons) {
             double eta = -ecn * invVt;
             n = d.nc[k] * FermiDirac.f12(eta);
             dn = d.nc[k] * FermiDirac.fm12(eta) * invVt;
         }
         double etaP = (evn - d.holeFermiEv) * invVt;
-        p = d.nv[k] * FermiDirac.f12(etaP);
-        dp = -d.nv[k] * FermiDirac.fm12(etaP) * invVt;
-        donors = 0;
-        dDonors = 0;
-        acceptors = 0;
-        dAcceptors = 0;
+        double p = d.nv[k] * FermiDirac.f12(etaP);
+        double dp = -d.nv[k] * FermiDirac.fm12(etaP) * invVt;
+        double donors = 0;
+        double dDonors = 0;
+        double acceptors = 0;
+        double dAcceptors = 0;
         int li = d.layerOfCell[k];
         double[] dens = d.speciesDensity[li];
         for (int j = 0; j < dens.length; j++) {
             double e = d.speciesEnergy[li][j];
             double g = d.speciesDegeneracy[li][j];
             switch (d.speciesKind[li][j]) {
-                case 0 -> { // shallow donor, E_D = E_c - e, x = (E_F - E_D)/kT
+                case SHALLOW_DONOR -> { // shallow donor, E_D = E_c - e, x = (E_F - E_D)/kT
                     double x = (e - ecn) * invVt;
                     donors += dens[j] * Ionization.ionizedDonorFraction(x, g);
                     dDonors += dens[j] * Ionization.ionizedDonorFractionDerivative(x, g) * invVt;
                 }
-                case 1 -> { // shallow acceptor, E_A = E_v + e, x = (E_A - E_F)/kT
+                case SHALLOW_ACCEPTOR -> { // shallow acceptor, E_A = E_v + e, x = (E_A - E_F)/kT
                     double x = (evn + e) * invVt;
                     acceptors += dens[j] * Ionization.ionizedAcceptorFraction(x, g);
                     dAcceptors -= dens[j] * Ionization.ionizedAcceptorFractionDerivative(x, g) * invVt;
                 }
-                case 2 -> { // donor-like deep level at E_T = E_c - e, x = (E_F - E_T)/kT
+                case DONOR_LIKE_TRAP -> { // donor-like deep level at E_T = E_c - e, x = (E_F - E_T)/kT
                     double x = (e - ecn) * invVt;
                     donors += dens[j] * Ionization.donorLikeTrapChargedFraction(x, g);
                     dDonors += dens[j] * Ionization.donorLikeTrapChargedFractionDerivative(x, g) * invVt;
                 }
-                default -> { // acceptor-like deep level
+                case ACCEPTOR_LIKE_TRAP -> { // acceptor-like deep level at E_T = E_c - e
                     double x = (e - ecn) * invVt;
                     acceptors += dens[j] * Ionization.acceptorLikeTrapChargedFraction(x, g);
                     dAcceptors += dens[j] * Ionization.acceptorLikeTrapChargedFractionDerivative(x, g) * invVt;
                 }
             }
         }
+        out.n = n;
+        out.dn = dn;
+        out.p = p;
+        out.dp = dp;
+        out.donors = donors;
+        out.dDonors = dDonors;
+        out.acceptors = acceptors;
+        out.dAcceptors = dAcceptors;
     }
 
     /**
-     * Box-averaged densities for reporting (m^-3): electrons (classical part outside windows plus
-     * the subband part inside), holes, ionised donors (incl. empty donor-like traps) and ionised
-     * acceptors (incl. filled acceptor-like traps).
+     * What a converged potential holds, for reporting: box-averaged densities (m^-3) and the box
+     * charges of {@link #evaluate} (C/m^2). Fresh arrays, handed to the caller.
+     *
+     * @param electrons electrons, the classical part outside windows plus the subband part inside
+     * @param holes     holes
+     * @param donors    ionised donors, including empty donor-like traps
+     * @param acceptors ionised acceptors, including filled acceptor-like traps
+     * @param boxCharge free charge per area in each node's box, delta sheets and surface states
+     *                  included (C/m^2)
      */
-    void densities(double[] phi, double[] phiRef, QuantumStates qs, double[] nOut, double[] pOut, double[] donorsOut,
-            double[] acceptorsOut) {
+    record Report(double[] electrons, double[] holes, double[] donors, double[] acceptors, double[] boxCharge) {
+    }
+
+    /**
+     * Evaluates the charge model once for reporting.
+     *
+     * @param phi    potential (V)
+     * @param phiRef potential at which the subbands were computed (V), or null without subbands
+     * @param qs     the subbands, or null for classical electrons everywhere
+     * @return densities and box charges at phi
+     */
+    Report report(double[] phi, double[] phiRef, QuantumStates qs) {
         int nn = d.n;
+        PointDensities cell = new PointDensities();
+        double[] q = new double[nn];
+        evaluate(phi, phiRef, qs, q, new double[nn], cell);
+        double[] nOut = new double[nn];
+        double[] pOut = new double[nn];
+        double[] donorsOut = new double[nn];
+        double[] acceptorsOut = new double[nn];
         for (int i = 0; i < nn; i++) {
             boolean skipN = qs != null && d.quantumNode[i];
             double sn = 0;
@@ -185,21 +191,21 @@ final class ChargeModel {
             double sa = 0;
             double wt = 0;
             if (i > 0) {
-                half(i - 1, phi[i], skipN);
+                half(i - 1, phi[i], skipN, cell);
                 double w = 0.5 * d.h[i - 1];
-                sn += w * n;
-                sp += w * p;
-                sd += w * donors;
-                sa += w * acceptors;
+                sn += w * cell.n;
+                sp += w * cell.p;
+                sd += w * cell.donors;
+                sa += w * cell.acceptors;
                 wt += w;
             }
             if (i < nn - 1) {
-                half(i, phi[i], skipN);
+                half(i, phi[i], skipN, cell);
                 double w = 0.5 * d.h[i];
-                sn += w * n;
-                sp += w * p;
-                sd += w * donors;
-                sa += w * acceptors;
+                sn += w * cell.n;
+                sp += w * cell.p;
+                sd += w * cell.donors;
+                sa += w * cell.acceptors;
                 wt += w;
             }
             nOut[i] = sn / wt;
@@ -207,20 +213,10 @@ final class ChargeModel {
             donorsOut[i] = sd / wt;
             acceptorsOut[i] = sa / wt;
             if (skipN) {
-                double nq = 0;
-                for (int w = 0; w < qs.windows; w++) {
-                    int a = d.windowStart[w];
-                    if (i <= a || i >= d.windowEnd[w]) {
-                        continue;
-                    }
-                    double shift = (phi[i] - phiRef[i]) / d.vt;
-                    for (int k = 0; k < qs.count[w]; k++) {
-                        double psi = qs.psi[w][k][i - a];
-                        nq += qs.dos[w][k] * psi * psi * FermiDirac.log1pExp(-qs.energy[w][k] / d.vt + shift);
-                    }
-                }
-                nOut[i] += nq;
+                SubbandDensity.atNode(d, qs, i, phi[i], phiRef[i], cell);
+                nOut[i] += cell.n;
             }
         }
+        return new Report(nOut, pOut, donorsOut, acceptorsOut, q);
     }
 }

@@ -54,7 +54,7 @@ final class Device {
     final double[][] speciesDensity; // m^-3
     final double[][] speciesEnergy; // eV from the band edge (donor: below Ec; acceptor: above Ev; deep: below Ec)
     final double[][] speciesDegeneracy;
-    final int[][] speciesKind; // 0 donor, 1 acceptor, 2 deep donor-like, 3 deep acceptor-like
+    final ChargeSpecies[][] speciesKind;
 
     // per node delta sheets
     final double[] deltaDensity; // m^-2 (donor > 0 sheets only: acceptor sheets stored negative-kind below)
@@ -151,20 +151,21 @@ final class Device {
         speciesDensity = new double[nl][];
         speciesEnergy = new double[nl][];
         speciesDegeneracy = new double[nl][];
-        speciesKind = new int[nl][];
+        speciesKind = new ChargeSpecies[nl][];
         for (int li = 0; li < nl; li++) {
             Layer l = states.get(li).layer();
             int ns = l.dopants().size() + l.deepLevels().size();
             speciesDensity[li] = new double[ns];
             speciesEnergy[li] = new double[ns];
             speciesDegeneracy[li] = new double[ns];
-            speciesKind[li] = new int[ns];
+            speciesKind[li] = new ChargeSpecies[ns];
             int j = 0;
             for (Dopant d : l.dopants()) {
                 speciesDensity[li][j] = d.densityPerM3();
                 speciesEnergy[li][j] = d.ionizationEnergyEv();
                 speciesDegeneracy[li][j] = d.degeneracy();
-                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR ? 0 : 1;
+                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR ? ChargeSpecies.SHALLOW_DONOR
+                        : ChargeSpecies.SHALLOW_ACCEPTOR;
                 j++;
             }
             for (DeepLevel d : l.deepLevels()) {
@@ -178,7 +179,8 @@ final class Device {
                 speciesDensity[li][j] = d.densityPerM3();
                 speciesEnergy[li][j] = d.energyBelowConductionEv();
                 speciesDegeneracy[li][j] = 1;
-                speciesKind[li][j] = d.kind() == DeepLevel.Kind.DONOR_LIKE ? 2 : 3;
+                speciesKind[li][j] = d.kind() == DeepLevel.Kind.DONOR_LIKE ? ChargeSpecies.DONOR_LIKE_TRAP
+                        : ChargeSpecies.ACCEPTOR_LIKE_TRAP;
                 j++;
             }
         }

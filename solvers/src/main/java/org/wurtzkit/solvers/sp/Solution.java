@@ -3,7 +3,6 @@ package org.wurtzkit.solvers.sp;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Units;
 
@@ -43,7 +42,12 @@ public final class Solution {
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
 
-    Solution(Device d, double[] phi, double[] ref, QuantumStates qs, ChargeModel charges, ConvergenceRecord record) {
+    /**
+     * Copies out what one solve computed: the potential and subbands are read, never kept; the
+     * report's arrays are taken over (the caller hands them on and keeps no reference).
+     */
+    Solution(Device d, double[] phi, double[] ref, QuantumStates qs, ChargeModel.Report report,
+            ConvergenceRecord record) {
         int nn = d.n;
         this.structure = d.structure;
         this.record = record;
@@ -58,14 +62,11 @@ public final class Solution {
             ec[i] = d.ec[k] - phi[i];
             ev[i] = d.ev[k] - phi[i];
         }
-        n = new double[nn];
-        p = new double[nn];
-        donors = new double[nn];
-        acceptors = new double[nn];
-        charges.densities(phi, ref, qs, n, p, donors, acceptors);
-        double[] q = new double[nn];
-        double[] dq = new double[nn];
-        charges.evaluate(phi, ref, qs, q, dq);
+        n = report.electrons();
+        p = report.holes();
+        donors = report.donors();
+        acceptors = report.acceptors();
+        double[] q = report.boxCharge();
         charge = new double[nn];
         double eSheet = 0;
         double hSheet = 0;
@@ -135,12 +136,7 @@ public final class Solution {
             for (int k = 0; k < qs.count[w]; k++) {
                 System.arraycopy(qs.psi[w][k], 0, full, a, qs.psi[w][k].length);
                 // occupation with the same first-order shift (phi - ref) as the density of Poisson
-                double occ = 0;
-                for (int i = a + 1; i < d.windowEnd[w]; i++) {
-                    double psi = qs.psi[w][k][i - a];
-                    double eta = (-qs.energy[w][k] + (phi[i] - ref[i])) / d.vt;
-                    occ += qs.dos[w][k] * FermiDirac.log1pExp(eta) * psi * psi * d.box(i);
-                }
+                double occ = SubbandDensity.sheet(d, qs, w, k, phi, ref);
                 wellSheetDensity[w] += occ;
                 bands.add(new Subband(w, k, qs.energy[w][k], full, occ, qs.massXY[w][k]));
             }

@@ -1,6 +1,7 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.Arrays;
+import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
@@ -16,7 +17,7 @@ final class Continuation {
     /**
      * Solves the structures in order, each from a guess extrapolated through the last converged
      * solutions (the first cold; then linear from two, then quadratic from three,
-     * {@link SelfConsistentSolver#extrapolate(double[], Solution[], double)}); a failed continued
+     * {@link PotentialPredictor#extrapolate(double[], Solution[], double)}); a failed continued
      * solve is retried cold; a point that fails both ways gets a message in {@code failures} and a
      * null solution, and the predictor restarts from the last success.
      *
@@ -39,7 +40,7 @@ final class Continuation {
                 if (held >= 2) {
                     Solution[] from = Arrays.copyOfRange(solutions, i - held, i);
                     double[] p = Arrays.copyOfRange(parameter, i - held, i);
-                    double[] guess = SelfConsistentSolver.extrapolate(p, from, parameter[i]);
+                    double[] guess = PotentialPredictor.extrapolate(p, from, parameter[i]);
                     solutions[i] = solver.solve(at[i], lastSuccess.depth(), guess);
                 } else {
                     // a cold start, or the last success without a predictor

@@ -70,9 +70,9 @@ class ChargeModelJacobianTest {
             minus[i] = phi[i] - hstep;
         }
         for (QuantumStates states : new QuantumStates[] {null, qs}) {
-            c.evaluate(phi, ref, states, q, dq);
-            c.evaluate(plus, ref, states, qp, unused);
-            c.evaluate(minus, ref, states, qm, unused);
+            c.evaluate(phi, ref, states, q, dq, new PointDensities());
+            c.evaluate(plus, ref, states, qp, unused, new PointDensities());
+            c.evaluate(minus, ref, states, qm, unused, new PointDensities());
             for (int i = 0; i < d.n; i++) {
                 double fd = (qp[i] - qm[i]) / (2 * hstep);
                 // round-off of the difference: a few ulp of |Q| divided by 2h

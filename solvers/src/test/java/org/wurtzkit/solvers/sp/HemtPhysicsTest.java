@@ -204,7 +204,7 @@ class HemtPhysicsTest {
         Solution a = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, 0.0)));
         Solution b = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, -0.5)));
         Solution c = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, -1.0)));
-        double[] guess = SelfConsistentSolver.extrapolate(a, b, 1.0);
+        double[] guess = PotentialPredictor.extrapolate(a, b, 1.0);
         double[] pb = b.potential();
         double[] pc = c.potential();
         double errGuess = 0;
@@ -241,15 +241,15 @@ class HemtPhysicsTest {
         Solution[] three = {s[0], s[1], s[2]};
         double[] p3 = {v[0], v[1], v[2]};
         for (int j = 0; j < 3; j++) {
-            double[] at = SelfConsistentSolver.extrapolate(p3, three, v[j]);
+            double[] at = PotentialPredictor.extrapolate(p3, three, v[j]);
             double[] own = s[j].potential();
             for (int i = 0; i < at.length; i++) {
                 assertEquals(own[i], at[i], 1e-12 * (1 + Math.abs(own[i])), "node " + i + " at " + v[j] + " V");
             }
         }
-        double[] linear = SelfConsistentSolver.extrapolate(new double[] {v[1], v[2]}, new Solution[] {s[1], s[2]}, v[3]);
-        double[] linearRatio = SelfConsistentSolver.extrapolate(s[1], s[2], 1.0);
-        double[] quadratic = SelfConsistentSolver.extrapolate(p3, three, v[3]);
+        double[] linear = PotentialPredictor.extrapolate(new double[] {v[1], v[2]}, new Solution[] {s[1], s[2]}, v[3]);
+        double[] linearRatio = PotentialPredictor.extrapolate(s[1], s[2], 1.0);
+        double[] quadratic = PotentialPredictor.extrapolate(p3, three, v[3]);
         double[] exact = s[3].potential();
         double errLinear = 0;
         double errQuadratic = 0;

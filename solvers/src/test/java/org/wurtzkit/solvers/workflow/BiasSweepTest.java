@@ -17,6 +17,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
+import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
@@ -84,7 +85,7 @@ class BiasSweepTest {
             linear[i] = i == 0 ? Hemts.SOLVER.solve(s)
                     : i == 1 ? Hemts.SOLVER.solve(s, linear[0])
                     : Hemts.SOLVER.solve(s, linear[i - 1].depth(),
-                            SelfConsistentSolver.extrapolate(linear[i - 2], linear[i - 1], 1.0));
+                            PotentialPredictor.extrapolate(linear[i - 2], linear[i - 1], 1.0));
         }
         int outer = 0;
         int newton = 0;

@@ -1,0 +1,80 @@
+package org.wurtzkit.solvers.sp;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.wurtzkit.units.Units.NM;
+
+import org.junit.jupiter.api.Test;
+import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.ParameterSets;
+import org.wurtzkit.solvers.workflow.BiasGrid;
+import org.wurtzkit.solvers.workflow.BiasSweep;
+import org.wurtzkit.solvers.workflow.BiasSweepResult;
+import org.wurtzkit.structure.Layer;
+import org.wurtzkit.structure.Structure;
+import org.wurtzkit.structure.TopBoundary;
+
+/**
+ * The cost of a solve pinned, not only its answer: on the reference HEMT (the stack of the
+ * benchmarks, {@code Scenarios.referenceHemt()}: GaN cap 2 nm / Al0.25Ga0.75N 25 nm / AlN 1 nm /
+ * GaN 2 um, Schottky gate 1.0 eV) the outer Schroedinger-Poisson iterations and the Newton-Poisson
+ * steps may not exceed the counts measured when this test was written plus a small margin, so a
+ * convergence regression fails the build without timing anything. The counts are deterministic
+ * (bit-for-bit, see the determinism suite). Bounds are "measured plus a margin" in the manner of
+ * iteration-count tests of root finders (e.g. Hipparchus' BrentSolverTest); the measured values are
+ * in the comments. A change that lowers a count should lower its bound too.
+ */
+class SolverCostTest {
+
+    private static Structure referenceHemt(double biasV) {
+        return Structure.builder(ParameterSets.defaultSet())
+                .grow(Layer.of("buffer", Composition.GAN, 2000 * NM))
+                .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
+                .grow(Layer.of("cap", Composition.GAN, 2 * NM))
+                .top(TopBoundary.schottky(1.0, biasV))
+                .build();
+    }
+
+    /** Cold Schroedinger-Poisson solve at 0 V: measured 5 outer iterations and 24 Newton steps. */
+    @Test
+    void coldSolveOfTheReferenceHemt() {
+        ConvergenceRecord r = new SelfConsistentSolver().solve(referenceHemt(0)).convergence();
+        assertTrue(r.converged(), r.message());
+        assertTrue(r.iterations() <= 5 + 1, "outer iterations " + r.iterations() + " (measured 5)");
+        assertTrue(r.newtonIterations() <= 24 + 3, "Newton steps " + r.newtonIterations() + " (measured 24)");
+    }
+
+    /**
+     * Classical solve (no quantum window) at 0 V: measured 14 Newton steps, the count the Newton step
+     * benchmark divides by.
+     */
+    @Test
+    void classicalSolveOfTheReferenceHemt() {
+        ConvergenceRecord r = new SelfConsistentSolver(SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()))
+                .solve(referenceHemt(0)).convergence();
+        assertTrue(r.converged(), r.message());
+        assertEquals(0, r.iterations(), "a classical solve has no outer iteration");
+        assertTrue(r.newtonIterations() <= 14 + 1, "Newton steps " + r.newtonIterations() + " (measured 14)");
+    }
+
+    /**
+     * A gate sweep from 0 to -1 V in 21 points of 50 mV with the sweeps' continuation (predictor
+     * through the last three solutions): measured 29 outer iterations and 53 Newton steps in total,
+     * against 21 x 5 = 105 and 21 x 24 = 504 for cold starts.
+     */
+    @Test
+    void continuedGateSweepOfTheReferenceHemt() {
+        BiasSweepResult s = new BiasSweep().run(referenceHemt(0), BiasGrid.linear(0, -1, 21));
+        assertTrue(s.failures().isEmpty(), () -> s.failures().toString());
+        int outer = 0;
+        int newton = 0;
+        for (int i = 0; i < 21; i++) {
+            ConvergenceRecord r = s.solution(i).orElseThrow().convergence();
+            outer += r.iterations();
+            newton += r.newtonIterations();
+        }
+        assertTrue(outer <= 29 + 2, "outer iterations " + outer + " (measured 29)");
+        assertTrue(newton <= 53 + 3, "Newton steps " + newton + " (measured 53)");
+    }
+}
