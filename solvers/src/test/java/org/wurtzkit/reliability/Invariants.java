@@ -105,7 +105,7 @@ final class Invariants {
             eps[k] = ps.material().permittivityStatic() * Constants.VACUUM_PERMITTIVITY;
             px[k] = -ps.alongGrowth();
             gap[k] = ps.material().bandGap().atTemperature(t)
-                    + (o.strainShiftsBandEdges() ? ps.bandShift().gapEv() : 0);
+                    + (s.strainShiftsBandEdges() ? ps.bandShift().gapEv() : 0);
             Layer l = s.layerStates().get(s.layerIndexAt(mid)).layer();
             for (Dopant d : l.dopants()) {
                 if (d.kind() == Dopant.Kind.DONOR) {
