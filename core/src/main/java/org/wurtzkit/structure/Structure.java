@@ -14,7 +14,7 @@ import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarity;
 import org.wurtzkit.polarization.Polarization;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.BandEdgeShift;
 import org.wurtzkit.strain.CriticalThickness;
 import org.wurtzkit.strain.Strain;
