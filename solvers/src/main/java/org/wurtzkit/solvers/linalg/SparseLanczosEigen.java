@@ -296,7 +296,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
                 }
             }
         }
-        throw new ArithmeticException("shift-invert Lanczos did not reach the relative residual "
+        throw new EigenSolverException(-1, "shift-invert Lanczos did not reach the relative residual "
                 + relativeTolerance + " for the " + k + " eigenpairs nearest to sigma = " + sigma
                 + " within " + cap + " Lanczos vectors; raise maxKrylovDimension");
     }
@@ -404,7 +404,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
                 return;
             }
         }
-        throw new ArithmeticException("could not extend the Lanczos basis of " + count
+        throw new EigenSolverException(-1, "could not extend the Lanczos basis of " + count
                 + " vectors in dimension " + n);
     }
 

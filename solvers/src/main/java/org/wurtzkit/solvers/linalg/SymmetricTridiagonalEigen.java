@@ -654,7 +654,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
             }
         }
         if (!(best <= 1e3 * resTol)) {
-            throw new ArithmeticException("inverse iteration did not converge for eigenvalue #" + j
+            throw new EigenSolverException(j, "inverse iteration did not converge for eigenvalue #" + j
                     + " = " + lambda / scale + ": relative residual " + best / tnorm
                     + " after " + MAX_INVERSE_ITERATIONS + " iterations");
         }

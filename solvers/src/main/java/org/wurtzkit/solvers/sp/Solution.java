@@ -3,6 +3,8 @@ package org.wurtzkit.solvers.sp;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Units;
@@ -153,7 +155,8 @@ public final class Solution {
         for (double[] a : new double[][] {potential, ec, ev, n, p, donors, acceptors, charge, field}) {
             for (double v : a) {
                 if (!Double.isFinite(v)) {
-                    throw new IllegalStateException("non-finite value in a solution; please report this structure: "
+                    throw new WurtzkitException(ErrorKind.NON_FINITE_RESULT,
+                            "non-finite value in a solution; please report this structure: "
                             + structure);
                 }
             }
