@@ -212,9 +212,9 @@ public final class Solution {
         return holeFermiEv;
     }
 
-    /** @return band diagram for plotting: rows depth (m), E_c (eV), E_v (eV), both sides of every step */
-    public double[][] bandDiagram() {
-        return new double[][] {plotDepth.clone(), plotEc.clone(), plotEv.clone()};
+    /** @return the band diagram for plotting: depth, E_c and E_v with both sides of every step */
+    public BandDiagram bandDiagram() {
+        return new BandDiagram(plotDepth, plotEc, plotEv);
     }
 
     /** @return electron density (m^-3), box-averaged; subband electrons inside windows */
@@ -260,13 +260,13 @@ public final class Solution {
         return subbands;
     }
 
-    /** @return the quantum windows [top, bottom] depth (m) */
-    public double[][] quantumWindows() {
-        double[][] c = new double[windows.length][];
-        for (int i = 0; i < c.length; i++) {
-            c[i] = windows[i].clone();
+    /** @return the quantum windows as resolved onto the mesh, shallowest first (empty for a classical solve) */
+    public List<DepthRange> quantumWindows() {
+        List<DepthRange> c = new ArrayList<>(windows.length);
+        for (double[] w : windows) {
+            c.add(new DepthRange(w[0], w[1]));
         }
-        return c;
+        return Collections.unmodifiableList(c);
     }
 
     /** @return electron sheet density held in the subbands of each window (m^-2) */
