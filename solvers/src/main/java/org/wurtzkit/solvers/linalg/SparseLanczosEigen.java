@@ -1,5 +1,7 @@
 package org.wurtzkit.solvers.linalg;
 
+import org.wurtzkit.errors.Require;
+
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.DMatrixSparseCSC;
 import org.ejml.interfaces.linsol.LinearSolverSparse;
@@ -84,9 +86,9 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
      */
     public SparseLanczosEigen(double relativeTolerance, int maxKrylovDimension) {
         if (!(relativeTolerance >= 1e-14 && relativeTolerance <= 1e-3)) {
-            throw Checks.outside("relativeTolerance", relativeTolerance, "[1.0E-14, 0.001]");
+            throw Require.invalid("relativeTolerance", relativeTolerance, "[1.0E-14, 0.001]");
         }
-        Checks.intInRange("maxKrylovDimension", maxKrylovDimension, 1, Integer.MAX_VALUE);
+        Require.inRange("maxKrylovDimension", maxKrylovDimension, 1, Integer.MAX_VALUE);
         this.relativeTolerance = relativeTolerance;
         this.maxKrylovDimension = maxKrylovDimension;
     }
@@ -108,7 +110,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     @Override
     public EigenPairs lowest(SymmetricMatrix matrix, int k) {
         if (matrix == null) {
-            throw Checks.outside("matrix", "null", "(a non-null matrix)");
+            throw Require.invalid("matrix", "null", "(a non-null matrix)");
         }
         return solve(matrix, k, shiftBelowSpectrum(matrix));
     }
@@ -170,9 +172,9 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
      */
     public EigenPairs nearest(SymmetricMatrix matrix, int k, double sigma) {
         if (matrix == null) {
-            throw Checks.outside("matrix", "null", "(a non-null matrix)");
+            throw Require.invalid("matrix", "null", "(a non-null matrix)");
         }
-        Checks.finite("sigma", sigma);
+        Require.finite("sigma", sigma);
         return solve(matrix, k, sigma);
     }
 
@@ -181,13 +183,13 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private EigenPairs solve(SymmetricMatrix matrix, int k, double sigma) {
         int n = matrix.size();
         int cap = maxKrylovDimension > 0 ? Math.min(n, maxKrylovDimension) : Math.min(n, Math.max(120, 20 * k));
-        Checks.intInRange("k", k, 1, cap);
+        Require.inRange("k", k, 1, cap);
 
         DMatrixSparseCSC a = toCsc(matrix);
         DMatrixSparseCSC shifted = CommonOps_DSCC.add(1.0, a, -sigma, CommonOps_DSCC.identity(n), null, null, null);
         LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> lu = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
         if (!lu.setA(shifted)) {
-            throw Checks.outside("sigma", sigma, "(values for which A - sigma I is non-singular)");
+            throw Require.invalid("sigma", sigma, "(values for which A - sigma I is non-singular)");
         }
         DMatrixRMaj rhs = new DMatrixRMaj(n, 1);
         DMatrixRMaj sol = new DMatrixRMaj(n, 1);
@@ -224,7 +226,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
             lu.solve(rhs, sol);
             System.arraycopy(sol.data, 0, w, 0, n);
             if (!allFinite(w, n)) {
-                throw Checks.outside("sigma", sigma, "(values for which A - sigma I is numerically non-singular)");
+                throw Require.invalid("sigma", sigma, "(values for which A - sigma I is numerically non-singular)");
             }
             double aj = dot(vj, w, n);
             axpy(-aj, vj, w, n);

@@ -1,5 +1,7 @@
 package org.wurtzkit.solvers.linalg;
 
+import org.wurtzkit.errors.Require;
+
 /**
  * Lowest eigenpairs of a real symmetric tridiagonal matrix {@code T}, given by its diagonal
  * {@code diag[0..n-1]} and off-diagonal {@code off[0..n-2]}, in O(N·k) operations (plus
@@ -113,8 +115,8 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * @throws IllegalArgumentException on null arrays, wrong lengths, non-finite entries or NaN x
      */
     public static int countBelow(double[] diag, double[] off, double x) {
-        int n = validateMatrix(diag, off);
-        Checks.notNaN("x", x);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.notNaN("x", x);
         double s = scaleFor(maxAbs(diag, off, n));
         double maxE2 = 0.0;
         for (int i = 0; i < n - 1; i++) {
@@ -153,8 +155,8 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      *                                  finite input)
      */
     public EigenPairs lowest(double[] diag, double[] off, int k) {
-        int n = validateMatrix(diag, off);
-        Checks.intInRange("k", k, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.inRange("k", k, 1, n);
         double[] values = new double[k];
         double[][] vectors = new double[k][n];
         lowestInto(diag, off, k, values, vectors);
@@ -174,9 +176,9 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * @throws ArithmeticException      if inverse iteration fails to converge
      */
     public EigenPairs below(double[] diag, double[] off, double bound, int kMax) {
-        int n = validateMatrix(diag, off);
-        Checks.notNaN("bound", bound);
-        Checks.intInRange("kMax", kMax, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.notNaN("bound", bound);
+        Require.inRange("kMax", kMax, 1, n);
         double[] values = new double[kMax];
         double[][] vectors = new double[kMax][n];
         int m = belowInto(diag, off, bound, kMax, values, vectors);
@@ -203,8 +205,8 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * @throws ArithmeticException      if inverse iteration fails to converge
      */
     public int lowestInto(double[] diag, double[] off, int k, double[] valuesOut, double[][] vectorsOut) {
-        int n = validateMatrix(diag, off);
-        Checks.intInRange("k", k, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.inRange("k", k, 1, n);
         validateOutputs(valuesOut, vectorsOut, k, n);
         prepare(diag, off, n);
         bisect(n, k, gu, vectorsOut != null);
@@ -228,9 +230,9 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      */
     public int belowInto(double[] diag, double[] off, double bound, int kMax,
                          double[] valuesOut, double[][] vectorsOut) {
-        int n = validateMatrix(diag, off);
-        Checks.notNaN("bound", bound);
-        Checks.intInRange("kMax", kMax, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.notNaN("bound", bound);
+        Require.inRange("kMax", kMax, 1, n);
         validateOutputs(valuesOut, vectorsOut, kMax, n);
         prepare(diag, off, n);
         double s = scale;
@@ -280,42 +282,28 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
 
     // ------------------------------------------------------------------ validation
 
-    private static int validateMatrix(double[] diag, double[] off) {
-        if (diag == null) {
-            throw Checks.outside("diag", "null", "(a non-null array)");
-        }
-        int n = diag.length;
-        if (n < 1) {
-            throw Checks.outside("diag.length", 0, "[1, " + Integer.MAX_VALUE + "]");
-        }
-        Checks.length("off", off, n - 1);
-        Checks.finite("diag", diag, n);
-        Checks.finite("off", off, n - 1);
-        return n;
-    }
-
     private static void validateOutputs(double[] valuesOut, double[][] vectorsOut, int k, int n) {
-        Checks.minLength("valuesOut", valuesOut, k);
+        Require.minLength("valuesOut", valuesOut, k);
         if (vectorsOut != null) {
             if (vectorsOut.length < k) {
-                throw Checks.outside("vectorsOut.length", vectorsOut.length, "[" + k + ", " + Integer.MAX_VALUE + "]");
+                throw Require.invalid("vectorsOut.length", vectorsOut.length, "[" + k + ", " + Integer.MAX_VALUE + "]");
             }
             for (int j = 0; j < k; j++) {
-                Checks.minLength("vectorsOut[" + j + "]", vectorsOut[j], n);
+                Require.minLength("vectorsOut[" + j + "]", vectorsOut[j], n);
             }
         }
     }
 
     private static double[][] tridiagonalArrays(SymmetricMatrix matrix) {
         if (matrix == null) {
-            throw Checks.outside("matrix", "null", "(a non-null matrix)");
+            throw Require.invalid("matrix", "null", "(a non-null matrix)");
         }
         if (matrix instanceof SymmetricTridiagonalMatrix) {
             SymmetricTridiagonalMatrix t = (SymmetricTridiagonalMatrix) matrix;
             return new double[][] {t.diagRef(), t.offRef()};
         }
         if (matrix.bandwidth() > 1) {
-            throw Checks.outside("matrix bandwidth", matrix.bandwidth(),
+            throw Require.invalid("matrix bandwidth", matrix.bandwidth(),
                     "[0, 1]: SymmetricTridiagonalEigen accepts tridiagonal matrices only; "
                             + "use SparseLanczosEigen for wider bands");
         }
