@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.linalg;
 
+import java.util.SplittableRandom;
 import org.wurtzkit.errors.Require;
 
 /**
@@ -44,7 +45,7 @@ import org.wurtzkit.errors.Require;
  * problem size, except for the result objects of the allocating methods) and are not
  * thread-safe. Results are deterministic: the pseudo-random start vectors use a fixed seed.
  */
-public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
+public final class SymmetricTridiagonalEigen {
 
     /**
      * Relative gap, with respect to the Gershgorin norm {@code max(|gl|, |gu|)}, below which two
@@ -93,7 +94,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     private double gl;
     private double gu;
     private double lastPivotMagnitude;
-    private final SplitMix64 rng = new SplitMix64();
+    private SplittableRandom rng;
 
     /** Creates a solver with empty work space (it grows on first use). */
     public SymmetricTridiagonalEigen() {
@@ -251,15 +252,18 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     }
 
     /**
-     * {@inheritDoc}
+     * The {@code k} lowest eigenpairs of a matrix, ascending.
      *
-     * <p>Accepts a {@link SymmetricTridiagonalMatrix}, or a {@link SparseSymmetricMatrix} whose
-     * {@link SymmetricMatrix#bandwidth() bandwidth} is at most 1.
+     * <p>Accepts a {@link SymmetricTridiagonalMatrix}, or any {@link SymmetricMatrix} whose
+     * {@link SymmetricMatrix#bandwidth() bandwidth} is at most 1 (its entries are read with
+     * {@link SymmetricMatrix#get}).
      *
+     * @param matrix a tridiagonal symmetric matrix
+     * @param k      number of eigenpairs, in {@code [1, n]}
+     * @return eigenpairs, ascending
      * @throws IllegalArgumentException if the matrix is not tridiagonal (bandwidth above 1) or
      *                                  {@code k} is out of range
      */
-    @Override
     public EigenPairs lowest(SymmetricMatrix matrix, int k) {
         double[][] t = tridiagonalArrays(matrix);
         return lowest(t[0], t[1], k);
@@ -304,14 +308,17 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         }
         if (matrix.bandwidth() > 1) {
             throw Require.invalid("matrix bandwidth", matrix.bandwidth(),
-                    "[0, 1]: SymmetricTridiagonalEigen accepts tridiagonal matrices only; "
-                            + "use SparseLanczosEigen for wider bands");
+                    "[0, 1]: SymmetricTridiagonalEigen accepts tridiagonal matrices only");
         }
-        SparseSymmetricMatrix s = (SparseSymmetricMatrix) matrix;
-        int n = s.size();
+        int n = matrix.size();
         double[] dd = new double[n];
         double[] ee = new double[n - 1];
-        s.copyTridiagonal(dd, ee);
+        for (int i = 0; i < n; i++) {
+            dd[i] = matrix.get(i, i);
+            if (i + 1 < n) {
+                ee[i] = matrix.get(i + 1, i);
+            }
+        }
         return new double[][] {dd, ee};
     }
 
@@ -554,7 +561,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
             }
             return;
         }
-        rng.reset(SEED);
+        rng = new SplittableRandom(SEED);
         double clusterGap = CLUSTER_RELATIVE_GAP * tnorm;
         int clusterStart = 0;
         double previousShift = Double.NEGATIVE_INFINITY;
@@ -788,11 +795,14 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         }
     }
 
-    /** Fills x[0..n-1] with a unit vector of pseudo-random components (SplitMix64). */
+    /**
+     * Fills x[0..n-1] with a unit vector of pseudo-random components in (-1, 1]: the JDK's
+     * SplitMix64 generator ({@link SplittableRandom}), so the start vectors are fixed by the seed.
+     */
     private void randomUnit(double[] x, int n) {
         double sum = 0.0;
         for (int i = 0; i < n; i++) {
-            double r = rng.nextSigned();
+            double r = 2.0 * rng.nextDouble() - 1.0 + 0x1.0p-53;
             x[i] = r;
             sum += r * r;
         }

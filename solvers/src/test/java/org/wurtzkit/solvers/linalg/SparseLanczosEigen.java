@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.linalg;
 
+import java.util.SplittableRandom;
 import org.wurtzkit.errors.Require;
 
 import org.ejml.data.DMatrixRMaj;
@@ -63,7 +64,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private final double relativeTolerance;
     private final int maxKrylovDimension;
     private final SymmetricTridiagonalEigen small = new SymmetricTridiagonalEigen();
-    private final SplitMix64 rng = new SplitMix64();
+    private SplittableRandom rng;
 
     /**
      * Creates a solver with {@link #DEFAULT_RELATIVE_TOLERANCE} and an automatic Krylov
@@ -214,7 +215,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
         double[][] ritzVectors = new double[k][n];
         double[] ritzLambda = new double[k];
 
-        rng.reset(SEED);
+        rng = new SplittableRandom(SEED);
         basis[0] = new double[n];
         randomUnit(basis[0], n, basis, 0);
         int minSteps = Math.min(cap, Math.max(k, Math.min(n, 2 * k + 10)));
@@ -390,7 +391,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private void randomUnit(double[] v, int n, double[][] basis, int count) {
         for (int attempt = 0; attempt < 10; attempt++) {
             for (int i = 0; i < n; i++) {
-                v[i] = rng.nextSigned();
+                v[i] = 2.0 * rng.nextDouble() - 1.0 + 0x1.0p-53;
             }
             for (int pass = 0; pass < 2; pass++) {
                 for (int b = 0; b < count; b++) {
