@@ -1,7 +1,7 @@
 package org.wurtzkit.material;
 
 import java.util.List;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * A named, published (or a team's own measured) set of wurtzite parameters: the three binaries,

@@ -1,6 +1,7 @@
 package org.wurtzkit.polarization;
 
 import org.wurtzkit.material.PiezoelectricConstants;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.strain.Strain;
 

@@ -3,6 +3,8 @@ package org.wurtzkit.structure;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import org.wurtzkit.bands.BandAlignment;
+import org.wurtzkit.bands.BandEdges;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
@@ -12,7 +14,7 @@ import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarity;
 import org.wurtzkit.polarization.Polarization;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.BandEdgeShift;
 import org.wurtzkit.strain.CriticalThickness;
 import org.wurtzkit.strain.Strain;
@@ -48,6 +50,8 @@ public final class Structure {
     private final double referenceLatticeA;
     private final Polarity polarity;
     private final PolarizationModel polarizationModel;
+    private final BandAlignment bandAlignment;
+    private final boolean strainShiftsBandEdges;
     private final double temperatureK;
     private final TopBoundary top;
     private final BottomBoundary bottom;
@@ -59,6 +63,8 @@ public final class Structure {
         this.polarity = b.polarity;
         this.polarizationModel = b.polarizationModel != null ? b.polarizationModel
                 : parameters.recommendedPolarizationModel();
+        this.bandAlignment = b.bandAlignment;
+        this.strainShiftsBandEdges = b.strainShiftsBandEdges;
         this.temperatureK = b.temperatureK;
         this.top = b.top;
         this.bottom = b.bottom;
@@ -122,6 +128,8 @@ public final class Structure {
         b.referenceLatticeA = referenceLatticeA;
         b.polarity = polarity;
         b.polarizationModel = polarizationModel;
+        b.bandAlignment = bandAlignment;
+        b.strainShiftsBandEdges = strainShiftsBandEdges;
         b.temperatureK = temperatureK;
         b.top = top;
         b.bottom = bottom;
@@ -175,6 +183,33 @@ public final class Structure {
     /** {@return the polarization model in force} */
     public PolarizationModel polarizationModel() {
         return polarizationModel;
+    }
+
+    /** {@return the band line-up in force} */
+    public BandAlignment bandAlignment() {
+        return bandAlignment;
+    }
+
+    /** {@return whether the deformation potentials shift the band edges} */
+    public boolean strainShiftsBandEdges() {
+        return strainShiftsBandEdges;
+    }
+
+    /**
+     * The band edges at a point of this stack: the structure's {@link #bandAlignment()} at its
+     * temperature, plus the point's strain shifts if {@link #strainShiftsBandEdges()}. The one
+     * line-up rule of the full solver and of the closed-form charge-balance model.
+     *
+     * @param point a point of this stack (from {@link #pointAt(double)} or {@link #layerStates()})
+     * @return E_c and E_v on the parameter set's energy scale (eV)
+     */
+    public BandEdges bandEdgesAt(PointState point) {
+        Require.nonNull("point state", point);
+        BandEdges e = bandAlignment.edges(parameters, point.material(), temperatureK);
+        if (strainShiftsBandEdges) {
+            e = e.shiftedBy(point.bandShift().conductionEv(), point.bandShift().valenceEv());
+        }
+        return e;
     }
 
     /** {@return temperature (K)} */
@@ -304,6 +339,8 @@ public final class Structure {
         private double referenceLatticeA = -1;
         private Polarity polarity = Polarity.METAL_FACE;
         private PolarizationModel polarizationModel;
+        private BandAlignment bandAlignment = BandAlignment.valenceBandTable();
+        private boolean strainShiftsBandEdges;
         private double temperatureK = 300;
         private TopBoundary top;
         private BottomBoundary bottom = new BottomBoundary.ZeroField();
@@ -358,6 +395,28 @@ public final class Structure {
          */
         public Builder polarizationModel(PolarizationModel model) {
             this.polarizationModel = Require.nonNull("polarization model", model);
+            return this;
+        }
+
+        /**
+         * @param alignment how the band edges of the materials line up; default
+         *                  {@link BandAlignment#valenceBandTable()} (the parameter set's tabulated
+         *                  valence-band maxima)
+         * @return this builder
+         */
+        public Builder bandAlignment(BandAlignment alignment) {
+            this.bandAlignment = Require.nonNull("band alignment", alignment);
+            return this;
+        }
+
+        /**
+         * @param shifts whether the deformation potentials shift the band edges; default false,
+         *               because the deformation potentials of the built-in sets are recalled values
+         *               whose sign convention was not verified
+         * @return this builder
+         */
+        public Builder strainShiftsBandEdges(boolean shifts) {
+            this.strainShiftsBandEdges = shifts;
             return this;
         }
 

@@ -26,7 +26,7 @@ import org.wurtzkit.material.Provenance;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarization;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.CriticalThickness;
 import org.wurtzkit.strain.Strain;
 import org.wurtzkit.structure.BottomBoundary;

@@ -8,7 +8,7 @@ import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * A parameter set for tests of core without the materials-data module.

@@ -9,6 +9,7 @@ import java.util.List;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
+import org.wurtzkit.solvers.sp.BandDiagram;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.Subband;
@@ -188,12 +189,15 @@ public final class BandDiagramExample {
         c.getStyler().setXAxisMin(fromNm);
         c.getStyler().setXAxisMax(toNm);
 
-        double[][] bd = s.bandDiagram();
+        BandDiagram bd = s.bandDiagram();
+        double[] bdNm = bd.depthNm();
+        double[] bdEc = bd.conductionEv();
+        double[] bdEv = bd.valenceEv();
         List<double[]> band = new ArrayList<>();
-        for (int i = 0; i < bd[0].length; i++) {
-            double d = Units.mToNm(bd[0][i]);
+        for (int i = 0; i < bdNm.length; i++) {
+            double d = bdNm[i];
             if (d >= fromNm - 1e-9 && d <= toNm + 1e-9) {
-                band.add(new double[] {d, bd[1][i], bd[2][i]});
+                band.add(new double[] {d, bdEc[i], bdEv[i]});
             }
         }
         double[] bx = column(band, 0);
@@ -327,11 +331,14 @@ public final class BandDiagramExample {
 
     private static List<Path> writeTables(Solution s, List<Subband> drawn, Path out) throws IOException {
         List<Path> files = new ArrayList<>();
-        double[][] bd = s.bandDiagram();
+        BandDiagram bd = s.bandDiagram();
         Tables bands = Tables.of(Column.of("depth", "nm"), Column.of("conduction_band_minus_fermi", "eV"),
                 Column.of("valence_band_minus_fermi", "eV"));
-        for (int i = 0; i < bd[0].length; i++) {
-            bands.row(Units.mToNm(bd[0][i]), bd[1][i], bd[2][i]);
+        double[] bdNm = bd.depthNm();
+        double[] bdEc = bd.conductionEv();
+        double[] bdEv = bd.valenceEv();
+        for (int i = 0; i < bd.size(); i++) {
+            bands.row(bdNm[i], bdEc[i], bdEv[i]);
         }
         files.add(bands.write(out.resolve("band-diagram.csv")));
 

@@ -109,7 +109,7 @@ public final class CapTradeoffExample {
                 Column.of("status", ""));
         for (int i = 0; i < n; i++) {
             analytic[i] = ChargeBalanceModel.fromStructure(family.at(caps[i])).sheetDensityPerCm2();
-            t.row(caps[i], ns[i], analytic[i], field[i], map.failure(i).map(f -> "failed: " + f).orElse("ok"));
+            t.row(caps[i], ns[i], analytic[i], field[i], map.failure(i).map(f -> "failed: " + f.message()).orElse("ok"));
         }
 
         XYChart c = Charts.xy(WIDTH, HEIGHT, "Wafer " + DemoLab.WAFER + ": 2DEG and barrier field against the GaN cap \u2014 "

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.style.Styler;
+import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
 import org.wurtzkit.solvers.workflow.BiasGrid;
 import org.wurtzkit.solvers.workflow.BiasSweep;
@@ -106,7 +107,7 @@ public final class GateSweepExample {
         double vthLevel;
         try {
             vthLevel = r.thresholdVoltage(ThresholdDefinition.constantDensity(LEVEL_PER_CM2));
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidParameterException e) {
             vthLevel = Double.NaN;
         }
         double vthModel = model.thresholdVoltage();

@@ -132,7 +132,7 @@ public final class ParameterSpreadExample {
             SpreadResult s = spreads.get(i);
             for (SpreadResult.Member m : s.members()) {
                 members.row(xs[i], DemoLabParameterSets.label(m.parameterSet()), m.sheetDensityPerCm2(), m.thresholdVoltage(),
-                        m.succeeded() ? "ok" : "failed: " + m.failure());
+                        m.succeeded() ? "ok" : "failed: " + m.failure().message());
             }
             SpreadResult.Statistics n = s.sheetDensityPerCm2();
             SpreadResult.Statistics v = s.thresholdVoltage();

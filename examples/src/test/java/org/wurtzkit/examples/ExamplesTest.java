@@ -50,7 +50,7 @@ class ExamplesTest {
         Outputs.assertPng(file(r, "band-diagram-channel.png"), BandDiagramExample.WIDTH, BandDiagramExample.HEIGHT);
         List<CSVRecord> bands = csv(r, "band-diagram.csv", "depth_nm", "conduction_band_minus_fermi_eV",
                 "valence_band_minus_fermi_eV");
-        assertEquals(r.solution().bandDiagram()[0].length, bands.size(), "one row per point of the band polyline");
+        assertEquals(r.solution().bandDiagram().size(), bands.size(), "one row per point of the band polyline");
         String[] nodeHeader = new String[4 + r.drawnSubbands()];
         System.arraycopy(new String[] {"depth_nm", "conduction_band_minus_fermi_eV", "valence_band_minus_fermi_eV",
             "electron_density_cm^-3"}, 0, nodeHeader, 0, 4);

@@ -24,7 +24,7 @@ import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.Provenance;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * Reads a parameter set from a JSON data file (format version {@value #FORMAT_VERSION}) with

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.ParameterSet;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * The binary values and bowing parameters of the built-in sets equal the published tables they

@@ -3,6 +3,7 @@ package org.wurtzkit.solvers.sp;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.TreeSet;
+import org.wurtzkit.bands.BandEdges;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.WurtzkitException;
@@ -120,7 +121,6 @@ final class Device {
         massXY = new double[cells];
         layerOfCell = new int[cells];
         double t = s.temperatureK();
-        double[] edges = new double[2];
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
             int li = s.layerIndexAt(mid);
@@ -129,9 +129,9 @@ final class Device {
             WurtziteMaterial m = p.material();
             eps[k] = m.permittivityStatic() * Constants.VACUUM_PERMITTIVITY;
             px[k] = -p.alongGrowth();
-            o.bandAlignment().edgesEv(s, p, t, o.strainShiftsBandEdges(), edges);
-            ec[k] = edges[0];
-            ev[k] = edges[1];
+            BandEdges edges = s.bandEdgesAt(p);
+            ec[k] = edges.conductionEv();
+            ev[k] = edges.valenceEv();
             EffectiveMasses em = m.masses();
             nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
             nv[k] = CarrierDensity.effectiveDensityOfStates(em.heavyHoleDensityOfStates(), t);

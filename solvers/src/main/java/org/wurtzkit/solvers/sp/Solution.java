@@ -3,6 +3,9 @@ package org.wurtzkit.solvers.sp;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Units;
 
@@ -149,7 +152,8 @@ public final class Solution {
         for (double[] a : new double[][] {potential, ec, ev, n, p, donors, acceptors, charge, field}) {
             for (double v : a) {
                 if (!Double.isFinite(v)) {
-                    throw new IllegalStateException("non-finite value in a solution; please report this structure: "
+                    throw new WurtzkitException(ErrorKind.NON_FINITE_RESULT,
+                            "non-finite value in a solution; please report this structure: "
                             + structure);
                 }
             }
@@ -205,9 +209,9 @@ public final class Solution {
         return holeFermiEv;
     }
 
-    /** {@return band diagram for plotting: rows depth (m), E_c (eV), E_v (eV), both sides of every step} */
-    public double[][] bandDiagram() {
-        return new double[][] {plotDepth.clone(), plotEc.clone(), plotEv.clone()};
+    /** {@return the band diagram for plotting: depth, E_c and E_v with both sides of every step} */
+    public BandDiagram bandDiagram() {
+        return new BandDiagram(plotDepth, plotEc, plotEv);
     }
 
     /** {@return electron density (m^-3), box-averaged; subband electrons inside windows} */
@@ -253,13 +257,13 @@ public final class Solution {
         return subbands;
     }
 
-    /** {@return the quantum windows [top, bottom] depth (m)} */
-    public double[][] quantumWindows() {
-        double[][] c = new double[windows.length][];
-        for (int i = 0; i < c.length; i++) {
-            c[i] = windows[i].clone();
+    /** {@return the quantum windows as resolved onto the mesh, shallowest first (empty for a classical solve)} */
+    public List<DepthRange> quantumWindows() {
+        List<DepthRange> c = new ArrayList<>(windows.length);
+        for (double[] w : windows) {
+            c.add(new DepthRange(w[0], w[1]));
         }
-        return c;
+        return Collections.unmodifiableList(c);
     }
 
     /** {@return electron sheet density held in the subbands of each window (m^-2)} */

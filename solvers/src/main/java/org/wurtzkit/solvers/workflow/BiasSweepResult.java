@@ -34,11 +34,12 @@ public final class BiasSweepResult implements CsvTable {
     private final double[] allElectrons; // m^-2
     private final int[] iterations;
     private final Solution[] solutions;
+    private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
     private final String[] status;
     private final CapacitanceVoltage cv;
 
-    BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, String[] failureMessages) {
+    BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, PointFailure.Reason[] reasons) {
         int n = grid.size();
         this.structure = structure;
         this.bias = grid.values();
@@ -48,6 +49,7 @@ public final class BiasSweepResult implements CsvTable {
         this.allElectrons = new double[n];
         this.iterations = new int[n];
         this.status = new String[n];
+        this.failureAt = new PointFailure[n];
         List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             Solution s = solutions[i];
@@ -56,8 +58,9 @@ public final class BiasSweepResult implements CsvTable {
                 gateCharge[i] = Double.NaN;
                 allElectrons[i] = Double.NaN;
                 iterations[i] = -1;
-                f.add(new PointFailure(i, "gate bias = " + bias[i] + " V", failureMessages[i]));
-                status[i] = "failed: " + failureMessages[i];
+                failureAt[i] = reasons[i].at(i, "gate bias = " + bias[i] + " V");
+                f.add(failureAt[i]);
+                status[i] = "failed: " + reasons[i].message();
             } else {
                 sheet[i] = s.sheetDensityPerCm2();
                 gateCharge[i] = s.gateCharge();
@@ -116,10 +119,18 @@ public final class BiasSweepResult implements CsvTable {
 
     /**
      * @param i point index
-     * @return true if point i converged
+     * @return true if point i was computed (the one verb of every workflow result)
      */
-    public boolean converged(int i) {
-        return solutions[i] != null;
+    public boolean succeeded(int i) {
+        return failureAt[i] == null;
+    }
+
+    /**
+     * @param i point index
+     * @return why point i failed (with the kind of failure), or empty
+     */
+    public Optional<PointFailure> failure(int i) {
+        return Optional.ofNullable(failureAt[i]);
     }
 
     /**

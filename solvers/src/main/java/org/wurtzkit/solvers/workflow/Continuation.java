@@ -1,6 +1,8 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.Arrays;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
@@ -25,10 +27,10 @@ final class Continuation {
      * @param at        the structures, in solving order
      * @param parameter the sweep parameter of each structure (bias or temperature), distinct
      * @param solutions output: converged solutions (null where failed)
-     * @param failures  output: failure messages (null where converged)
+     * @param failures  output: why each point failed (null where converged)
      */
     static void solveInOrder(SelfConsistentSolver solver, Structure[] at, double[] parameter, Solution[] solutions,
-            String[] failures) {
+            PointFailure.Reason[] failures) {
         Solution lastSuccess = null;
         for (int i = 0; i < at.length; i++) {
             // the predictor uses the run of consecutive successes just before this point
@@ -46,15 +48,16 @@ final class Continuation {
                     // a cold start, or the last success without a predictor
                     solutions[i] = solver.solve(at[i], lastSuccess);
                 }
-            } catch (RuntimeException first) {
+            } catch (InvalidParameterException | WurtzkitException first) {
                 if (lastSuccess == null) {
-                    failures[i] = PointFailure.describe(first);
+                    failures[i] = PointFailure.Reason.of(first);
                 } else {
                     try {
                         solutions[i] = solver.solve(at[i]);
-                    } catch (RuntimeException cold) {
-                        failures[i] = "continued: " + PointFailure.describe(first) + "; cold start: "
-                                + PointFailure.describe(cold);
+                    } catch (InvalidParameterException | WurtzkitException cold) {
+                        failures[i] = new PointFailure.Reason(cold.kind(), "continued: "
+                                + PointFailure.Reason.of(first).message() + "; cold start: "
+                                + PointFailure.Reason.of(cold).message());
                     }
                 }
             }

@@ -21,7 +21,7 @@ public final class DesignMapResult implements CsvTable {
     private final List<Column> columns;
     private final double[][] parameters;
     private final double[][] values;
-    private final String[] failures;
+    private final PointFailure[] failureAt;
     private final List<PointFailure> failureList;
 
     DesignMapResult(List<Axis> axes, List<Column> quantities, double[][] parameters, ParallelPoints.Outcome[] out) {
@@ -37,7 +37,7 @@ public final class DesignMapResult implements CsvTable {
         int n = out.length;
         this.parameters = parameters;
         this.values = new double[n][];
-        this.failures = new String[n];
+        this.failureAt = new PointFailure[n];
         List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             if (out[i].values() != null) {
@@ -46,8 +46,8 @@ public final class DesignMapResult implements CsvTable {
                 double[] nan = new double[quantities.size()];
                 java.util.Arrays.fill(nan, Double.NaN);
                 values[i] = nan;
-                failures[i] = out[i].failure();
-                f.add(new PointFailure(i, describe(i), failures[i]));
+                failureAt[i] = out[i].failure().at(i, describe(i));
+                f.add(failureAt[i]);
             }
         }
         this.failureList = Collections.unmodifiableList(f);
@@ -145,18 +145,18 @@ public final class DesignMapResult implements CsvTable {
 
     /**
      * @param i point index
-     * @return true if point i was computed
+     * @return true if point i was computed (the one verb of every workflow result)
      */
     public boolean succeeded(int i) {
-        return failures[i] == null;
+        return failureAt[i] == null;
     }
 
     /**
      * @param i point index
-     * @return why point i failed, or empty
+     * @return why point i failed (with the kind of failure), or empty
      */
-    public Optional<String> failure(int i) {
-        return Optional.ofNullable(failures[i]);
+    public Optional<PointFailure> failure(int i) {
+        return Optional.ofNullable(failureAt[i]);
     }
 
     /** {@return every failed point, in map order} */
@@ -183,7 +183,7 @@ public final class DesignMapResult implements CsvTable {
         for (double v : values[i]) {
             r.add(CsvTable.cell(v));
         }
-        r.add(failures[i] == null ? "ok" : "failed: " + failures[i]);
+        r.add(failureAt[i] == null ? "ok" : "failed: " + failureAt[i].message());
         return r;
     }
 }

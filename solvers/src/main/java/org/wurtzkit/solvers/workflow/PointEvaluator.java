@@ -11,7 +11,10 @@ import org.wurtzkit.structure.Structure;
 /**
  * What a design map computes at each point. Implementations must be thread-safe and
  * deterministic (the same structure must always give the same numbers), so that a parallel map
- * equals a serial one bit for bit. An exception thrown by {@link #evaluate} marks the point failed.
+ * equals a serial one bit for bit. A library exception thrown by {@link #evaluate}
+ * ({@link org.wurtzkit.errors.InvalidParameterException} or
+ * {@link org.wurtzkit.errors.WurtzkitException}) marks the point failed; any other exception is a
+ * defect and ends the map.
  */
 public interface PointEvaluator {
     /** {@return the output columns, one per value returned by {@link #evaluate}} */

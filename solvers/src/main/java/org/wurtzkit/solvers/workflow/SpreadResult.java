@@ -25,9 +25,9 @@ public final class SpreadResult implements CsvTable {
      * @param parameterSet        the set's name
      * @param sheetDensityPerCm2  n_s (cm^-2), NaN if the member failed
      * @param thresholdVoltage    V_th (V), NaN if the member failed
-     * @param failure             why it failed, or null
+     * @param failure             why it failed (with the kind of failure), or null
      */
-    public record Member(String parameterSet, double sheetDensityPerCm2, double thresholdVoltage, String failure) {
+    public record Member(String parameterSet, double sheetDensityPerCm2, double thresholdVoltage, PointFailure failure) {
         /** {@return true if the member was computed} */
         public boolean succeeded() {
             return failure == null;
@@ -80,8 +80,9 @@ public final class SpreadResult implements CsvTable {
             } else {
                 ns[i] = Double.NaN;
                 vth[i] = Double.NaN;
-                m.add(new Member(name, Double.NaN, Double.NaN, out[i].failure()));
-                f.add(new PointFailure(i, "parameter set " + name, out[i].failure()));
+                PointFailure why = out[i].failure().at(i, "parameter set " + name);
+                m.add(new Member(name, Double.NaN, Double.NaN, why));
+                f.add(why);
             }
         }
         this.members = Collections.unmodifiableList(m);
@@ -168,7 +169,7 @@ public final class SpreadResult implements CsvTable {
     public List<String> row(int i) {
         Member m = members.get(i);
         return List.of(m.parameterSet(), CsvTable.cell(m.sheetDensityPerCm2()), CsvTable.cell(m.thresholdVoltage()),
-                m.succeeded() ? "ok" : "failed: " + m.failure());
+                m.succeeded() ? "ok" : "failed: " + m.failure().message());
     }
 
     @Override

@@ -33,9 +33,10 @@ public final class TemperatureSweepResult implements CsvTable {
     private final int[] iterations;
     private final Solution[] solutions;
     private final String[] status;
+    private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
 
-    TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, String[] messages) {
+    TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, PointFailure.Reason[] reasons) {
         int n = temperature.length;
         this.structure = structure;
         this.temperature = temperature.clone();
@@ -46,6 +47,7 @@ public final class TemperatureSweepResult implements CsvTable {
         bottomGap = new double[n];
         iterations = new int[n];
         status = new String[n];
+        failureAt = new PointFailure[n];
         List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             Solution s = solutions[i];
@@ -55,8 +57,9 @@ public final class TemperatureSweepResult implements CsvTable {
                 groundSubband[i] = Double.NaN;
                 bottomGap[i] = Double.NaN;
                 iterations[i] = -1;
-                status[i] = "failed: " + messages[i];
-                f.add(new PointFailure(i, "temperature = " + temperature[i] + " K", messages[i]));
+                status[i] = "failed: " + reasons[i].message();
+                failureAt[i] = reasons[i].at(i, "temperature = " + temperature[i] + " K");
+                f.add(failureAt[i]);
                 continue;
             }
             sheet[i] = s.sheetDensityPerCm2();
@@ -122,6 +125,22 @@ public final class TemperatureSweepResult implements CsvTable {
     /** {@return outer iterations per point, -1 for a failed point} */
     public int[] iterations() {
         return iterations.clone();
+    }
+
+    /**
+     * @param i point index
+     * @return true if point i was computed (the one verb of every workflow result)
+     */
+    public boolean succeeded(int i) {
+        return failureAt[i] == null;
+    }
+
+    /**
+     * @param i point index
+     * @return why point i failed (with the kind of failure), or empty
+     */
+    public Optional<PointFailure> failure(int i) {
+        return Optional.ofNullable(failureAt[i]);
     }
 
     /**

@@ -15,6 +15,7 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
@@ -193,7 +194,9 @@ class BiasSweepTest {
         assertEquals(3, r.failures().size());
         assertEquals(3, r.size());
         for (int i = 0; i < 3; i++) {
-            assertFalse(r.converged(i));
+            assertFalse(r.succeeded(i));
+            assertEquals(ErrorKind.NOT_CONVERGED, r.failure(i).orElseThrow().kind());
+            assertEquals(r.failures().get(i), r.failure(i).orElseThrow());
             assertTrue(Double.isNaN(r.sheetDensityPerCm2()[i]));
             assertTrue(r.failures().get(i).message().contains("NotConvergedException"), r.failures().get(i).message());
             assertTrue(r.row(i).get(5).startsWith("failed: "));

@@ -1,4 +1,4 @@
-package org.wurtzkit.polarization;
+package org.wurtzkit.material;
 
 import org.wurtzkit.errors.Require;
 

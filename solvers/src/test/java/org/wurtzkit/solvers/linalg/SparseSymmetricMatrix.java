@@ -1,5 +1,7 @@
 package org.wurtzkit.solvers.linalg;
 
+import org.wurtzkit.errors.Require;
+
 import org.ejml.data.DMatrixSparseCSC;
 import org.ejml.data.DMatrixSparseTriplet;
 import org.ejml.ops.DConvertMatrixStruct;
@@ -65,7 +67,7 @@ public final class SparseSymmetricMatrix implements SymmetricMatrix {
      * @throws IllegalArgumentException if {@code size < 1}
      */
     public static Builder builder(int size) {
-        Checks.intInRange("size", size, 1, Integer.MAX_VALUE);
+        Require.inRange("size", size, 1, Integer.MAX_VALUE);
         return new Builder(size);
     }
 
@@ -78,7 +80,7 @@ public final class SparseSymmetricMatrix implements SymmetricMatrix {
      */
     public static SparseSymmetricMatrix of(SymmetricTridiagonalMatrix m) {
         if (m == null) {
-            throw Checks.outside("m", "null", "(a non-null matrix)");
+            throw Require.invalid("m", "null", "(a non-null matrix)");
         }
         double[] d = m.diagRef();
         double[] e = m.offRef();
@@ -142,8 +144,8 @@ public final class SparseSymmetricMatrix implements SymmetricMatrix {
     @Override
     public double get(int row, int col) {
         int n = csc.numCols;
-        Checks.intInRange("row", row, 0, n - 1);
-        Checks.intInRange("col", col, 0, n - 1);
+        Require.inRange("row", row, 0, n - 1);
+        Require.inRange("col", col, 0, n - 1);
         return csc.get(row, col);
     }
 
@@ -151,10 +153,10 @@ public final class SparseSymmetricMatrix implements SymmetricMatrix {
     @Override
     public void multiply(double[] x, double[] y) {
         int n = csc.numCols;
-        Checks.length("x", x, n);
-        Checks.minLength("y", y, n);
+        Require.length("x", x, n);
+        Require.minLength("y", y, n);
         if (x == y) {
-            throw Checks.outside("y", "the same array as x", "(an array distinct from x)");
+            throw Require.invalid("y", "the same array as x", "(an array distinct from x)");
         }
         java.util.Arrays.fill(y, 0, n, 0.0);
         int[] colIdx = csc.col_idx;
@@ -212,9 +214,9 @@ public final class SparseSymmetricMatrix implements SymmetricMatrix {
          * @throws IllegalArgumentException if an index is out of range or the value is not finite
          */
         public Builder add(int row, int col, double value) {
-            Checks.intInRange("row", row, 0, size - 1);
-            Checks.intInRange("col", col, 0, size - 1);
-            Checks.finite("value", value);
+            Require.inRange("row", row, 0, size - 1);
+            Require.inRange("col", col, 0, size - 1);
+            Require.finite("value", value);
             triplets.addItem(row, col, value);
             if (row != col) {
                 triplets.addItem(col, row, value);

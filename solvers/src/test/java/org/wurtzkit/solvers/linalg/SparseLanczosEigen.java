@@ -1,5 +1,8 @@
 package org.wurtzkit.solvers.linalg;
 
+import java.util.SplittableRandom;
+import org.wurtzkit.errors.Require;
+
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.DMatrixSparseCSC;
 import org.ejml.interfaces.linsol.LinearSolverSparse;
@@ -61,7 +64,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private final double relativeTolerance;
     private final int maxKrylovDimension;
     private final SymmetricTridiagonalEigen small = new SymmetricTridiagonalEigen();
-    private final SplitMix64 rng = new SplitMix64();
+    private SplittableRandom rng;
 
     /**
      * Creates a solver with {@link #DEFAULT_RELATIVE_TOLERANCE} and an automatic Krylov
@@ -84,9 +87,9 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
      */
     public SparseLanczosEigen(double relativeTolerance, int maxKrylovDimension) {
         if (!(relativeTolerance >= 1e-14 && relativeTolerance <= 1e-3)) {
-            throw Checks.outside("relativeTolerance", relativeTolerance, "[1.0E-14, 0.001]");
+            throw Require.invalid("relativeTolerance", relativeTolerance, "[1.0E-14, 0.001]");
         }
-        Checks.intInRange("maxKrylovDimension", maxKrylovDimension, 1, Integer.MAX_VALUE);
+        Require.inRange("maxKrylovDimension", maxKrylovDimension, 1, Integer.MAX_VALUE);
         this.relativeTolerance = relativeTolerance;
         this.maxKrylovDimension = maxKrylovDimension;
     }
@@ -108,7 +111,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     @Override
     public EigenPairs lowest(SymmetricMatrix matrix, int k) {
         if (matrix == null) {
-            throw Checks.outside("matrix", "null", "(a non-null matrix)");
+            throw Require.invalid("matrix", "null", "(a non-null matrix)");
         }
         return solve(matrix, k, shiftBelowSpectrum(matrix));
     }
@@ -170,9 +173,9 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
      */
     public EigenPairs nearest(SymmetricMatrix matrix, int k, double sigma) {
         if (matrix == null) {
-            throw Checks.outside("matrix", "null", "(a non-null matrix)");
+            throw Require.invalid("matrix", "null", "(a non-null matrix)");
         }
-        Checks.finite("sigma", sigma);
+        Require.finite("sigma", sigma);
         return solve(matrix, k, sigma);
     }
 
@@ -181,13 +184,13 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private EigenPairs solve(SymmetricMatrix matrix, int k, double sigma) {
         int n = matrix.size();
         int cap = maxKrylovDimension > 0 ? Math.min(n, maxKrylovDimension) : Math.min(n, Math.max(120, 20 * k));
-        Checks.intInRange("k", k, 1, cap);
+        Require.inRange("k", k, 1, cap);
 
         DMatrixSparseCSC a = toCsc(matrix);
         DMatrixSparseCSC shifted = CommonOps_DSCC.add(1.0, a, -sigma, CommonOps_DSCC.identity(n), null, null, null);
         LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> lu = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
         if (!lu.setA(shifted)) {
-            throw Checks.outside("sigma", sigma, "(values for which A - sigma I is non-singular)");
+            throw Require.invalid("sigma", sigma, "(values for which A - sigma I is non-singular)");
         }
         DMatrixRMaj rhs = new DMatrixRMaj(n, 1);
         DMatrixRMaj sol = new DMatrixRMaj(n, 1);
@@ -212,7 +215,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
         double[][] ritzVectors = new double[k][n];
         double[] ritzLambda = new double[k];
 
-        rng.reset(SEED);
+        rng = new SplittableRandom(SEED);
         basis[0] = new double[n];
         randomUnit(basis[0], n, basis, 0);
         int minSteps = Math.min(cap, Math.max(k, Math.min(n, 2 * k + 10)));
@@ -224,7 +227,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
             lu.solve(rhs, sol);
             System.arraycopy(sol.data, 0, w, 0, n);
             if (!allFinite(w, n)) {
-                throw Checks.outside("sigma", sigma, "(values for which A - sigma I is numerically non-singular)");
+                throw Require.invalid("sigma", sigma, "(values for which A - sigma I is numerically non-singular)");
             }
             double aj = dot(vj, w, n);
             axpy(-aj, vj, w, n);
@@ -296,7 +299,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
                 }
             }
         }
-        throw new ArithmeticException("shift-invert Lanczos did not reach the relative residual "
+        throw new EigenSolverException(-1, "shift-invert Lanczos did not reach the relative residual "
                 + relativeTolerance + " for the " + k + " eigenpairs nearest to sigma = " + sigma
                 + " within " + cap + " Lanczos vectors; raise maxKrylovDimension");
     }
@@ -388,7 +391,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
     private void randomUnit(double[] v, int n, double[][] basis, int count) {
         for (int attempt = 0; attempt < 10; attempt++) {
             for (int i = 0; i < n; i++) {
-                v[i] = rng.nextSigned();
+                v[i] = 2.0 * rng.nextDouble() - 1.0 + 0x1.0p-53;
             }
             for (int pass = 0; pass < 2; pass++) {
                 for (int b = 0; b < count; b++) {
@@ -404,7 +407,7 @@ public final class SparseLanczosEigen implements SymmetricEigenSolver {
                 return;
             }
         }
-        throw new ArithmeticException("could not extend the Lanczos basis of " + count
+        throw new EigenSolverException(-1, "could not extend the Lanczos basis of " + count
                 + " vectors in dimension " + n);
     }
 
