@@ -5,6 +5,7 @@ import java.util.Collections;
 import java.util.List;
 import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -348,5 +349,44 @@ public final class Solution {
     /** @return how the solve converged */
     public ConvergenceRecord convergence() {
         return record;
+    }
+
+    /**
+     * A summary to read in jshell or a notebook: the bias, temperature and mesh; the 2DEG sheet
+     * density and the holes; one line per subband; the convergence record; and a warning when the
+     * subband limit was reached. For example:
+     *
+     * <pre>
+     * Solution (Schottky gate, barrier 1 eV, bias 0 V; 300 K; 412 nodes over 1825 nm):
+     *   n_s = 8.91e12 cm^-2 (2DEG, 2 subbands in 1 window), holes 0 cm^-2
+     *   subband 0 of window 0: E - E_F = -0.152 eV, 6.12e12 cm^-2, in-plane mass 0.2 m0
+     *   ...
+     *   converged after 6 iterations (34 Newton steps), last change 4.1e-7 V: ...
+     * </pre>
+     *
+     * @return the summary (lines separated by '\n')
+     */
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("Solution (").append(structure.top()).append("; ")
+                .append(Decimals.format(structure.temperatureK(), "K")).append("; ").append(depth.length)
+                .append(" nodes over ").append(Decimals.format(Units.mToNm(depth[depth.length - 1]), "nm"))
+                .append("):\n");
+        sb.append("  n_s = ").append(Decimals.format(sheetDensityPerCm2(), "cm^-2"));
+        if (windows.length == 0) {
+            sb.append(" (all electrons of the stack, no quantum window)");
+        } else {
+            sb.append(" (2DEG, ").append(subbands.size()).append(subbands.size() == 1 ? " subband" : " subbands")
+                    .append(" in ").append(windows.length).append(windows.length == 1 ? " window)" : " windows)");
+        }
+        sb.append(", holes ").append(Decimals.format(Units.perM2ToPerCm2(holeSheet), "cm^-2")).append('\n');
+        for (Subband s : subbands) {
+            sb.append("  ").append(s).append('\n');
+        }
+        sb.append("  ").append(record);
+        if (subbandLimitReached) {
+            sb.append("\n  warning: a quantum window reached the subband limit; its density is too low");
+        }
+        return sb.toString();
     }
 }
