@@ -1,3 +1,5 @@
+// SPDX-License-Identifier: Apache-2.0
+// Copyright 2026 The wurtzkit developers
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;

@@ -1,3 +1,5 @@
+// SPDX-License-Identifier: Apache-2.0
+// Copyright 2026 The wurtzkit developers
 package org.wurtzkit.structure;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -115,6 +117,26 @@ class ReadableTextTest {
                 TopBoundary.freeSurface(1.65, 1.6e13).toString());
         assertEquals("Fermi level fixed at the bottom, E_c - E_F = 0.2 eV", BottomBoundary.fixedFermiLevel(0.2).toString());
         assertEquals("acceptors 3e19 cm^-3, ionization energy 0.2 eV, g = 4", Dopant.acceptorsPerCm3(3e19, 0.2).toString());
+    }
+
+    /**
+     * Material records print in the units of the tables they come from. Outside check: the GaN end
+     * point of the linear formulas of O. Ambacher et al., J. Appl. Phys. 87, 334 (2000), C13 = 103 GPa
+     * and C33 = 405 GPa, e31 = -0.49 and e33 = 0.73 C/m^2 (as transcribed in A00TestSet, from memory).
+     */
+    @Test
+    void materialRecordsPrintTableUnits() {
+        var gan = A00TestSet.INSTANCE.material(Composition.GAN);
+        String c = gan.elastic().toString();
+        assertTrue(c.startsWith("C11 = ") && c.contains(", C13 = 103 GPa, C33 = 405 GPa, C44 = "), c);
+        String e = gan.piezoelectric().toString();
+        assertTrue(e.startsWith("e31 = -0.49 C/m^2, e33 = 0.73 C/m^2, e15 = "), e);
+        assertTrue(gan.masses().toString().matches("m_e \\S+ m0 along c, \\S+ m0 in the plane; m_hh \\S+ m0 along c,"
+                + " \\S+ m0 in the plane"), gan.masses().toString());
+        assertTrue(gan.bandGap().toString().matches("E_g\\(0 K\\) = \\S+ eV, Varshni alpha = \\S+ eV/K, beta = \\S+ K"),
+                gan.bandGap().toString());
+        assertEquals("Matthews-Blakeslee, alpha = 60 deg, lambda = 60 deg",
+                org.wurtzkit.strain.CriticalThickness.MATTHEWS_BLAKESLEE_60.toString());
     }
 
     /** The one-number factory and atBiasV name the unit, so barrier and bias cannot be swapped unnoticed. */

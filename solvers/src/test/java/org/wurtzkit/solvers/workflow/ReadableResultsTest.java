@@ -1,3 +1,5 @@
+// SPDX-License-Identifier: Apache-2.0
+// Copyright 2026 The wurtzkit developers
 package org.wurtzkit.solvers.workflow;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -69,6 +71,16 @@ class ReadableResultsTest {
         assertEquals(0.3, x.get(2));
         assertEquals("Axis[al_fraction: 0.1, 0.2, 0.3, 0.4, 0.5]", x.toString());
         assertEquals("Axis[barrier_thickness: 10, 20 nm]", Axis.of("barrier_thickness", "nm", 10, 20).toString());
+    }
+
+    @Test
+    void optionRecords() {
+        assertEquals("mesh 0.2 nm at interfaces, growing by 1.15 to at most 100 nm", Hemts.COARSE.mesh().toString());
+        assertEquals("automatic quantum windows, 40 nm on both sides of every interface",
+                org.wurtzkit.solvers.sp.QuantumRegion.automatic().toString());
+        assertEquals("window 0 to 40 nm", org.wurtzkit.solvers.sp.QuantumRegion.Window.nm(0, 40).toString());
+        assertEquals("gate_bias (V)", Column.of("gate_bias", "V").toString());
+        assertEquals("Quantity[sheet_density (cm^-2)]", Quantity.SHEET_DENSITY.toString());
     }
 
     @Test
