@@ -31,13 +31,13 @@ public record ConvergenceRecord(boolean converged, int iterations, int newtonIte
     }
 
     /**
-     * @return e.g. {@code "converged after 6 iterations (34 Newton steps), last change 4.1e-7 V: ..."},
-     *         or {@code "NOT converged after ..."}, ending with the reason it stopped
+     * @return e.g. {@code "converged after 6 iterations (34 Newton steps), last change 4.1e-7 V"}, or
+     *         {@code "NOT converged after ..."} followed by the reason it stopped
      */
     @Override
     public String toString() {
         return (converged ? "converged" : "NOT converged") + " after " + iterations + " iteration"
                 + (iterations == 1 ? "" : "s") + " (" + newtonIterations + " Newton steps), last change "
-                + Decimals.format(finalResidual(), "V") + ": " + message;
+                + Decimals.format(finalResidual(), "V") + (converged ? "" : ": " + message);
     }
 }

@@ -93,7 +93,8 @@ class ReadableResultsTest {
         assertSixDigits(solution.sheetDensityPerCm2(), numberAfter(text, "n_s = "), text);
         assertTrue(lines.get(1).contains(" cm^-2 (2DEG, " + solution.subbands().size() + " subband"), lines.get(1));
         List<Subband> bands = solution.subbands();
-        for (int k = 0; k < bands.size(); k++) {
+        assertTrue(bands.size() > 4, "the test stack has more subbands than the summary lists: " + bands.size());
+        for (int k = 0; k < 4; k++) {
             String line = lines.get(2 + k);
             assertTrue(line.startsWith("  subband " + bands.get(k).index() + " of window " + bands.get(k).window()
                     + ": E - E_F = "), line);
@@ -101,10 +102,19 @@ class ReadableResultsTest {
             assertSixDigits(bands.get(k).sheetDensityPerCm2(), numberAfter(line, "eV, "), line);
             assertTrue(line.contains(" cm^-2, in-plane mass ") && line.endsWith(" m0"), line);
         }
-        String conv = lines.get(2 + bands.size());
+        String rest = lines.get(6);
+        assertTrue(rest.startsWith("  ... " + (bands.size() - 4) + " more subbands, "), rest);
+        double restSum = 0;
+        for (int k = 4; k < bands.size(); k++) {
+            restSum += bands.get(k).sheetDensityPerCm2();
+        }
+        assertSixDigits(restSum, numberAfter(rest, "more subbands, "), rest);
+        assertTrue(rest.endsWith(" cm^-2 together"), rest);
+        String conv = lines.get(7);
         assertTrue(conv.startsWith("  converged after " + solution.convergence().iterations() + " iteration"), conv);
-        assertTrue(conv.contains(" Newton steps), last change ") && conv.contains(" V: "), conv);
-        assertEquals(3 + bands.size(), lines.size(), text);
+        assertTrue(conv.contains(" Newton steps), last change ") && conv.endsWith(" V"), conv);
+        assertSixDigits(solution.convergence().finalResidual(), numberAfter(conv, "last change "), conv);
+        assertEquals(8, lines.size(), text);
     }
 
     @Test
