@@ -1,6 +1,7 @@
 package org.wurtzkit.material;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 
 /**
  * Band gap with the Varshni temperature dependence Eg(T) = Eg(0) - alpha T&sup2;/(T + beta)
@@ -33,5 +34,12 @@ public record BandGap(double gap0KEv, double alphaEvPerK, double betaK) {
                     "(0, " + (int) MAX_TEMPERATURE_K + "]");
         }
         return Require.finite("temperature (K)", temperatureK);
+    }
+
+    /** @return e.g. {@code "E_g(0 K) = 3.51 eV, Varshni alpha = 0.000909 eV/K, beta = 830 K"} */
+    @Override
+    public String toString() {
+        return "E_g(0 K) = " + Decimals.format(gap0KEv, "eV") + ", Varshni alpha = " + Decimals.format(alphaEvPerK, "eV/K")
+                + ", beta = " + Decimals.format(betaK, "K");
     }
 }

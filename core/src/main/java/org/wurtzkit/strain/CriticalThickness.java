@@ -1,6 +1,7 @@
 package org.wurtzkit.strain;
 
 import org.wurtzkit.material.WurtziteMaterial;
+import org.wurtzkit.units.Decimals;
 
 /**
  * Matthews-Blakeslee estimate of the critical thickness of a strained layer (J. W. Matthews and
@@ -69,5 +70,12 @@ public record CriticalThickness(double alphaDegrees, double lambdaDegrees) {
             h = next;
         }
         return h;
+    }
+
+    /** @return e.g. {@code "Matthews-Blakeslee, alpha = 60 deg, lambda = 60 deg"} */
+    @Override
+    public String toString() {
+        return "Matthews-Blakeslee, alpha = " + Decimals.format(alphaDegrees, "deg") + ", lambda = "
+                + Decimals.format(lambdaDegrees, "deg");
     }
 }

@@ -18,6 +18,7 @@ import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.BandEdgeShift;
 import org.wurtzkit.strain.CriticalThickness;
 import org.wurtzkit.strain.Strain;
+import org.wurtzkit.units.Decimals;
 
 /**
  * An immutable c-plane layer stack with everything a solver needs: the parameter set, the layers,
@@ -318,14 +319,40 @@ public final class Structure {
         return layersBeyondCriticalThickness(CriticalThickness.MATTHEWS_BLAKESLEE_60);
     }
 
+    /**
+     * A summary to read in jshell or a notebook, one line per item, top down: the parameter set,
+     * polarity and temperature; the top boundary; every layer with its material, thickness,
+     * relaxation, dopants, deep levels and delta sheets; the bottom boundary; and a warning for
+     * every layer thicker than its Matthews-Blakeslee critical thickness (an estimate). For example:
+     *
+     * <pre>
+     * Structure (vurgaftman-meyer-2003, metal-face, 300 K), top down:
+     *   top: Schottky gate, barrier 1 eV, bias 0 V
+     *   cap: GaN, 2 nm
+     *   barrier: Al0.26Ga0.74N, 22 nm
+     *   spacer: AlN, 1 nm
+     *   buffer: GaN, 1800 nm
+     *   bottom: zero field at the bottom
+     * </pre>
+     *
+     * @return the summary (lines separated by '\n')
+     */
     @Override
     public String toString() {
-        StringBuilder sb = new StringBuilder("Structure[");
+        StringBuilder sb = new StringBuilder("Structure (").append(parameters.name()).append(", ")
+                .append(polarity == Polarity.METAL_FACE ? "metal-face" : "N-face").append(", ")
+                .append(Decimals.format(temperatureK, "K")).append("), top down:\n");
+        sb.append("  top: ").append(top).append('\n');
         for (LayerState s : states) {
-            sb.append(s.layer().name()).append(' ').append(s.layer().material().describe()).append(' ')
-                    .append(String.format(java.util.Locale.ROOT, "%.3g nm", s.layer().thicknessNm())).append(" / ");
+            sb.append("  ").append(s.layer()).append('\n');
         }
-        return sb.append(polarity).append(", ").append(temperatureK).append(" K]").toString();
+        sb.append("  bottom: ").append(bottom);
+        for (LayerState s : layersBeyondCriticalThickness()) {
+            sb.append("\n  warning: ").append(s.layer().name()).append(" (")
+                    .append(Decimals.format(s.layer().thicknessNm(), "nm"))
+                    .append(") is thicker than its Matthews-Blakeslee critical thickness (an estimate); it may relax");
+        }
+        return sb.toString();
     }
 
     /**

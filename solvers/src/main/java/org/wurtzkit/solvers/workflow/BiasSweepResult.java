@@ -8,6 +8,7 @@ import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -232,5 +233,27 @@ public final class BiasSweepResult implements CsvTable {
         return List.of(CsvTable.cell(bias[i]), CsvTable.cell(sheet[i]),
                 CsvTable.cell(gateCharge[i]), CsvTable.cell(Units.perM2ToPerCm2(allElectrons[i])),
                 iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+    }
+
+    /**
+     * @return a summary line (number of biases, their range, how many converged, the n_s range) and
+     *         a {@link #preview(int) preview} of the table, e.g.
+     *         {@code "Bias sweep: 31 gate biases from 0 V to -6 V, 31 converged; n_s from 0 to 8.91e12 cm^-2"}
+     */
+    @Override
+    public String toString() {
+        double lo = Double.NaN;
+        double hi = Double.NaN;
+        for (double v : sheet) {
+            if (!Double.isNaN(v)) {
+                lo = Double.isNaN(lo) ? v : Math.min(lo, v);
+                hi = Double.isNaN(hi) ? v : Math.max(hi, v);
+            }
+        }
+        return "Bias sweep: " + bias.length + " gate biases from " + Decimals.format(bias[0], "V") + " to "
+                + Decimals.format(bias[bias.length - 1], "V") + ", " + (bias.length - failures.size()) + " converged"
+                + (failures.isEmpty() ? "" : ", " + failures.size() + " failed")
+                + (Double.isNaN(lo) ? "" : "; n_s from " + Decimals.format(lo) + " to " + Decimals.format(hi, "cm^-2"))
+                + "\n" + preview(10);
     }
 }

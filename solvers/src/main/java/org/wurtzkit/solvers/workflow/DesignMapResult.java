@@ -1,11 +1,13 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 
 /**
  * The result of a {@link DesignMap}: for every point (row-major, last axis fastest) its axis
@@ -185,5 +187,28 @@ public final class DesignMapResult implements CsvTable {
         }
         r.add(failureAt[i] == null ? "ok" : "failed: " + failureAt[i].message());
         return r;
+    }
+
+    /**
+     * @return a summary line (each axis with its size and range, the quantities, how many points
+     *         failed) and a {@link #preview(int) preview} of the table
+     */
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("Design map: ").append(size()).append(" points over ");
+        for (int a = 0; a < axes.size(); a++) {
+            Axis ax = axes.get(a);
+            if (a > 0) {
+                sb.append(" x ");
+            }
+            double[] v = ax.values();
+            double lo = Arrays.stream(v).min().orElseThrow();
+            double hi = Arrays.stream(v).max().orElseThrow();
+            sb.append(ax.name()).append(" (").append(v.length).append(v.length == 1 ? " value, " : " values, ")
+                    .append(Decimals.format(lo)).append(" to ").append(Decimals.format(hi, ax.unit())).append(')');
+        }
+        sb.append("; ").append(quantities.stream().map(Column::header).toList()).append(", ")
+                .append(failureList.size()).append(" failed");
+        return sb.append('\n').append(preview(10)).toString();
     }
 }

@@ -84,4 +84,17 @@ public interface PointEvaluator {
             }
         };
     }
+
+    /**
+     * n<sub>s</sub> at each point's own bias and V<sub>th</sub> in one call: one bias sweep per point
+     * whose range starts from the closed-form model's threshold (see
+     * {@link SheetDensityAndThreshold}); columns {@code sheet_density_cm^-2},
+     * {@code threshold_voltage_V} and {@code model_threshold_voltage_V}.
+     *
+     * @param definition the threshold definition, e.g. {@link ThresholdDefinition#constantDensity(double)}
+     * @return the evaluator with the default step and margins
+     */
+    static SheetDensityAndThreshold sheetDensityAndThreshold(ThresholdDefinition definition) {
+        return SheetDensityAndThreshold.of(definition);
+    }
 }

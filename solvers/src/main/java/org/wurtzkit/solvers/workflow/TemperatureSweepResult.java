@@ -7,6 +7,7 @@ import java.util.Optional;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.Subband;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 
 /**
  * The result of a {@link TemperatureSweep}: per temperature the 2DEG sheet density, the gate
@@ -171,5 +172,17 @@ public final class TemperatureSweepResult implements CsvTable {
         return List.of(CsvTable.cell(temperature[i]), CsvTable.cell(sheet[i]), CsvTable.cell(gateCharge[i]),
                 CsvTable.cell(groundSubband[i]), CsvTable.cell(bottomGap[i]),
                 iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+    }
+
+    /**
+     * @return a summary line (number of temperatures, their range, how many converged) and a
+     *         {@link #preview(int) preview} of the table
+     */
+    @Override
+    public String toString() {
+        return "Temperature sweep: " + temperature.length + " temperatures from " + Decimals.format(temperature[0], "K")
+                + " to " + Decimals.format(temperature[temperature.length - 1], "K") + ", "
+                + (temperature.length - failures.size()) + " converged"
+                + (failures.isEmpty() ? "" : ", " + failures.size() + " failed") + "\n" + preview(10);
     }
 }

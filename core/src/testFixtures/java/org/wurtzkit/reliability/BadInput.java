@@ -12,7 +12,7 @@ import org.wurtzkit.errors.WurtzkitException;
 
 /**
  * Rows of the bad-input tables of issue #7, shared by the reliability tests of every module (the
- * core test-jar carries it to materials-data and solvers).
+ * test sources of materials-data and solvers take it from core/src/testFixtures/java).
  *
  * <p>A row holds an action that must be rejected and what the rejection must say. The contract
  * checked is the one of {@link InvalidParameterException} (DEVELOPERS.md, "Errors"): the exception
