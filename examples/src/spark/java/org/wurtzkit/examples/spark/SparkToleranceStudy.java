@@ -33,8 +33,8 @@ import org.wurtzkit.solvers.workflow.ToleranceStudyResult;
  * driver and executors need the {@code --add-opens} options of {@link #JAVA_17_OPTIONS} (spark-submit
  * adds them itself; a JVM started otherwise, e.g. a test, must pass them).
  *
- * <p>{@link #main(String[])} runs the demo wafer's study both locally and on Spark, checks that the
- * two agree bit for bit and prints the time of each and their ratio.
+ * <p>{@link #main(String[])} runs the demo wafer's study on Spark and, for comparison, locally: it
+ * checks that the two agree bit for bit and prints the time of each and their ratio.
  */
 public final class SparkToleranceStudy {
     /**
@@ -98,49 +98,57 @@ public final class SparkToleranceStudy {
     }
 
     /**
-     * Runs the demo wafer's study locally (two threads) and on Spark, after a warm-up of both, checks
-     * that they agree bit for bit, and prints the times and their ratio.
+     * Runs the demo wafer's study (n_s) on Spark; unless told otherwise, also locally with as many
+     * threads as Spark's default parallelism, after a warm-up of both, checks that the two agree bit
+     * for bit and prints the times and their ratio.
      *
-     * @param args {@code [master (default local[2])] [rows (default 64)] [partitions (default 8)]}; with
-     *             spark-submit the master comes from the command line and the first argument may
-     *             be "-"
+     * @param args {@code [master (default local[2]; "-" = from spark-submit)] [rows (default 64)]
+     *             [partitions (default 8)] [--spark-only]}
      */
     public static void main(String[] args) {
         String master = args.length > 0 && !args[0].equals("-") ? args[0] : null;
         int rows = args.length > 1 ? Integer.parseInt(args[1]) : 64;
         int partitions = args.length > 2 ? Integer.parseInt(args[2]) : 8;
+        boolean compare = !(args.length > 3 && args[3].equals("--spark-only"));
         SparkConf conf = master != null ? conf(master) : new SparkConf().setAppName("wurtzkit tolerance study");
         DemoWaferRecipe recipe = new DemoWaferRecipe(rows, 1.0, 731, false);
         DemoWaferRecipe warmUp = new DemoWaferRecipe(8, 1.0, 1, false);
         System.out.println("Tolerance study of wafer " + DemoLab.WAFER + ", " + DemoLab.INVENTED + ": n_s, "
                 + recipe.build().size() + " evaluations");
         try (JavaSparkContext spark = new JavaSparkContext(conf)) {
-            spark.setLogLevel("WARN");
             int threads = Math.max(1, spark.defaultParallelism());
             // warm-up: JIT of the solver and Spark's start-up, not timed
-            ToleranceStudyExample.study(warmUp.settings(), threads, (d, t) -> {
-            }).run();
             run(spark, warmUp, partitions);
-
-            long t0 = System.nanoTime();
-            ToleranceStudyResult local = ToleranceStudyExample.study(recipe.settings(), threads, (d, t) -> {
-            }).run();
+            ToleranceStudyResult local = null;
+            double localS = Double.NaN;
+            if (compare) {
+                ToleranceStudyExample.study(warmUp.settings(), threads, (d, t) -> {
+                }).run();
+                long t0 = System.nanoTime();
+                local = ToleranceStudyExample.study(recipe.settings(), threads, (d, t) -> {
+                }).run();
+                localS = (System.nanoTime() - t0) * 1e-9;
+                System.out.printf(Locale.ROOT, "  local run, %d threads: %.2f s%n", threads, localS);
+            }
             long t1 = System.nanoTime();
             ToleranceStudyResult distributed = run(spark, recipe, partitions);
-            long t2 = System.nanoTime();
-            boolean same = identical(local, distributed);
-            double localS = (t1 - t0) * 1e-9;
-            double sparkS = (t2 - t1) * 1e-9;
-            System.out.printf(Locale.ROOT, "  local run, %d threads: %.2f s%n", threads, localS);
+            double sparkS = (System.nanoTime() - t1) * 1e-9;
             System.out.printf(Locale.ROOT, "  Spark (%s), %d partitions: %.2f s%n", spark.master(), partitions, sparkS);
-            System.out.printf(Locale.ROOT, "  Spark / local time ratio: %.2f (after start-up and warm-up)%n",
-                    sparkS / localS);
-            System.out.println("  identical bit for bit: " + same);
             ToleranceStudyResult.Summary s = distributed.summary(0);
             System.out.printf(Locale.ROOT, "  n_s mean %.4g cm^-2, sd %.3g cm^-2 over %d samples, %d failed%n", s.mean(),
                     s.standardDeviation(), s.count(), distributed.failures().size());
-            if (!same) {
-                throw new IllegalStateException("the Spark run differs from the local run");
+            for (ToleranceStudyResult.SobolIndex x : distributed.sensitivity(0).ranking()) {
+                System.out.printf(Locale.ROOT, "    %-22s S_i %.3f +- %.3f, S_Ti %.3f%n", x.input(), x.firstOrder(),
+                        x.firstOrderStandardError(), x.totalEffect());
+            }
+            if (compare) {
+                boolean same = identical(local, distributed);
+                System.out.printf(Locale.ROOT, "  Spark / local time ratio: %.2f (after start-up and warm-up)%n",
+                        sparkS / localS);
+                System.out.println("  identical bit for bit: " + same);
+                if (!same) {
+                    throw new IllegalStateException("the Spark run differs from the local run");
+                }
             }
         }
     }
