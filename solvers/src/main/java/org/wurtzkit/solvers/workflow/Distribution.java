@@ -231,7 +231,13 @@ public sealed interface Distribution permits Distribution.Normal, Distribution.U
         if (!(u > 0 && u < 1)) {
             throw new InvalidParameterException("probability of a quantile", Double.toString(u), "(0, 1)");
         }
-        return FastMath.sqrt(2.0) * Erf.erfInv(2 * u - 1);
+        double p = 2 * u - 1;
+        // 2u - 1 rounds to -1 for u < 2^-54 (and erfInv(-1) is infinite): stay one ulp inside, which
+        // limits the quantile to about -8.3 there; the sample designs give u >= 2^-53 / n
+        if (p <= -1) {
+            p = Math.nextUp(-1.0);
+        }
+        return FastMath.sqrt(2.0) * Erf.erfInv(p);
     }
 
     /**

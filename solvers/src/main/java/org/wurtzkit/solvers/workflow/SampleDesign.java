@@ -25,8 +25,8 @@ import org.wurtzkit.errors.Require;
  * SplitMix64 started at the study's seed, and the number is the (d + 1)-th output of SplitMix64
  * started at the stream's seed (G. L. Steele, D. Lea, C. H. Flood, "Fast splittable pseudorandom
  * number generators", OOPSLA 2014, 453 [from memory]; the same generator as
- * {@link java.util.SplittableRandom} created from a seed, which a test checks). The 53 high bits
- * give u = (m + 1/2) 2<sup>-53</sup>, strictly inside (0, 1). Every number is thus a pure function
+ * {@link java.util.SplittableRandom} created from a seed, which a test checks). The 52 high bits
+ * give u = (m + 1/2) 2<sup>-52</sup>, strictly inside (0, 1). Every number is thus a pure function
  * of (seed, r, d): any evaluation can be recomputed alone, on any thread or machine, with the same
  * bits; the order in which evaluations run never matters. Coordinates 0..k-1 are the row of A (or
  * of the plain sample), k..2k-1 the row of B.
@@ -43,6 +43,8 @@ import org.wurtzkit.errors.Require;
 public final class SampleDesign {
     /** The golden-ratio increment of SplitMix64, 2^64 / phi rounded to odd. */
     static final long GOLDEN_GAMMA = 0x9E3779B97F4A7C15L;
+    /** The largest double below 1. */
+    private static final double BELOW_ONE = Math.nextDown(1.0);
     /** Largest number of evaluations (the index is an int). */
     static final int MAX_EVALUATIONS = Integer.MAX_VALUE - 8;
 
@@ -214,7 +216,8 @@ public final class SampleDesign {
         }
         long key = stream(seed ^ 0x5DEECE66DL, -1 - coordinate);
         int stratum = permute(row, samples, key);
-        return (stratum + v) / samples;
+        // (n - 1 + v) / n rounds to 1.0 when n is large and v near 1: keep the open interval
+        return Math.min((stratum + v) / samples, BELOW_ONE);
     }
 
     /**
@@ -247,9 +250,12 @@ public final class SampleDesign {
         return mix64(streamSeed + (draw + 1L) * GOLDEN_GAMMA);
     }
 
-    /** @return (top 53 bits + 1/2) 2^-53, in (0, 1) */
+    /**
+     * @return (top 52 bits + 1/2) 2^-52, in [2^-53, 1 - 2^-53]: exact, since m + 1/2 for m &lt; 2^52
+     *         needs 53 significant bits (with 53 bits, m + 1/2 would round and could give 1.0)
+     */
     static double openUnit(long bits) {
-        return ((bits >>> 11) + 0.5) * 0x1.0p-53;
+        return ((bits >>> 12) + 0.5) * 0x1.0p-52;
     }
 
     /**

@@ -39,6 +39,27 @@ class SampleDesignTest {
         }
     }
 
+    /**
+     * Uniform numbers stay strictly inside (0, 1) at the extremes of the generator and of the
+     * strata, so that no quantile is infinite (exact floating-point arithmetic, no source).
+     */
+    @Test
+    void uniformNumbersNeverReachZeroOrOne() {
+        assertTrue(SampleDesign.openUnit(-1L) < 1.0);
+        assertTrue(SampleDesign.openUnit(0L) > 0.0);
+        // why the Latin hypercube keeps u below 1 explicitly: the top stratum would round to 1.0
+        assertEquals(1.0, (50_000_000 - 1 + SampleDesign.openUnit(-1L)) / 50_000_000);
+        SampleDesign big = new SampleDesign(List.of(UncertainInput.of("x", "", Distribution.normal(0, 1))), 50_000_000,
+                SamplingPlan.LATIN_HYPERCUBE, 3, false);
+        for (int r = 0; r < 2000; r++) {
+            double u = big.uniform(r, 0);
+            assertTrue(u > 0 && u < 1, "row " + r + ": " + u);
+            assertTrue(Double.isFinite(big.values(r)[0]));
+        }
+        assertTrue(Double.isFinite(Distribution.standardNormalQuantile(Double.MIN_VALUE)));
+        assertTrue(Double.isFinite(Distribution.standardNormalQuantile(Math.nextDown(1.0))));
+    }
+
     /** Standard normal quantiles against the table of Abramowitz &amp; Stegun (1964), Table 26.5. */
     @Test
     void normalQuantilesMatchTheHandbook() {
