@@ -158,6 +158,10 @@ public final class ToleranceStudyResult implements CsvTable {
             throw new InvalidParameterException("number of evaluations", Integer.toString(evaluations.size()),
                     "[" + n + ", " + n + "] (one per evaluation of the design)");
         }
+        if ((long) n * q > SampleDesign.MAX_EVALUATIONS) {
+            throw new InvalidParameterException("evaluations x outputs", Long.toString((long) n * q),
+                    "[1, " + SampleDesign.MAX_EVALUATIONS + "] (one array holds every value; split the study)");
+        }
         double[] v = new double[n * q];
         String[] f = new String[n];
         boolean[] seen = new boolean[n];
@@ -307,17 +311,17 @@ public final class ToleranceStudyResult implements CsvTable {
         int width = k + 2;
         int q = outputs.size();
         int n = design.samples();
-        List<Integer> rows = new ArrayList<>();
+        int[] rows = new int[n];
+        int m = 0;
         for (int r = 0; r < n; r++) {
             boolean ok = true;
             for (int s = 0; s < width && ok; s++) {
                 ok = failure[r * width + s] == null;
             }
             if (ok) {
-                rows.add(r);
+                rows[m++] = r;
             }
         }
-        int m = rows.size();
         Column c = outputs.get(output);
         if (m < 2) {
             throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "sensitivity of " + c.name() + ": " + m + " of " + n
@@ -328,7 +332,7 @@ public final class ToleranceStudyResult implements CsvTable {
         double[] fb = new double[m];
         double[] ab = new double[2 * m];
         for (int t = 0; t < m; t++) {
-            int base = rows.get(t) * width;
+            int base = rows[t] * width;
             fa[t] = values[base * q + output];
             fb[t] = values[(base + 1) * q + output];
             ab[t] = fa[t];
@@ -345,7 +349,7 @@ public final class ToleranceStudyResult implements CsvTable {
         for (int i = 0; i < k; i++) {
             double tot = 0;
             for (int t = 0; t < m; t++) {
-                double fabi = values[(rows.get(t) * width + 2 + i) * q + output] - f0;
+                double fabi = values[(rows[t] * width + 2 + i) * q + output] - f0;
                 double a = fa[t] - f0;
                 terms[t] = (fb[t] - f0) * (fabi - a);
                 tot += (a - fabi) * (a - fabi);
