@@ -204,10 +204,12 @@ public final class ToleranceStudyExample {
             lines.add(String.format(Locale.ROOT, "  %s: mean %.4g, sd %.3g, 5-95 %% %.4g to %.4g (%d samples)",
                     s.column().header(), s.mean(), s.standardDeviation(), s.p05(), s.p95(), s.count()));
             StringBuilder rank = new StringBuilder("    ranking by first-order index:");
-            for (ToleranceStudyResult.SobolIndex x : r.sensitivity(q).ranking()) {
+            ToleranceStudyResult.Sensitivity ranked = r.sensitivity(q);
+            for (ToleranceStudyResult.SobolIndex x : ranked.ranking()) {
                 rank.append(String.format(Locale.ROOT, " %s %.2f;", x.input(), x.firstOrder()));
             }
             lines.add(rank.toString());
+            ranked.warnings().forEach(w -> lines.add("    warning: " + w));
         }
         r.failures().stream().limit(5).forEach(f -> lines.add("    " + f));
         lines.add("  model estimates: confirm by measurement");

@@ -137,10 +137,12 @@ public final class SparkToleranceStudy {
             ToleranceStudyResult.Summary s = distributed.summary(0);
             System.out.printf(Locale.ROOT, "  n_s mean %.4g cm^-2, sd %.3g cm^-2 over %d samples, %d failed%n", s.mean(),
                     s.standardDeviation(), s.count(), distributed.failures().size());
-            for (ToleranceStudyResult.SobolIndex x : distributed.sensitivity(0).ranking()) {
+            ToleranceStudyResult.Sensitivity sens = distributed.sensitivity(0);
+            for (ToleranceStudyResult.SobolIndex x : sens.ranking()) {
                 System.out.printf(Locale.ROOT, "    %-22s S_i %.3f +- %.3f, S_Ti %.3f%n", x.input(), x.firstOrder(),
                         x.firstOrderStandardError(), x.totalEffect());
             }
+            sens.warnings().forEach(w -> System.out.println("    warning: " + w));
             if (compare) {
                 boolean same = identical(local, distributed);
                 System.out.printf(Locale.ROOT, "  Spark / local time ratio: %.2f (after start-up and warm-up)%n",

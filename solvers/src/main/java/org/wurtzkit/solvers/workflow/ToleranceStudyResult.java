@@ -84,11 +84,20 @@ public final class ToleranceStudyResult implements CsvTable {
      * @param rows     rows of the design used (all k + 2 evaluations succeeded)
      * @param skipped  rows left out because an evaluation failed
      * @param indices  one index per input, in input order
+     * @param warnings why the indices may mislead, if they may (empty otherwise): a standard error
+     *                 above {@value #ROUGH_STANDARD_ERROR}, which can reorder inputs whose indices lie
+     *                 closer than that; rows left out by failures, which select the samples by
+     *                 their outcome
      */
-    public record Sensitivity(Column column, double variance, int rows, int skipped, List<SobolIndex> indices) {
-        /** Copies the list. */
+    public record Sensitivity(Column column, double variance, int rows, int skipped, List<SobolIndex> indices,
+            List<String> warnings) {
+        /** Standard error of a first-order index above which the ranking gets a warning. */
+        public static final double ROUGH_STANDARD_ERROR = 0.05;
+
+        /** Copies the lists. */
         public Sensitivity {
             indices = List.copyOf(indices);
+            warnings = List.copyOf(warnings);
         }
 
         /** @return the indices from the largest first-order index down (ties keep input order) */
@@ -358,7 +367,17 @@ public final class ToleranceStudyResult implements CsvTable {
             double se = Math.sqrt(StatUtils.variance(terms) / m);
             indices.add(new SobolIndex(design.inputs().get(i).column().name(), vi / var, se / var, tot / (2.0 * m) / var));
         }
-        return new Sensitivity(c, var, m, n - m, indices);
+        List<String> warnings = new ArrayList<>();
+        double worst = indices.stream().mapToDouble(SobolIndex::firstOrderStandardError).max().orElse(0);
+        if (worst > Sensitivity.ROUGH_STANDARD_ERROR) {
+            warnings.add(String.format(java.util.Locale.ROOT, "first-order indices carry standard errors up to %.3f "
+                    + "with %d rows: inputs closer than that may be ranked in either order; add samples", worst, m));
+        }
+        if (m < n) {
+            warnings.add((n - m) + " of " + n + " rows left out because an evaluation failed: if failures depend on "
+                    + "the inputs, the indices describe only the part of the input space that succeeded");
+        }
+        return new Sensitivity(c, var, m, n - m, indices, warnings);
     }
 
     /** @return whether evaluation j is an independent sample (a row of A or B, or a plain sample) */

@@ -173,6 +173,7 @@ class SampleDesignTest {
             assertEquals(0.16 / 0.7225, s1.totalEffect(), 0.02, plan.toString());
             assertEquals(0.5625 / 0.7225, s2.totalEffect(), 0.02, plan.toString());
             assertEquals("x2", sens.ranking().get(0).input());
+            assertTrue(sens.warnings().isEmpty(), sens.warnings().toString());
         }
     }
 
@@ -277,6 +278,7 @@ class SampleDesignTest {
         ToleranceStudyResult.Sensitivity sens = r.sensitivity(0);
         assertEquals(400, sens.rows() + sens.skipped());
         assertTrue(sens.skipped() > 0);
+        assertTrue(sens.warnings().stream().anyMatch(w -> w.contains("rows left out")), sens.warnings().toString());
     }
 
     /** Bad input: each a clear exception naming the parameter. */
