@@ -12,6 +12,10 @@
  * thickness that meets a target n_s or V_th.</li>
  * <li>{@link org.wurtzkit.solvers.workflow.ParameterSetSpread}: one design solved with every
  * parameter set; min / median / max.</li>
+ * <li>{@link org.wurtzkit.solvers.workflow.ToleranceStudy}: Monte Carlo or Latin hypercube over growth
+ * tolerances and material constants ({@link org.wurtzkit.solvers.workflow.Tolerance}); mean,
+ * standard deviation, quantiles and Sobol indices; every sample reproducible alone from the seed, so
+ * the same study can run on a distributed engine (see the examples module).</li>
  * </ul>
  *
  * <p>Every workflow returns an immutable result that writes itself as CSV
