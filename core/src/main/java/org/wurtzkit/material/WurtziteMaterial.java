@@ -200,7 +200,9 @@ public final class WurtziteMaterial {
 
     /**
      * Mutable builder for a custom material. {@link #build()} checks that every parameter is set
-     * and finite, and that the physically signed ones have the right sign.
+     * and finite, that the physically signed ones have the right sign, and that each lies in its
+     * plausible range ({@link MaterialParameter#plausibleMinInFileUnit()}): a GaN lattice constant
+     * typed in nm instead of Angstrom is rejected, not turned into a wrong polarization charge.
      */
     public static final class Builder {
         /** Parameters that must be strictly positive (lengths, stiffnesses, gap, masses, permittivities). */
@@ -270,6 +272,17 @@ public final class WurtziteMaterial {
             }
             Require.nonNegative(MaterialParameter.VARSHNI_ALPHA.key() + " of " + name,
                     values[MaterialParameter.VARSHNI_ALPHA.ordinal()]);
+            for (MaterialParameter p : ALL) {
+                double inFileUnit = values[p.ordinal()] / p.fileToSi();
+                if (!(inFileUnit >= p.plausibleMinInFileUnit() && inFileUnit <= p.plausibleMaxInFileUnit())) {
+                    throw new InvalidParameterException(p.key() + " of " + name,
+                            new java.math.BigDecimal(inFileUnit).round(new java.math.MathContext(10))
+                                    .stripTrailingZeros().toPlainString()
+                                    + ("1".equals(p.fileUnit()) ? "" : " " + p.fileUnit()),
+                            p.plausibleRangeText() + " (the plausible range for a wurtzite nitride; a value outside"
+                                    + " it is usually a unit slip)");
+                }
+            }
             return new WurtziteMaterial(name, composition, values.clone(), provenance.clone());
         }
     }
