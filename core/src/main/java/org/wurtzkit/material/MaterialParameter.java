@@ -62,8 +62,13 @@ public enum MaterialParameter {
     HEAVY_HOLE_MASS_PARALLEL("mhh_par", "m0", "m0", 1),
     /** Heavy-hole effective mass perpendicular to c (relative to m0). */
     HEAVY_HOLE_MASS_PERPENDICULAR("mhh_perp", "m0", "m0", 1),
-    /** Static relative permittivity (along c, the direction that matters for c-plane stacks). */
+    /**
+     * Static relative permittivity along c (the extraordinary component, epsilon_33): the component
+     * that the Poisson equation of a c-plane stack uses, since its fields point along c.
+     */
     PERMITTIVITY_STATIC("eps_static", "1", "1", 1),
+    /** Static relative permittivity across c (the ordinary component, epsilon_11 = epsilon_22). */
+    PERMITTIVITY_STATIC_PERPENDICULAR("eps_static_perp", "1", "1", 1),
     /** High-frequency relative permittivity. */
     PERMITTIVITY_HIGH_FREQUENCY("eps_inf", "1", "1", 1),
     /**
@@ -162,7 +167,7 @@ public enum MaterialParameter {
             case VARSHNI_BETA -> new double[] {1, 5000};
             case ELECTRON_MASS_PARALLEL, ELECTRON_MASS_PERPENDICULAR, HEAVY_HOLE_MASS_PARALLEL,
                     HEAVY_HOLE_MASS_PERPENDICULAR -> new double[] {0.01, 20};
-            case PERMITTIVITY_STATIC, PERMITTIVITY_HIGH_FREQUENCY -> new double[] {3, 30};
+            case PERMITTIVITY_STATIC, PERMITTIVITY_STATIC_PERPENDICULAR, PERMITTIVITY_HIGH_FREQUENCY -> new double[] {3, 30};
             case VALENCE_BAND_EDGE -> new double[] {-5, 5};
             case DEFORMATION_CB_PARALLEL, DEFORMATION_CB_PERPENDICULAR, DEFORMATION_D1, DEFORMATION_D2,
                     DEFORMATION_D3, DEFORMATION_D4 -> new double[] {-40, 40};

@@ -116,9 +116,22 @@ public final class WurtziteMaterial {
                 get(MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR));
     }
 
-    /** {@return static relative permittivity} */
+    /**
+     * {@return the static relative permittivity along c} The same as
+     * {@link #permittivityStaticAlongC()}: the component that matters for c-plane stacks.
+     */
     public double permittivityStatic() {
+        return permittivityStaticAlongC();
+    }
+
+    /** {@return the static relative permittivity along c (epsilon_33), used by the Poisson equation of c-plane stacks} */
+    public double permittivityStaticAlongC() {
         return get(MaterialParameter.PERMITTIVITY_STATIC);
+    }
+
+    /** {@return the static relative permittivity across c (epsilon_11)} */
+    public double permittivityStaticAcrossC() {
+        return get(MaterialParameter.PERMITTIVITY_STATIC_PERPENDICULAR);
     }
 
     /** {@return high-frequency relative permittivity} */
@@ -211,7 +224,8 @@ public final class WurtziteMaterial {
                 MaterialParameter.C44, MaterialParameter.BAND_GAP_0K, MaterialParameter.VARSHNI_BETA,
                 MaterialParameter.ELECTRON_MASS_PARALLEL, MaterialParameter.ELECTRON_MASS_PERPENDICULAR,
                 MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR,
-                MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY};
+                MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_STATIC_PERPENDICULAR,
+                MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY};
 
         private final String name;
         private Composition composition;
