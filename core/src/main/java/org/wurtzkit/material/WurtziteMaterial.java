@@ -26,12 +26,15 @@ public final class WurtziteMaterial {
     private final Composition composition;
     private final double[] values;
     private final Provenance[] provenance;
+    private final BandGap.PerBinary perBinaryGap;
 
-    private WurtziteMaterial(String name, Composition composition, double[] values, Provenance[] provenance) {
+    private WurtziteMaterial(String name, Composition composition, double[] values, Provenance[] provenance,
+            BandGap.PerBinary perBinaryGap) {
         this.name = name;
         this.composition = composition;
         this.values = values;
         this.provenance = provenance;
+        this.perBinaryGap = perBinaryGap;
     }
 
     /** {@return a readable name, e.g. "Al0.25Ga0.75N (vurgaftman-meyer-2003)"} */
@@ -103,10 +106,15 @@ public final class WurtziteMaterial {
         return get(MaterialParameter.SPONTANEOUS_POLARIZATION) + get(MaterialParameter.SPONTANEOUS_POLARIZATION_BOWING);
     }
 
-    /** {@return the band gap model (eV, Varshni)} */
+    /**
+     * {@return the band gap model (eV, Varshni)} For an alloy of a set whose
+     * {@link ParameterSet#alloyGapTemperatureRule()} is
+     * {@link AlloyGapTemperatureRule#VARSHNI_PER_BINARY_THEN_BOWING}, it carries the binaries' own
+     * Varshni laws ({@link BandGap#perBinary()}).
+     */
     public BandGap bandGap() {
         return new BandGap(get(MaterialParameter.BAND_GAP_0K), get(MaterialParameter.VARSHNI_ALPHA),
-                get(MaterialParameter.VARSHNI_BETA));
+                get(MaterialParameter.VARSHNI_BETA), perBinaryGap);
     }
 
     /** {@return effective masses relative to m0} */
@@ -175,6 +183,7 @@ public final class WurtziteMaterial {
         b.composition = composition;
         System.arraycopy(values, 0, b.values, 0, values.length);
         System.arraycopy(provenance, 0, b.provenance, 0, provenance.length);
+        b.perBinaryGap = perBinaryGap;
         return b;
     }
 
@@ -198,7 +207,7 @@ public final class WurtziteMaterial {
     @Override
     public boolean equals(Object o) {
         return o instanceof WurtziteMaterial w && w.name.equals(name) && Objects.equals(w.composition, composition)
-                && Arrays.equals(w.values, values);
+                && Arrays.equals(w.values, values) && Objects.equals(w.perBinaryGap, perBinaryGap);
     }
 
     @Override
@@ -231,6 +240,7 @@ public final class WurtziteMaterial {
         private Composition composition;
         private final double[] values = new double[ALL.length];
         private final Provenance[] provenance = new Provenance[ALL.length];
+        private BandGap.PerBinary perBinaryGap;
 
         private Builder(String name) {
             this.name = Require.nonNull("material name", name);
@@ -255,6 +265,10 @@ public final class WurtziteMaterial {
         public Builder set(MaterialParameter p, double value, Provenance origin) {
             Require.nonNull("material parameter", p);
             Require.finite(p.key() + " of " + name, value);
+            if (p == MaterialParameter.BAND_GAP_0K || p == MaterialParameter.VARSHNI_ALPHA
+                    || p == MaterialParameter.VARSHNI_BETA) {
+                perBinaryGap = null; // a gap set by hand replaces the binaries' laws
+            }
             values[p.ordinal()] = value;
             provenance[p.ordinal()] = Require.nonNull("provenance of " + p.key(), origin);
             return this;
@@ -269,6 +283,12 @@ public final class WurtziteMaterial {
         public Builder set(MaterialParameter p, double value, Source source) {
             Require.nonNull("material parameter", p);
             return set(p, value, Provenance.tabulated(Require.nonNull("source of " + p.key(), source)));
+        }
+
+        /** Sets the per-binary gap form (by {@link AlloyRules}, after the gap parameters). */
+        Builder perBinaryGap(BandGap.PerBinary form) {
+            this.perBinaryGap = form;
+            return this;
         }
 
         /**
@@ -297,7 +317,7 @@ public final class WurtziteMaterial {
                                     + " it is usually a unit slip)");
                 }
             }
-            return new WurtziteMaterial(name, composition, values.clone(), provenance.clone());
+            return new WurtziteMaterial(name, composition, values.clone(), provenance.clone(), perBinaryGap);
         }
     }
 }
