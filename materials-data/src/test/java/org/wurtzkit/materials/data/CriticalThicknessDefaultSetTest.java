@@ -46,7 +46,7 @@ class CriticalThicknessDefaultSetTest {
      * fitted fracture resistance 9 J/m^2; it must lie within 25 % of their measured energy-density
      * onset (two numbers from the same measurements, reached by different routes) and above the
      * 20-30 nm Al0.25-0.30 barriers that HEMT wafers grow coherently every day (common practice, no
-     * source). The former 60-degree Matthews-Blakeslee default gave about 15 nm.
+     * source). The former 60-degree Matthews-Blakeslee default gave about 13 nm.
      */
     @Test
     void al30OnGanLiesInTheMeasuredRange() {
