@@ -16,7 +16,7 @@ import org.wurtzkit.polarization.Polarity;
 import org.wurtzkit.polarization.Polarization;
 import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.BandEdgeShift;
-import org.wurtzkit.strain.CriticalThickness;
+import org.wurtzkit.strain.CriticalThicknessModel;
 import org.wurtzkit.strain.Strain;
 import org.wurtzkit.units.Decimals;
 
@@ -302,7 +302,8 @@ public final class Structure {
      * @param model the critical-thickness model
      * @return the layers (from the top down) thicker than the critical thickness for their strain
      */
-    public List<LayerState> layersBeyondCriticalThickness(CriticalThickness model) {
+    public List<LayerState> layersBeyondCriticalThickness(CriticalThicknessModel model) {
+        org.wurtzkit.errors.Require.nonNull("critical-thickness model", model);
         List<LayerState> out = new ArrayList<>();
         for (LayerState s : states) {
             PointState worst = Math.abs(s.top().strain().xx()) >= Math.abs(s.bottom().strain().xx()) ? s.top()
@@ -314,9 +315,13 @@ public final class Structure {
         return Collections.unmodifiableList(out);
     }
 
-    /** {@return the layers beyond the Matthews-Blakeslee thickness with the default 60-degree geometry} */
+    /**
+     * {@return the layers beyond the critical thickness of the default model
+     * {@link CriticalThicknessModel#C_PLANE_WURTZITE}: channel cracking for layers under tension,
+     * pyramidal-slip Matthews-Blakeslee for layers under compression}
+     */
     public List<LayerState> layersBeyondCriticalThickness() {
-        return layersBeyondCriticalThickness(CriticalThickness.MATTHEWS_BLAKESLEE_60);
+        return layersBeyondCriticalThickness(CriticalThicknessModel.C_PLANE_WURTZITE);
     }
 
     /**

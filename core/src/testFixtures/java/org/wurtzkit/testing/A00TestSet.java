@@ -85,6 +85,7 @@ public final class A00TestSet implements ParameterSet {
                 .set(MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, mhhPar, VM03)
                 .set(MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR, mhhPerp, VM03)
                 .set(MaterialParameter.PERMITTIVITY_STATIC, eps, A00)
+                .set(MaterialParameter.PERMITTIVITY_STATIC_PERPENDICULAR, eps, FILLER)
                 .set(MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY, epsInf, FILLER)
                 .set(MaterialParameter.VALENCE_BAND_EDGE, ev, A00)
                 .set(MaterialParameter.DEFORMATION_CB_PARALLEL, -8.6, VM03)

@@ -127,7 +127,7 @@ final class Device {
             layerOfCell[k] = li;
             PointState p = s.pointAt(mid);
             WurtziteMaterial m = p.material();
-            eps[k] = m.permittivityStatic() * Constants.VACUUM_PERMITTIVITY;
+            eps[k] = m.permittivityStaticAlongC() * Constants.VACUUM_PERMITTIVITY;
             px[k] = -p.alongGrowth();
             BandEdges edges = s.bandEdgesAt(p);
             ec[k] = edges.conductionEv();
