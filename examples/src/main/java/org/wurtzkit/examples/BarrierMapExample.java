@@ -117,7 +117,7 @@ public final class BarrierMapExample {
                 .axes("Al fraction x of the barrier", "barrier thickness (nm)")
                 .quantity(Labels.N_S + " (" + Labels.powerOfTen(13) + " " + Labels.PER_CM2 + ")")
                 .title(DemoLab.WAFER + " family (invented)")
-                .name("self-consistent solver")
+                .name("full solver")
                 .compareWith("analytic model", scaled(analytic))
                 .mark("wafer " + DemoLab.WAFER, DemoLab.AL_FRACTION, DemoLab.BARRIER_NM)
                 .panelSize(PANEL_WIDTH, PANEL_HEIGHT);

@@ -147,8 +147,12 @@ public final class TradeoffPlot {
             XYChart c = Style.xy(width, panelHeight + extra, first ? title : "", xTitle, panel.yTitle());
             c.getStyler().setChartTitleVisible(first && !title.isEmpty());
             c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNE);
-            c.getStyler().setXAxisMin(x[0]);
-            c.getStyler().setXAxisMax(x[x.length - 1]);
+            // the plot area is the axes' range (so that a mark runs from top to bottom), with the
+            // first and last points 3 % inside it
+            double pad = 0.03 * (x[x.length - 1] - x[0]);
+            c.getStyler().setPlotContentSize(0.9999);
+            c.getStyler().setXAxisMin(x[0] - pad);
+            c.getStyler().setXAxisMax(x[x.length - 1] + pad);
             double lo = Double.POSITIVE_INFINITY;
             double hi = Double.NEGATIVE_INFINITY;
             boolean seenPoints = false;

@@ -136,6 +136,39 @@ class NotebookTest {
         assertFalse(Files.exists(Path.of("notebook-out")), "nothing written into the module folder");
     }
 
+    /**
+     * The README's block for jshell and notebooks, run as a script by the jshell tool in an empty
+     * folder with the one jar as its class path: no error, no exception, and the PNG and SVG it
+     * writes there.
+     */
+    @Test
+    void readmePlotBlockRunsInJshellFromTheOneJar(@TempDir Path work) throws Exception {
+        Path jar = Path.of(System.getProperty("wurtzkit.all.jar", "target/wurtzkit-examples-all.jar"));
+        assertTrue(Files.isRegularFile(jar), jar + " is missing: it is built in the package phase (mvn -B -ntp verify)");
+        String readme = Files.readString(Path.of(System.getProperty("wurtzkit.readme", "../README.md")),
+                StandardCharsets.UTF_8);
+        int start = readme.indexOf("\n## Plots in a notebook or jshell\n");
+        assertTrue(start >= 0, "README has no section \"Plots in a notebook or jshell\"");
+        int end = readme.indexOf("\n## ", start + 4);
+        String section = readme.substring(start, end);
+        assertTrue(section.contains("jshell --class-path examples/target/wurtzkit-examples-all.jar"),
+                "the one-line load names the jar the build makes");
+        assertEquals("wurtzkit-examples-all.jar", jar.getFileName().toString());
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("```java\\n(.*?)```", java.util.regex.Pattern.DOTALL)
+                .matcher(section);
+        assertTrue(m.find(), "no java block in the section");
+        Path dir = Files.createDirectories(work.resolve("session"));
+        Path script = work.resolve("readme-plots.jsh");
+        Files.writeString(script, m.group(1) + "\n/exit\n", StandardCharsets.UTF_8);
+        String out = ProcessRuns.runIn(List.of(ProcessRuns.jdkTool("jshell"), "-R-Djava.awt.headless=true",
+                "--class-path", jar.toAbsolutePath().toString(), script.toAbsolutePath().toString()), work, dir);
+        assertFalse(out.contains("Error:") || out.contains("Exception"), "jshell reported a problem:\n" + out);
+        BufferedImage img = ImageIO.read(dir.resolve("band-diagram.png").toFile());
+        assertNotNull(img, "band-diagram.png written:\n" + out);
+        assertEquals(1400, img.getWidth());
+        assertTrue(Files.readString(dir.resolve("band-diagram.svg"), StandardCharsets.UTF_8).contains("</svg>"));
+    }
+
     /** Parses a JSON document into maps, lists, strings, numbers, booleans and nulls. */
     static Map<String, Object> json(Path file) throws IOException {
         try (JsonParser p = new JsonFactory().createParser(file.toFile())) {
