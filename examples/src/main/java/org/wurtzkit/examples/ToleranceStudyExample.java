@@ -18,6 +18,7 @@ import org.knowm.xchart.internal.chartpart.Chart;
 import org.knowm.xchart.style.CategoryStyler;
 import org.knowm.xchart.style.Styler;
 import org.wurtzkit.material.Binary;
+import org.wurtzkit.plot.TolerancePlot;
 import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
@@ -52,8 +53,8 @@ import org.wurtzkit.solvers.workflow.ToleranceStudyResult;
  * function in Spark tasks and gets the same numbers bit for bit.
  */
 public final class ToleranceStudyExample {
-    static final int PANEL_WIDTH = 640;
-    static final int PANEL_HEIGHT = 560;
+    static final int PANEL_WIDTH = org.wurtzkit.plot.TolerancePlot.PANEL_WIDTH;
+    static final int PANEL_HEIGHT = org.wurtzkit.plot.TolerancePlot.PANEL_HEIGHT;
     /** Highest bias of each threshold sweep (V). */
     private static final double TOP_BIAS_V = 0.5;
     /** How far below the analytic threshold of the nominal wafer each sweep reaches (V). */
@@ -174,25 +175,23 @@ public final class ToleranceStudyExample {
         ToleranceStudyResult r = study.run();
 
         List<Path> files = new ArrayList<>();
-        List<Chart<?, ?>> panels = new ArrayList<>();
-        panels.add(histogram(r, 0, 1e-13, "n\u209b at V_g = 0 V (10\u00b9\u00b3 cm\u207b\u00b2)",
-                "Spread of n\u209b, wafer " + DemoLab.WAFER + " (invented tolerances)", Charts.BLUE));
+        TolerancePlot plot = TolerancePlot.of(r).histogram(0, 1e-13, "n_s at V_g = 0 V (10\u00b9\u00b3 cm\u207b\u00b2)",
+                "Spread of n_s, wafer " + DemoLab.WAFER + " (invented tolerances)");
         if (r.outputs().size() > 1) {
-            panels.add(histogram(r, 1, 1, "threshold voltage V_th (V), linear extrapolation",
-                    "Spread of V_th, wafer " + DemoLab.WAFER + " (invented tolerances)", Charts.ORANGE));
+            plot.histogram(1, 1, "threshold voltage V_th (V), linear extrapolation",
+                    "Spread of V_th, wafer " + DemoLab.WAFER + " (invented tolerances)");
         }
-        panels.add(ranking(r));
-        Path png = out.resolve("tolerance-study.png");
-        BitmapEncoder.saveBitmap(panels, 1, panels.size(), png.toString(), BitmapEncoder.BitmapFormat.PNG);
+        plot.ranking(LABELS, "Which tolerance dominates? (invented demo tolerances)");
+        Path png = plot.writePng(out.resolve("tolerance-study.png"));
         files.add(png);
         Path all = out.resolve("tolerance-study.csv");
-        r.writeCsv(all);
+        Tables.write(r, all);
         files.add(all);
         Path summary = out.resolve("tolerance-study-summary.csv");
-        r.summaryTable().writeCsv(summary);
+        Tables.write(r.summaryTable(), summary);
         files.add(summary);
         Path sens = out.resolve("tolerance-study-sensitivity.csv");
-        r.sensitivityTable().writeCsv(sens);
+        Tables.write(r.sensitivityTable(), sens);
         files.add(sens);
 
         List<String> lines = new ArrayList<>();
@@ -214,110 +213,5 @@ public final class ToleranceStudyExample {
         r.failures().stream().limit(5).forEach(f -> lines.add("    " + f));
         lines.add("  model estimates: confirm by measurement");
         return new Result(r, List.copyOf(files), List.copyOf(lines));
-    }
-
-    /** A histogram of the independent samples of one output, with mean and 5 % / 95 % quantiles. */
-    private static XYChart histogram(ToleranceStudyResult r, int output, double scale, String xTitle, String title,
-            Color color) {
-        double[] v = r.sampleValues(output);
-        ToleranceStudyResult.Summary s = r.summary(output);
-        XYChart c = Charts.xy(PANEL_WIDTH, PANEL_HEIGHT, title, xTitle, "samples per bin");
-        c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNW);
-        int bins = Math.max(6, Math.min(30, (int) Math.ceil(Math.sqrt(v.length))));
-        double lo = s.min() * scale;
-        double hi = s.max() * scale;
-        double w = (hi - lo) / bins;
-        if (!(w > 0)) {
-            w = Math.max(Math.abs(lo) * 1e-3, 1e-9);
-        }
-        int[] counts = new int[bins];
-        for (double x : v) {
-            int b = (int) Math.floor((x * scale - lo) / w);
-            counts[Math.min(bins - 1, Math.max(0, b))]++;
-        }
-        double[] px = new double[2 * bins + 2];
-        double[] py = new double[2 * bins + 2];
-        px[0] = lo;
-        py[0] = 0;
-        int top = 0;
-        for (int b = 0; b < bins; b++) {
-            px[1 + 2 * b] = lo + b * w;
-            py[1 + 2 * b] = counts[b];
-            px[2 + 2 * b] = lo + (b + 1) * w;
-            py[2 + 2 * b] = counts[b];
-            top = Math.max(top, counts[b]);
-        }
-        px[2 * bins + 1] = lo + bins * w;
-        py[2 * bins + 1] = 0;
-        Charts.polygon(c, String.format(Locale.ROOT, "%d samples", v.length), px, py, lighter(color), true);
-        double yTop = Math.ceil(1.3 * top) + 1;
-        Charts.line(c, String.format(Locale.ROOT, "mean %s", Charts.sig(s.mean() * scale, 4)),
-                new double[] {s.mean() * scale, s.mean() * scale}, new double[] {0, yTop}, Charts.INK, Charts.DASHED);
-        Charts.line(c, "5 % and 95 % quantiles", new double[] {s.p05() * scale, s.p05() * scale, Double.NaN,
-            s.p95() * scale, s.p95() * scale}, new double[] {0, yTop, Double.NaN, 0, yTop}, color, Charts.DOTTED);
-        c.getStyler().setYAxisMin(0.0);
-        c.getStyler().setYAxisMax(yTop);
-        double pad = 0.08 * (hi - lo) + w;
-        c.getStyler().setXAxisMin(lo - pad);
-        c.getStyler().setXAxisMax(hi + pad);
-        return c;
-    }
-
-    /** The first-order Sobol indices of every output as bars, with one standard error. */
-    private static CategoryChart ranking(ToleranceStudyResult r) {
-        CategoryChart c = new CategoryChartBuilder().width(PANEL_WIDTH).height(PANEL_HEIGHT)
-                .title("Which tolerance dominates? (invented demo tolerances)")
-                .xAxisTitle("tolerance").yAxisTitle("first-order Sobol index S\u1d62").build();
-        CategoryStyler st = c.getStyler();
-        st.setLocale(Locale.ROOT);
-        st.setAntiAlias(true);
-        st.setChartBackgroundColor(Color.WHITE);
-        st.setPlotBackgroundColor(Color.WHITE);
-        st.setPlotBorderColor(Charts.GREY);
-        st.setPlotGridLinesColor(Charts.GRID);
-        st.setChartFontColor(Charts.INK);
-        st.setAxisTickLabelsColor(Charts.INK);
-        st.setChartTitleFont(new Font(Charts.FAMILY, Font.BOLD, 17));
-        st.setChartTitleBoxVisible(false);
-        st.setAxisTitleFont(new Font(Charts.FAMILY, Font.PLAIN, 16));
-        st.setAxisTickLabelsFont(new Font(Charts.FAMILY, Font.PLAIN, 13));
-        st.setLegendFont(new Font(Charts.FAMILY, Font.PLAIN, 13));
-        st.setLegendPosition(Styler.LegendPosition.InsideN);
-        st.setLegendBorderColor(Charts.GREY);
-        st.setXAxisLabelRotation(35);
-        st.setChartPadding(12);
-        st.setErrorBarsColor(Charts.INK);
-        st.setYAxisDecimalPattern("0.00");
-        st.setAvailableSpaceFill(0.7);
-        List<String> labels = new ArrayList<>(LABELS);
-        if (labels.size() != r.design().inputs().size()) {
-            labels = r.design().inputs().stream().map(i -> i.column().name()).toList();
-        }
-        Color[] colors = {Charts.BLUE, Charts.ORANGE, Charts.GREEN};
-        double max = 0;
-        double min = 0;
-        for (int q = 0; q < r.outputs().size(); q++) {
-            ToleranceStudyResult.Sensitivity s = r.sensitivity(q);
-            double[] y = new double[labels.size()];
-            double[] e = new double[labels.size()];
-            for (int i = 0; i < y.length; i++) {
-                y[i] = s.indices().get(i).firstOrder();
-                e[i] = s.indices().get(i).firstOrderStandardError();
-                max = Math.max(max, y[i] + e[i]);
-                min = Math.min(min, y[i] - e[i]);
-            }
-            String name = q == 0 ? "n\u209b" : r.outputs().get(q).name().equals("threshold_voltage") ? "V_th"
-                    : r.outputs().get(q).name();
-            CategorySeries series = c.addSeries(name + " (\u00b1 1 standard error)", labels,
-                    Arrays.stream(y).boxed().toList(), Arrays.stream(e).boxed().toList());
-            series.setFillColor(colors[q % colors.length]);
-        }
-        st.setYAxisMin(Math.floor(min * 10) / 10);
-        st.setYAxisMax(Math.max(1.0, Math.ceil(max * 10) / 10) + 0.3); // room for the legend
-        return c;
-    }
-
-    private static Color lighter(Color c) {
-        return new Color((c.getRed() + 2 * 255) / 3, (c.getGreen() + 2 * 255) / 3, (c.getBlue() + 2 * 255) / 3);
     }
 }

@@ -1,4 +1,4 @@
-package org.wurtzkit.examples;
+package org.wurtzkit.plot;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;

@@ -1,4 +1,4 @@
-package org.wurtzkit.examples;
+package org.wurtzkit.plot;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
@@ -6,12 +6,9 @@ import java.awt.Font;
 import java.awt.Graphics2D;
 import java.awt.font.FontRenderContext;
 import java.awt.image.BufferedImage;
-import java.io.IOException;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import org.knowm.xchart.AnnotationText;
-import org.knowm.xchart.BitmapEncoder;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -21,10 +18,10 @@ import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * The common look of the examples' plots (XChart, rendered headless to PNG) and a few drawing
- * helpers built from ordinary XChart series.
+ * The common look of every plot of this package (XChart, rendered headless) and a few drawing
+ * helpers built from ordinary XChart series. Labels follow {@link Labels}.
  */
-final class Charts {
+final class Style {
     /** Font family of every plot (a logical font, present on every JDK). */
     static final String FAMILY = Font.SANS_SERIF;
     static final Color INK = new Color(30, 30, 30);
@@ -45,7 +42,7 @@ final class Charts {
     static final BasicStroke DOTTED = new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f,
             new float[] {2f, 5f}, 0f);
 
-    private Charts() {
+    private Style() {
     }
 
     /**
@@ -139,32 +136,6 @@ final class Charts {
     }
 
     /**
-     * Writes a chart as PNG.
-     *
-     * @param chart the chart
-     * @param file  the file (its name ends in ".png")
-     * @return the file
-     * @throws IOException from the encoder
-     */
-    static Path savePng(Chart<?, ?> chart, Path file) throws IOException {
-        BitmapEncoder.saveBitmap(chart, file.toString(), BitmapEncoder.BitmapFormat.PNG);
-        return file;
-    }
-
-    /**
-     * Writes charts side by side in one PNG (one row).
-     *
-     * @param charts the charts, all of the same size
-     * @param file   the file (its name ends in ".png")
-     * @return the file
-     * @throws IOException from the encoder
-     */
-    static Path savePngRow(List<XYChart> charts, Path file) throws IOException {
-        BitmapEncoder.saveBitmap(charts, 1, charts.size(), file.toString(), BitmapEncoder.BitmapFormat.PNG);
-        return file;
-    }
-
-    /**
      * Paints the chart once off-screen, so that its mapping from data to pixels
      * ({@link Chart#getScreenXFromChart(double)}) is known before annotations are placed.
      *
@@ -193,18 +164,4 @@ final class Charts {
         chart.addAnnotation(new AnnotationText(text, xPx, chart.getHeight() - yPxFromTop, true));
     }
 
-    /** @return a thickness in nm without trailing zeros, e.g. "2", "22", "1800", "2.5" */
-    static String nm(double v) {
-        return new java.math.BigDecimal(sig(v, 6)).stripTrailingZeros().toPlainString();
-    }
-
-    /** @return v formatted with n significant digits, without a locale's decimal comma */
-    static String sig(double v, int n) {
-        return String.format(Locale.ROOT, "%." + n + "g", v);
-    }
-
-    /** @return v formatted with d decimals */
-    static String fixed(double v, int d) {
-        return String.format(Locale.ROOT, "%." + d + "f", v);
-    }
 }

@@ -1,4 +1,4 @@
-package org.wurtzkit.examples;
+package org.wurtzkit.plot;
 
 import java.util.ArrayList;
 import java.util.HashMap;

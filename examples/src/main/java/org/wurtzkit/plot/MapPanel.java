@@ -1,4 +1,4 @@
-package org.wurtzkit.examples;
+package org.wurtzkit.plot;
 
 import java.awt.Color;
 import java.awt.Font;
@@ -12,46 +12,69 @@ import org.knowm.xchart.XYSeries;
  * by the band of levels its value falls in, and the levels are drawn as contour lines
  * ({@link Contours}) labelled with their values. The legend lists the bands, high to low.
  */
-final class MapPlot {
+final class MapPanel {
     /** Colour anchors from low to high, light enough that black lines and labels read on all of them. */
     private static final Color[] ANCHORS = {new Color(255, 255, 217), new Color(199, 233, 180),
         new Color(127, 205, 187), new Color(65, 182, 196), new Color(44, 127, 184)};
     private static final Color MISSING = new Color(150, 150, 150);
     /** Bold font of the contour labels. */
-    static final Font LABEL_FONT = new Font(Charts.FAMILY, Font.BOLD, 13);
+    static final Font LABEL_FONT = new Font(Style.FAMILY, Font.BOLD, 13);
 
-    private MapPlot() {
+    private MapPanel() {
     }
 
+    /** Anchors of the diverging scale of a difference: blue below zero, white at zero, red above. */
+    private static final Color[] DIVERGING = {new Color(67, 120, 180), new Color(171, 204, 228),
+        new Color(247, 247, 247), new Color(244, 180, 160), new Color(200, 75, 60)};
+
     /**
-     * Equally spaced levels, a "nice" step (1, 2, 2.5 or 5 times a power of ten) chosen so that
-     * [min, max] is cut into about the requested number of bands.
+     * Equally spaced levels, a "nice" step (1, 2, 2.5 or 5 times a power of ten), and the colours of
+     * the bands between them.
      *
-     * @param edges the levels, increasing; band k lies between edges[k] and edges[k + 1]
+     * @param edges   the levels, increasing; band k lies between edges[k] and edges[k + 1]
+     * @param anchors colours from the lowest to the highest band, interpolated in between
      */
-    record Levels(double[] edges) {
+    record Levels(double[] edges, Color[] anchors) {
+        /** @return levels that cut [min, max] into about the requested number of bands, light to dark */
         static Levels nice(double min, double max, int bands) {
             if (!(max > min)) {
                 double pad = Math.max(Math.abs(min) * 0.05, 1e-12);
                 min -= pad;
                 max += pad;
             }
-            double raw = (max - min) / bands;
-            double p = Math.pow(10, Math.floor(Math.log10(raw)));
-            double step = 10 * p;
-            for (double m : new double[] {1, 2, 2.5, 5, 10}) {
-                if (m * p >= raw) {
-                    step = m * p;
-                    break;
-                }
-            }
+            double step = niceStep((max - min) / bands);
             double lo = Math.floor(min / step + 1e-9) * step;
             int n = (int) Math.ceil((max - lo) / step - 1e-9);
             double[] e = new double[n + 1];
             for (int k = 0; k <= n; k++) {
                 e[k] = lo + k * step;
             }
-            return new Levels(e);
+            return new Levels(e, ANCHORS);
+        }
+
+        /**
+         * @return levels symmetric about zero covering [-maxAbs, maxAbs] in about the requested
+         *         (even) number of bands, zero always a level, on a blue-white-red scale
+         */
+        static Levels diverging(double maxAbs, int bands) {
+            double m = maxAbs > 0 ? maxAbs : 1e-12;
+            double step = niceStep(2 * m / bands);
+            int half = (int) Math.ceil(m / step - 1e-9);
+            double[] e = new double[2 * half + 1];
+            for (int k = 0; k <= 2 * half; k++) {
+                e[k] = (k - half) * step;
+            }
+            return new Levels(e, DIVERGING);
+        }
+
+        private static double niceStep(double raw) {
+            double p = Math.pow(10, Math.floor(Math.log10(raw)));
+            for (double f : new double[] {1, 2, 2.5, 5, 10}) {
+                if (f * p >= raw * (1 - 1e-12)) {
+                    return f * p;
+                }
+            }
+            return 10 * p;
         }
 
         int bands() {
@@ -77,18 +100,18 @@ final class MapPlot {
 
         Color color(int band) {
             double t = bands() == 1 ? 0 : (double) band / (bands() - 1);
-            double pos = t * (ANCHORS.length - 1);
-            int i = Math.min((int) Math.floor(pos), ANCHORS.length - 2);
+            double pos = t * (anchors.length - 1);
+            int i = Math.min((int) Math.floor(pos), anchors.length - 2);
             double f = pos - i;
-            Color a = ANCHORS[i];
-            Color b = ANCHORS[i + 1];
+            Color a = anchors[i];
+            Color b = anchors[i + 1];
             return new Color((int) Math.round(a.getRed() + f * (b.getRed() - a.getRed())),
                     (int) Math.round(a.getGreen() + f * (b.getGreen() - a.getGreen())),
                     (int) Math.round(a.getBlue() + f * (b.getBlue() - a.getBlue())));
         }
 
         String label(int band, int decimals) {
-            return Charts.fixed(edges[band], decimals) + " \u2013 " + Charts.fixed(edges[band + 1], decimals);
+            return Labels.fixed(edges[band], decimals) + " \u2013 " + Labels.fixed(edges[band + 1], decimals);
         }
 
         /** @return decimals needed to print the levels exactly enough */
@@ -137,7 +160,7 @@ final class MapPlot {
                     String name = first ? (band < 0 ? "not computed (failed)" : levels.label(band, dec))
                             : "cell " + i + "," + j;
                     Color fill = band < 0 ? MISSING : levels.color(band);
-                    Charts.rectangle(c, name, xe[i], xe[i + 1], ye[j], ye[j + 1], fill, first);
+                    Style.rectangle(c, name, xe[i], xe[i + 1], ye[j], ye[j + 1], fill, first);
                     first = false;
                 }
             }
@@ -156,9 +179,9 @@ final class MapPlot {
                 if (line.size() < 2) {
                     continue;
                 }
-                String name = legend ? "contours, step " + Charts.fixed(levels.step(), dec) + contourUnit
+                String name = legend ? "contours, step " + Labels.fixed(levels.step(), dec) + contourUnit
                         : "contour " + (count++);
-                XYSeries s = Charts.line(c, name, line.x(), line.y(), Charts.INK, Charts.THIN);
+                XYSeries s = Style.line(c, name, line.x(), line.y(), Style.INK, Style.THIN);
                 s.setShowInLegend(legend);
                 legend = false;
                 if (longest == null || line.length(xSpan, ySpan) > longest.length(xSpan, ySpan)) {
@@ -166,7 +189,7 @@ final class MapPlot {
                 }
             }
             if (longest != null && longest.length(xSpan, ySpan) > 0.12) {
-                labels.add(new ContourLabel(longest.x(), longest.y(), Charts.fixed(level, dec)));
+                labels.add(new ContourLabel(longest.x(), longest.y(), Labels.fixed(level, dec)));
             }
         }
         return labels;
@@ -190,7 +213,7 @@ final class MapPlot {
      * @param labels from {@link #draw}
      */
     static void label(XYChart c, List<ContourLabel> labels) {
-        Charts.layOut(c);
+        Style.layOut(c);
         java.awt.geom.Rectangle2D box = LABEL_FONT.getStringBounds("0", new java.awt.font.FontRenderContext(null,
                 true, true));
         for (ContourLabel l : labels) {
@@ -212,10 +235,10 @@ final class MapPlot {
                 nx = -nx;
                 ny = -ny;
             }
-            double halfW = 0.5 * Charts.textWidth(text, LABEL_FONT);
+            double halfW = 0.5 * Style.textWidth(text, LABEL_FONT);
             double halfH = 0.5 * box.getHeight();
             double offset = Math.abs(nx) * halfW + Math.abs(ny) * halfH + 3;
-            Charts.textAtPixel(c, text, px + nx * offset, py + ny * offset);
+            Style.textAtPixel(c, text, px + nx * offset, py + ny * offset);
         }
     }
 
