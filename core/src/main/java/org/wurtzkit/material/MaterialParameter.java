@@ -82,7 +82,21 @@ public enum MaterialParameter {
     /** Valence-band deformation potential D3. */
     DEFORMATION_D3("D3", "eV", "eV", 1),
     /** Valence-band deformation potential D4. */
-    DEFORMATION_D4("D4", "eV", "eV", 1);
+    DEFORMATION_D4("D4", "eV", "eV", 1),
+    /**
+     * Longitudinal-optical phonon energy at the zone centre, hbar omega_LO (polar optical phonon
+     * scattering of the 2DEG).
+     */
+    LO_PHONON_ENERGY("hw_LO", "eV", "meV", 1e-3),
+    /** Mass density (acoustic-phonon scattering; with the C_ij it gives the sound velocities). */
+    MASS_DENSITY("rho", "kg/m^3", "g/cm^3", 1e3),
+    /** Conduction-band acoustic deformation potential Xi (deformation-potential phonon scattering). */
+    ACOUSTIC_DEFORMATION_POTENTIAL("Xi_ac", "eV", "eV", 1),
+    /**
+     * Angular-averaged electromechanical coupling coefficient K^2 (piezoelectric acoustic-phonon
+     * scattering), dimensionless.
+     */
+    ELECTROMECHANICAL_COUPLING("K2_pe", "1", "1", 1);
 
     private final String key;
     private final String siUnit;

@@ -209,7 +209,9 @@ public final class WurtziteMaterial {
                 MaterialParameter.C44, MaterialParameter.BAND_GAP_0K, MaterialParameter.VARSHNI_BETA,
                 MaterialParameter.ELECTRON_MASS_PARALLEL, MaterialParameter.ELECTRON_MASS_PERPENDICULAR,
                 MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR,
-                MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY};
+                MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY,
+                MaterialParameter.LO_PHONON_ENERGY, MaterialParameter.MASS_DENSITY,
+                MaterialParameter.ACOUSTIC_DEFORMATION_POTENTIAL};
 
         private final String name;
         private Composition composition;
@@ -270,6 +272,8 @@ public final class WurtziteMaterial {
             }
             Require.nonNegative(MaterialParameter.VARSHNI_ALPHA.key() + " of " + name,
                     values[MaterialParameter.VARSHNI_ALPHA.ordinal()]);
+            Require.nonNegative(MaterialParameter.ELECTROMECHANICAL_COUPLING.key() + " of " + name,
+                    values[MaterialParameter.ELECTROMECHANICAL_COUPLING.ordinal()]);
             return new WurtziteMaterial(name, composition, values.clone(), provenance.clone());
         }
     }
