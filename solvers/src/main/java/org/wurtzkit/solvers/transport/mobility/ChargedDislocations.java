@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.transport.mobility;
 
+import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 
 /**
@@ -9,7 +10,8 @@ import org.wurtzkit.errors.Require;
  * recalled and re-derived with the golden-rule integral of Ando, Fowler &amp; Stern 1982):
  * 1/tau = (N_dis m e^4 f^2/(4 pi hbar^3 epsilon^2 c^2 k_F^4)) integral_0^1 du/((u + q_s/(2 k_F))^2
  * sqrt(1 - u^2)). As in that paper the line's potential is uniform across the well (no form factor) and
- * the screening has no form factor either.
+ * the screening has no form factor either. Without screening the rate diverges (the integrand goes as
+ * 1/u^2), so the mechanism refuses a zero screening wave vector.
  *
  * <p>Default ({@link #DEFAULT}): 5e8 cm^-2, f = 1, a typical threading-dislocation density of
  * MOCVD GaN on SiC or sapphire (common practice, no source) with every site filled (the upper bound
@@ -45,6 +47,11 @@ public record ChargedDislocations(double density, double occupancy) implements S
 
     @Override
     public double momentumRelaxationRate(SubbandScattering s) {
+        if (density > 0 && occupancy > 0 && !(s.screeningWaveVector() > 0)) {
+            throw new InvalidParameterException("screening wave vector for dislocation scattering (1/m)",
+                    Double.toString(s.screeningWaveVector()),
+                    "(0, +inf): the rate of an unscreened charged line diverges as integral du/u^2");
+        }
         double kf = s.fermiWaveVector();
         double a = s.screeningWaveVector() / (2 * kf);
         double sum = 0;

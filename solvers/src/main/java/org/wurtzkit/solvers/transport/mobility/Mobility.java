@@ -119,13 +119,25 @@ public final class Mobility {
         double[] field = solution.electricField();
         double[] interfaces = st.interfaceDepths();
 
+        double all = 0;
+        for (Subband b : solution.subbands()) {
+            all += Math.max(0, b.sheetDensity());
+        }
         List<Subband> bands = new ArrayList<>();
         double total = 0;
+        double excluded = 0;
         for (Subband b : solution.subbands()) {
-            if (b.sheetDensity() > 0) {
+            if (b.sheetDensity() > 0 && b.sheetDensity() >= options.minimumSubbandFraction() * all) {
                 bands.add(b);
                 total += b.sheetDensity();
+            } else {
+                excluded += Math.max(0, b.sheetDensity());
             }
+        }
+        if (excluded > 0.005 * all) {
+            warnings.add(String.format(Locale.ROOT, "%.2f %% of the subband electrons sit in subbands below the"
+                    + " minimum fraction %.3g and are left out of the mobility", 100 * excluded / all,
+                    options.minimumSubbandFraction()));
         }
         if (bands.isEmpty()) {
             throw new InvalidParameterException("occupied subbands of the solution", "0",
@@ -230,7 +242,7 @@ public final class Mobility {
             win[i] = b.window();
             idx[i] = b.index();
         }
-        return new MobilityResult(t, names, dens, mass, win, idx, rate, new ArrayList<>(warnings));
+        return new MobilityResult(t, names, dens, mass, win, idx, rate, excluded, new ArrayList<>(warnings));
     }
 
     /**

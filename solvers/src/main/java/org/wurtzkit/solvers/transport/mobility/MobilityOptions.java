@@ -13,16 +13,28 @@ import org.wurtzkit.errors.Require;
  * <p>{@link #defaults()}: all seven built-in mechanisms, with the sample defaults
  * {@link InterfaceRoughness#DEFAULT}, {@link ChargedDislocations#DEFAULT} and
  * {@link RemoteCharge#DEFAULT}; {@link Screening#THOMAS_FERMI}; channel constants from the structure's
- * parameter set; {@link SubbandScattering#DEFAULT_QUADRATURE_POINTS} nodes. The roughness and the
+ * parameter set; {@link SubbandScattering#DEFAULT_QUADRATURE_POINTS} nodes; subbands below
+ * {@link #DEFAULT_MINIMUM_SUBBAND_FRACTION} of the electrons left out. The roughness and the
  * dislocations are properties of a sample: set them for yours with {@link #withMechanisms}.
  *
  * @param mechanisms       at least one, names unique
  * @param screening        screening model
  * @param channel          constants to use for every subband instead of the parameter set's, or null
- * @param quadraturePoints Gauss-Legendre nodes, in [8, 1000]
+ * @param quadraturePoints nodes of the graded Gauss-Legendre rule, in [12, 1000]; used in panels of 6
+ * @param minimumSubbandFraction subbands holding less than this fraction of the subband electrons are
+ *                         left out of the mobility (their electrons are reported by
+ *                         {@link MobilityResult#excludedSheetDensity()}), in [0, 0.01]
  */
 public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening screening, ChannelParameters channel,
-        int quadraturePoints) {
+        int quadraturePoints, double minimumSubbandFraction) {
+    /**
+     * Default {@link #minimumSubbandFraction()}: 1e-3. The high subbands of a warm 2DEG (18 at 300 K in a
+     * 1e13 cm^-2 AlGaN/GaN channel) each hold well under 0.1 % of the electrons and have lower mobilities
+     * than the ground subband, so together they move the sheet conductance by about their share of
+     * the electrons (0.2 % in that example) while costing most of the time.
+     */
+    public static final double DEFAULT_MINIMUM_SUBBAND_FRACTION = 1e-3;
+
     /** Validates and copies. */
     public MobilityOptions {
         mechanisms = List.copyOf(Require.nonNull("mechanisms", mechanisms));
@@ -36,7 +48,8 @@ public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening sc
             }
         }
         Require.nonNull("screening", screening);
-        Require.inRange("quadrature points", quadraturePoints, 8, 1000);
+        Require.inRange("quadrature points", quadraturePoints, 12, 1000);
+        Require.inRange("minimum subband fraction", minimumSubbandFraction, 0, 0.01);
     }
 
     /** @return the seven built-in mechanisms with their defaults */
@@ -48,7 +61,7 @@ public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening sc
     /** @return the defaults */
     public static MobilityOptions defaults() {
         return new MobilityOptions(allMechanisms(), Screening.THOMAS_FERMI, null,
-                SubbandScattering.DEFAULT_QUADRATURE_POINTS);
+                SubbandScattering.DEFAULT_QUADRATURE_POINTS, DEFAULT_MINIMUM_SUBBAND_FRACTION);
     }
 
     /**
@@ -56,7 +69,7 @@ public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening sc
      * @return a copy with them
      */
     public MobilityOptions withMechanisms(List<ScatteringMechanism> list) {
-        return new MobilityOptions(list, screening, channel, quadraturePoints);
+        return new MobilityOptions(list, screening, channel, quadraturePoints, minimumSubbandFraction);
     }
 
     /**
@@ -85,7 +98,7 @@ public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening sc
      * @return a copy with it
      */
     public MobilityOptions withScreening(Screening s) {
-        return new MobilityOptions(mechanisms, s, channel, quadraturePoints);
+        return new MobilityOptions(mechanisms, s, channel, quadraturePoints, minimumSubbandFraction);
     }
 
     /**
@@ -93,7 +106,15 @@ public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening sc
      * @return a copy with them
      */
     public MobilityOptions withChannel(ChannelParameters c) {
-        return new MobilityOptions(mechanisms, screening, c, quadraturePoints);
+        return new MobilityOptions(mechanisms, screening, c, quadraturePoints, minimumSubbandFraction);
+    }
+
+    /**
+     * @param fraction subbands below this fraction of the electrons are left out, in [0, 0.01]
+     * @return a copy with it
+     */
+    public MobilityOptions withMinimumSubbandFraction(double fraction) {
+        return new MobilityOptions(mechanisms, screening, channel, quadraturePoints, fraction);
     }
 
     /**
@@ -101,6 +122,6 @@ public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening sc
      * @return a copy with them
      */
     public MobilityOptions withQuadraturePoints(int points) {
-        return new MobilityOptions(mechanisms, screening, channel, points);
+        return new MobilityOptions(mechanisms, screening, channel, points, minimumSubbandFraction);
     }
 }

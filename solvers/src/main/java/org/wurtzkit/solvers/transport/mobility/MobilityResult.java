@@ -22,9 +22,11 @@ public final class MobilityResult {
     private final int[] window;
     private final double[][] rate;
     private final List<String> warnings;
+    private final double excluded;
 
     MobilityResult(double temperatureK, List<String> mechanisms, double[] density, double[] mass, int[] window,
-            int[] subbandIndex, double[][] rate, List<String> warnings) {
+            int[] subbandIndex, double[][] rate, double excluded, List<String> warnings) {
+        this.excluded = excluded;
         this.temperatureK = temperatureK;
         this.mechanisms = List.copyOf(mechanisms);
         this.density = density.clone();
@@ -84,6 +86,14 @@ public final class MobilityResult {
             s += v;
         }
         return s;
+    }
+
+    /**
+     * @return electrons of the subbands left out by {@link MobilityOptions#minimumSubbandFraction()} (m^-2);
+     *         they are not in {@link #sheetDensity()} and do not conduct in {@link #sheetResistanceOhmPerSquare()}
+     */
+    public double excludedSheetDensity() {
+        return excluded;
     }
 
     /** @return all conducting electrons (cm^-2) */

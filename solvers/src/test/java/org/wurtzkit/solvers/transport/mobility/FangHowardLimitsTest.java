@@ -90,7 +90,7 @@ class FangHowardLimitsTest {
             double b = FangHoward.b(MASS, 8.9, ns);
             double[] x = FangHoward.depth();
             SubbandScattering s = new SubbandScattering(300, SET_D, MASS, ns, 0, x, FangHoward.psiSquared(x, b), null, 0,
-                    null, 0, 16);
+                    null, 0, 12);
             for (double qOverB : new double[] {0, 0.05, 0.3, 1, 2.5, 6}) {
                 double eta = 1 / (1 + qOverB);
                 double exact = (2 * eta * eta * eta + 3 * eta * eta + 3 * eta) / 8;
@@ -137,7 +137,7 @@ class FangHowardLimitsTest {
                 alloy[k] = strength / 2;
             }
         }
-        SubbandScattering s = new SubbandScattering(300, SET_D, MASS, ns, 0, x, psi2, alloy, 0, null, 0, 16);
+        SubbandScattering s = new SubbandScattering(300, SET_D, MASS, ns, 0, x, psi2, alloy, 0, null, 0, 12);
         assertEquals(strength * kappa * pb * pb, s.alloyIntegral(), 2e-3 * strength * kappa * pb * pb);
         double mu = mobilityCm2(s, new AlloyDisorder());
         assertEquals(8.1e5, mu, Math.max(1e-3 * 8.1e5, printedHalfUnit("8.1e5")));

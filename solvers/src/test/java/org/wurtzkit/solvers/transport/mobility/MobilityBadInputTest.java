@@ -40,6 +40,7 @@ class MobilityBadInputTest {
         fails("mechanism name", "alloy disorder",
                 () -> MobilityOptions.defaults().withMechanisms(List.of(new AlloyDisorder(), new AlloyDisorder())));
         fails("quadrature points", "2", () -> MobilityOptions.defaults().withQuadraturePoints(2));
+        fails("quadrature points", "1001", () -> MobilityOptions.defaults().withQuadraturePoints(1001));
         fails("electromechanical coupling", "1.5",
                 () -> new ChannelParameters(8.9, 5.5, 0.092, 6150, 6590, 8.3, 1.5, 5.185e-10));
         fails("high-frequency permittivity", "9.5",

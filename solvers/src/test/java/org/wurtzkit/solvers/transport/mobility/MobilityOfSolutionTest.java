@@ -1,10 +1,12 @@
 package org.wurtzkit.solvers.transport.mobility;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
@@ -68,8 +70,17 @@ class MobilityOfSolutionTest {
     void sheetResistanceIsAFewHundredOhmPerSquareAndConsistent() {
         Solution s = SOLVER.solve(hemt(false, 300));
         MobilityResult r = Mobility.of(s, MobilityOptions.defaults());
-        // every subband electron conducts, none is counted twice
-        assertEquals(s.sheetDensityPerCm2(), r.sheetDensityPerCm2(), 1e-9 * s.sheetDensityPerCm2());
+        // every subband electron is either conducting or reported as left out, none is counted twice
+        assertEquals(s.sheetDensityPerCm2(), r.sheetDensityPerCm2() + r.excludedSheetDensity() * 1e-4,
+                1e-9 * s.sheetDensityPerCm2());
+        assertTrue(r.excludedSheetDensity() < MobilityOptions.DEFAULT_MINIMUM_SUBBAND_FRACTION * s.subbands().size()
+                * r.sheetDensity());
+        // leaving out the small subbands moves R_sh by about their share of the electrons (definition of the option)
+        MobilityResult every = Mobility.of(s, MobilityOptions.defaults().withMinimumSubbandFraction(0));
+        assertEquals(0, every.excludedSheetDensity());
+        double share = r.excludedSheetDensity() / every.sheetDensity();
+        assertEquals(every.sheetResistanceOhmPerSquare(), r.sheetResistanceOhmPerSquare(),
+                2 * share * every.sheetResistanceOhmPerSquare());
         assertTrue(r.sheetDensityPerCm2() > 0.8e13 && r.sheetDensityPerCm2() < 1.3e13, "n_s " + r.sheetDensityPerCm2());
         // R_sh = 1/(e sum n_i mu_i) and mu = sum n_i mu_i / n (definitions)
         double g = 0;
@@ -111,14 +122,18 @@ class MobilityOfSolutionTest {
     @Test
     void screeningOnlyLowersCoulombRates() {
         Solution s = SOLVER.solve(hemt(false, 300));
-        List<ScatteringMechanism> coulomb = List.of(ChargedDislocations.perCm2(1e9, 1), RemoteCharge.DEFAULT,
-                InterfaceRoughness.DEFAULT);
+        List<ScatteringMechanism> coulomb = List.of(RemoteCharge.DEFAULT, InterfaceRoughness.DEFAULT,
+                new PiezoelectricAcoustic());
         MobilityOptions o = MobilityOptions.defaults().withMechanisms(coulomb);
         MobilityResult screened = Mobility.of(s, o);
         MobilityResult bare = Mobility.of(s, o.withScreening(Screening.NONE));
         for (ScatteringMechanism m : coulomb) {
             assertTrue(bare.mobility(m.name()) < screened.mobility(m.name()), m.name());
         }
+        // an unscreened charged line scatters infinitely: refused, not a finite quadrature artefact
+        InvalidParameterException e = assertThrows(InvalidParameterException.class, () -> Mobility.of(s,
+                o.withScreening(Screening.NONE).withMechanism(ChargedDislocations.perCm2(1e9, 1))));
+        assertTrue(e.getMessage().contains("screening wave vector"), e.getMessage());
     }
 
     private static void assertInBand(double v, double lo, double hi, String what) {
