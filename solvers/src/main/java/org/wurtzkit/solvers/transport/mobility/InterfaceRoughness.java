@@ -5,13 +5,14 @@ import org.wurtzkit.errors.Require;
 import org.wurtzkit.units.Units;
 
 /**
- * Interface-roughness scattering at the interface just above the subband's peak, with a Gaussian
+ * Interface-roughness scattering at the interface nearest the subband's peak, with a Gaussian
  * height correlation of rms height Delta and correlation length Lambda,
  * &lt;Delta(r) Delta(r')&gt; = Delta^2 exp(-|r - r'|^2/Lambda^2), and static screening (Ando, Fowler
  * &amp; Stern, Rev. Mod. Phys. 54, 437 (1982)): |U(q)|^2 = pi Delta^2 Lambda^2 (e F_eff)^2
  * exp(-q^2 Lambda^2/4), so 1/tau = (4 m Delta^2 Lambda^2 (e F_eff)^2/hbar^3) integral_0^1 u^2
  * exp(-k_F^2 Lambda^2 u^2) S(q) du/sqrt(1 - u^2). F_eff is the mean electric field over the subband
- * on the channel side of the interface (for a ground subband in a triangular well it is the
+ * on the channel side of the interface (below it for a metal-face channel, above it for an N-face one;
+ * for a ground subband in a triangular well it is the
  * e(N_depl + n_s/2)/epsilon of the same paper).
  *
  * <p>Delta and Lambda are sample properties, not material constants, and are in practice fitted to
@@ -66,7 +67,7 @@ public record InterfaceRoughness(double rmsHeight, double correlationLength) imp
     @Override
     public Optional<String> warning(SubbandScattering s) {
         if (s.interfaceField() == 0) {
-            return Optional.of("interface roughness: a subband has no interface above its peak (or no field"
+            return Optional.of("interface roughness: a subband has no interface near its peak (or no field"
                     + " there); its roughness rate is 0");
         }
         return Optional.empty();

@@ -28,8 +28,8 @@ import org.wurtzkit.units.Constants;
  * <p>What is taken from the solution: each subband's wavefunction, sheet density, energy and in-plane
  * mass; the layer under each mesh cell (for the alloy disorder, Omega_0 = (sqrt 3/4) a^2 c times
  * x_i x_j U_ij^2 of the parameter set, box-weighted at interface nodes); the material at the peak of
- * each subband (its {@link ChannelParameters}, unless the options override them); the interface just
- * above that peak and the mean field over the subband below it (interface roughness); the ionised
+ * each subband (its {@link ChannelParameters}, unless the options override them); the interface nearest
+ * that peak and the mean field over the subband on the peak's side of it (interface roughness); the ionised
  * donors and acceptors and the charged surface states (remote charge); the lattice temperature of the
  * structure.
  *
@@ -204,18 +204,22 @@ public final class Mobility {
             for (int k = 0; k < n; k++) {
                 psi2[k] = psi[k] * psi[k];
             }
+            // the rough interface: the one nearest the subband's peak (above it for a metal-face channel,
+            // below it for an N-face one); the field is averaged on the peak's side
             double iface = -1;
+            double xp = x[peak[i]];
             for (double d : interfaces) {
-                if (d < x[peak[i]]) {
+                if (iface < 0 || Math.abs(d - xp) < Math.abs(iface - xp)) {
                     iface = d;
                 }
             }
+            boolean below = iface >= 0 && xp >= iface;
             double fieldEff = 0;
             if (iface >= 0) {
                 double num = 0;
                 double den = 0;
                 for (int k = 0; k < n - 1; k++) {
-                    if (x[k] >= iface) {
+                    if (below ? x[k] >= iface : x[k + 1] <= iface) {
                         double pm = 0.5 * (psi2[k] + psi2[k + 1]) * (x[k + 1] - x[k]);
                         num += pm * field[k];
                         den += pm;

@@ -9,6 +9,7 @@ import org.junit.jupiter.api.Test;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSets;
+import org.wurtzkit.polarization.Polarity;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.workflow.TemperatureSweep;
@@ -134,6 +135,25 @@ class MobilityOfSolutionTest {
         InvalidParameterException e = assertThrows(InvalidParameterException.class, () -> Mobility.of(s,
                 o.withScreening(Screening.NONE).withMechanism(ChargedDislocations.perCm2(1e9, 1))));
         assertTrue(e.getMessage().contains("screening wave vector"), e.getMessage());
+    }
+
+    @Test
+    void nFaceChannelScattersAtTheInterfaceBelowIt() {
+        // N-face: the 2DEG sits in the GaN above the AlGaN (Ambacher et al., J. Appl. Phys. 85, 3222 (1999));
+        // its rough interface is the one below it, pressed by a field of the same order as the metal-face one
+        Structure.Builder b = Structure.builder(ParameterSets.defaultSet())
+                .grow(Layer.of("buffer", Composition.GAN, 1000e-9))
+                .grow(Layer.of("barrier", Composition.alGaN(0.3), 25e-9))
+                .grow(Layer.of("channel", Composition.GAN, 20e-9))
+                .top(TopBoundary.schottky(1.0, 0));
+        Structure metal = b.build();
+        Structure nFace = metal.toBuilder().polarity(Polarity.N_FACE).build();
+        MobilityOptions ifr = MobilityOptions.defaults().withMechanisms(List.of(InterfaceRoughness.DEFAULT));
+        MobilityResult m = Mobility.of(SOLVER.solve(metal), ifr);
+        MobilityResult nf = Mobility.of(SOLVER.solve(nFace), ifr);
+        assertTrue(nf.warnings().stream().noneMatch(w -> w.startsWith("interface roughness")), nf.warnings().toString());
+        double ratio = nf.subbandMobility(0) / m.subbandMobility(0);
+        assertTrue(ratio > 0.1 && ratio < 10, "ground-subband roughness mobility N-face / metal-face " + ratio);
     }
 
     private static void assertInBand(double v, double lo, double hi, String what) {
