@@ -113,6 +113,13 @@ class MobilityOfSolutionTest {
                 MobilityOptions.defaults());
         assertEquals(3, curve.size());
         assertEquals(600, curve.get(2).temperatureK());
+        // the same as a table: one row per temperature, the CSV cells read back to the identical doubles
+        MobilityTable table = new MobilityTable(curve);
+        assertEquals(3, table.rowCount());
+        assertEquals(4 + 7, table.headers().size());
+        assertEquals("mobility alloy disorder_cm^2/Vs", table.headers().get(4 + 3));
+        assertEquals(curve.get(1).mobilityCm2PerVs(), Double.parseDouble(table.row(1).get(2)));
+        assertEquals(curve.get(2).mobilityCm2PerVs("polar optical phonon"), Double.parseDouble(table.row(2).get(4)));
         for (int i = 1; i < curve.size(); i++) {
             assertTrue(curve.get(i).mobility() < curve.get(i - 1).mobility(), curve.toString());
             assertTrue(curve.get(i).mobility(new PolarOpticalPhonon().name())
