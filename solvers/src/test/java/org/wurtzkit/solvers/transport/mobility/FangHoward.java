@@ -26,10 +26,14 @@ final class FangHoward {
     }
 
     static double[] depth() {
-        int n = (int) Math.round(LENGTH / STEP) + 1;
+        return depth(STEP);
+    }
+
+    static double[] depth(double step) {
+        int n = (int) Math.round(LENGTH / step) + 1;
         double[] x = new double[n];
         for (int k = 0; k < n; k++) {
-            x[k] = k * STEP;
+            x[k] = k * step;
         }
         return x;
     }
