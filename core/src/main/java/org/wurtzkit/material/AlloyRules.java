@@ -26,6 +26,10 @@ import java.util.Locale;
  * <li>The nonlinear piezoelectric coefficients follow Vegard's law, which is exactly the alloy rule
  * P_pz(alloy) = sum x_i P_pz,i(eps) of Ambacher et al., J. Phys.: Condens. Matter 14, 3399 (2002),
  * since P_pz,i is linear in its coefficients.</li>
+ * <li>The 2DEG scattering constants (LO phonon energy, mass density, acoustic deformation potential,
+ * K^2) follow Vegard's law as well. For the LO phonon this is a one-mode simplification of the
+ * two-mode behaviour of AlGaN (from memory); it matters only for a 2DEG in an alloy channel. The
+ * alloy-disorder potentials are per pair, not per material ({@link AlloyScattering}).</li>
  * </ul>
  */
 public final class AlloyRules {

@@ -29,6 +29,7 @@ public final class DerivedParameterSet implements ParameterSet {
     private final ParameterSet base;
     private final Map<Binary, WurtziteMaterial> binaries;
     private final AlloyBowing bowing;
+    private final AlloyScattering alloyScattering;
     private final PolarizationModel model;
     private final AlloyGapTemperatureRule gapRule;
     private final List<Source> sources;
@@ -39,6 +40,7 @@ public final class DerivedParameterSet implements ParameterSet {
         this.base = b.base;
         this.binaries = Collections.unmodifiableMap(binaries);
         this.bowing = b.bowing;
+        this.alloyScattering = b.alloyScattering;
         this.model = b.model;
         this.gapRule = b.gapRule;
         this.changes = List.copyOf(b.changes);
@@ -89,6 +91,11 @@ public final class DerivedParameterSet implements ParameterSet {
     }
 
     @Override
+    public AlloyScattering alloyScattering() {
+        return alloyScattering;
+    }
+
+    @Override
     public PolarizationModel recommendedPolarizationModel() {
         return model;
     }
@@ -115,6 +122,7 @@ public final class DerivedParameterSet implements ParameterSet {
         private String description;
         private final Map<Binary, Map<MaterialParameter, Object[]>> edits = new EnumMap<>(Binary.class);
         private AlloyBowing bowing;
+        private AlloyScattering alloyScattering;
         private PolarizationModel model;
         private AlloyGapTemperatureRule gapRule;
         private final List<Source> newSources = new ArrayList<>();
@@ -128,6 +136,7 @@ public final class DerivedParameterSet implements ParameterSet {
                         "non-blank text");
             }
             this.bowing = base.bowing();
+            this.alloyScattering = base.alloyScattering();
             this.model = base.recommendedPolarizationModel();
             this.gapRule = base.alloyGapTemperatureRule();
         }
@@ -175,6 +184,22 @@ public final class DerivedParameterSet implements ParameterSet {
                 newSources.add(b.source());
             }
             changes.add("bowing " + newBowing);
+            return this;
+        }
+
+        /**
+         * Replaces the alloy-disorder scattering potentials of the 2DEG mobility (each {@link Bowing}
+         * carries its source).
+         *
+         * @param potentials the three pairs' potentials (eV)
+         * @return this builder
+         */
+        public Builder alloyScattering(AlloyScattering potentials) {
+            this.alloyScattering = Require.nonNull("alloy scattering potentials", potentials);
+            for (Bowing b : List.of(potentials.alGaN(), potentials.inGaN(), potentials.inAlN())) {
+                newSources.add(b.source());
+            }
+            changes.add("alloy scattering " + potentials);
             return this;
         }
 

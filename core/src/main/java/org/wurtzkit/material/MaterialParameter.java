@@ -87,7 +87,21 @@ public enum MaterialParameter {
     /** Valence-band deformation potential D3. */
     DEFORMATION_D3("D3", "eV", "eV", 1),
     /** Valence-band deformation potential D4. */
-    DEFORMATION_D4("D4", "eV", "eV", 1);
+    DEFORMATION_D4("D4", "eV", "eV", 1),
+    /**
+     * Longitudinal-optical phonon energy at the zone centre, hbar omega_LO (polar optical phonon
+     * scattering of the 2DEG).
+     */
+    LO_PHONON_ENERGY("hw_LO", "eV", "meV", 1e-3),
+    /** Mass density (acoustic-phonon scattering; with the C_ij it gives the sound velocities). */
+    MASS_DENSITY("rho", "kg/m^3", "g/cm^3", 1e3),
+    /** Conduction-band acoustic deformation potential Xi (deformation-potential phonon scattering). */
+    ACOUSTIC_DEFORMATION_POTENTIAL("Xi_ac", "eV", "eV", 1),
+    /**
+     * Angular-averaged electromechanical coupling coefficient K^2 (piezoelectric acoustic-phonon
+     * scattering), dimensionless.
+     */
+    ELECTROMECHANICAL_COUPLING("K2_pe", "1", "1", 1);
 
     private final String key;
     private final String siUnit;
@@ -171,6 +185,12 @@ public enum MaterialParameter {
             case VALENCE_BAND_EDGE -> new double[] {-5, 5};
             case DEFORMATION_CB_PARALLEL, DEFORMATION_CB_PERPENDICULAR, DEFORMATION_D1, DEFORMATION_D2,
                     DEFORMATION_D3, DEFORMATION_D4 -> new double[] {-40, 40};
+            // scattering parameters (file units meV, g/cm^3, eV, 1): nitride LO phonons lie near 70-115 meV,
+            // densities 3.2-6.9 g/cm^3, deformation potentials 5-15 eV (common practice, no source)
+            case LO_PHONON_ENERGY -> new double[] {20, 200};
+            case MASS_DENSITY -> new double[] {1, 12};
+            case ACOUSTIC_DEFORMATION_POTENTIAL -> new double[] {1, 40};
+            case ELECTROMECHANICAL_COUPLING -> new double[] {0, 1};
         };
     }
 

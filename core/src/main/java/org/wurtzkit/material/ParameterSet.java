@@ -30,6 +30,12 @@ public interface ParameterSet {
     AlloyBowing bowing();
 
     /**
+     * @return the alloy-disorder scattering potentials of the three ternary pairs (eV), used by the
+     *         2DEG mobility
+     */
+    AlloyScattering alloyScattering();
+
+    /**
      * @return the polarization model that goes with the set's constants (used when a structure
      *         does not name one)
      */

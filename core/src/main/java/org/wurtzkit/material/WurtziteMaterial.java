@@ -234,7 +234,9 @@ public final class WurtziteMaterial {
                 MaterialParameter.ELECTRON_MASS_PARALLEL, MaterialParameter.ELECTRON_MASS_PERPENDICULAR,
                 MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR,
                 MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_STATIC_PERPENDICULAR,
-                MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY};
+                MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY,
+                MaterialParameter.LO_PHONON_ENERGY, MaterialParameter.MASS_DENSITY,
+                MaterialParameter.ACOUSTIC_DEFORMATION_POTENTIAL};
 
         private final String name;
         private Composition composition;
@@ -306,6 +308,8 @@ public final class WurtziteMaterial {
             }
             Require.nonNegative(MaterialParameter.VARSHNI_ALPHA.key() + " of " + name,
                     values[MaterialParameter.VARSHNI_ALPHA.ordinal()]);
+            Require.nonNegative(MaterialParameter.ELECTROMECHANICAL_COUPLING.key() + " of " + name,
+                    values[MaterialParameter.ELECTROMECHANICAL_COUPLING.ordinal()]);
             for (MaterialParameter p : ALL) {
                 double inFileUnit = values[p.ordinal()] / p.fileToSi();
                 if (!(inFileUnit >= p.plausibleMinInFileUnit() && inFileUnit <= p.plausibleMaxInFileUnit())) {

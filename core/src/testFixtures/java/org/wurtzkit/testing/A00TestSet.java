@@ -2,6 +2,7 @@ package org.wurtzkit.testing;
 
 import java.util.List;
 import org.wurtzkit.material.AlloyBowing;
+import org.wurtzkit.material.AlloyScattering;
 import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.Bowing;
 import org.wurtzkit.material.MaterialParameter;
@@ -32,6 +33,12 @@ public final class A00TestSet implements ParameterSet {
     /** VM03's recommended values, recalled from memory. */
     public static final Source VM03 = new Source("VM03", "I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003)",
             "recommended values, from memory");
+    /**
+     * Scattering parameters of GaN and InN (the AlN values are the rough estimates of the built-in
+     * sets, with no physical weight in any test).
+     */
+    public static final Source DON12 = new Source("DON12", "O. Donmez et al., Nanoscale Res. Lett. 7, 490 (2012), Table 1",
+            "table seen; GaN and InN values; AlN values are estimates of the built-in sets");
     /** Values with no physical weight in any test. */
     public static final Source FILLER = new Source("filler", "test filler value", "no physical meaning");
 
@@ -45,12 +52,12 @@ public final class A00TestSet implements ParameterSet {
     private A00TestSet() {
         // Eg0 chosen so that Varshni (VM03 alpha, beta) gives A00's 300 K gaps 3.42 and 6.13 eV
         gan = binary("GaN", 3.189, 5.185, 367, 135, 103, 405, 95, -0.49, 0.73, -0.029, 3.42 + varshni(0.909, 830),
-                0.909, 830, 0.22, 0.22, 1.89, 0.26, 9.5, 5.35, 0.0);
+                0.909, 830, 0.22, 0.22, 1.89, 0.26, 9.5, 5.35, 0.0, 92, 6.15, 8.3, 0.038);
         // A00: Delta Ec = 0.7 Delta Eg, so the valence band of AlN lies 0.3 Delta Eg below that of GaN
         aln = binary("AlN", 3.112, 4.982, 396, 137, 108, 373, 116, -0.60, 1.46, -0.081, 6.13 + varshni(1.799, 1462),
-                1.799, 1462, 0.32, 0.30, 3.57, 0.64, 9.0, 4.77, -0.3 * (6.13 - 3.42));
+                1.799, 1462, 0.32, 0.30, 3.57, 0.64, 9.0, 4.77, -0.3 * (6.13 - 3.42), 110.3, 3.23, 9.5, 0.1);
         inn = binary("InN", 3.545, 5.703, 223, 115, 92, 224, 48, -0.57, 0.97, -0.032, 0.78, 0.245, 624, 0.07, 0.07,
-                1.56, 0.17, 15, 8.4, 0.5);
+                1.56, 0.17, 15, 8.4, 0.5, 73, 6.81, 7.1, 0.028);
     }
 
     /** Varshni shift alpha T^2/(T + beta) at 300 K, alpha in meV/K. */
@@ -60,7 +67,8 @@ public final class A00TestSet implements ParameterSet {
 
     private static WurtziteMaterial binary(String name, double a, double c, double c11, double c12, double c13,
             double c33, double c44, double e31, double e33, double psp, double eg0, double alphaMeV, double beta,
-            double mePar, double mePerp, double mhhPar, double mhhPerp, double eps, double epsInf, double ev) {
+            double mePar, double mePerp, double mhhPar, double mhhPerp, double eps, double epsInf, double ev,
+            double hwLoMeV, double rhoGcm3, double xiAc, double k2) {
         WurtziteMaterial.Builder b = WurtziteMaterial.builder(name + " (A00 test set)")
                 .set(MaterialParameter.LATTICE_A, a * 1e-10, A00)
                 .set(MaterialParameter.LATTICE_C, c * 1e-10, VM03)
@@ -93,7 +101,11 @@ public final class A00TestSet implements ParameterSet {
                 .set(MaterialParameter.DEFORMATION_D1, -3.7, VM03)
                 .set(MaterialParameter.DEFORMATION_D2, 4.5, VM03)
                 .set(MaterialParameter.DEFORMATION_D3, 8.2, VM03)
-                .set(MaterialParameter.DEFORMATION_D4, -4.1, VM03);
+                .set(MaterialParameter.DEFORMATION_D4, -4.1, VM03)
+                .set(MaterialParameter.LO_PHONON_ENERGY, hwLoMeV * 1e-3, DON12)
+                .set(MaterialParameter.MASS_DENSITY, rhoGcm3 * 1e3, DON12)
+                .set(MaterialParameter.ACOUSTIC_DEFORMATION_POTENTIAL, xiAc, DON12)
+                .set(MaterialParameter.ELECTROMECHANICAL_COUPLING, k2, DON12);
         return b.build();
     }
 
@@ -124,12 +136,18 @@ public final class A00TestSet implements ParameterSet {
     }
 
     @Override
+    public AlloyScattering alloyScattering() {
+        // AlGaN 1.8 eV (Jena et al., Phys. Rev. B 67, 153306 (2003)); InGaN 1.70 eV (DON12); InAlN stand-in
+        return new AlloyScattering(new Bowing(1.8, FILLER), new Bowing(1.70, DON12), new Bowing(1.8, FILLER));
+    }
+
+    @Override
     public PolarizationModel recommendedPolarizationModel() {
         return PolarizationModel.LINEAR;
     }
 
     @Override
     public List<Source> sources() {
-        return List.of(A00, VM03, FILLER);
+        return List.of(A00, VM03, DON12, FILLER);
     }
 }

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.AlloyBowing;
+import org.wurtzkit.material.AlloyScattering;
 import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.ParameterSet;
@@ -27,11 +28,12 @@ public final class FileParameterSet implements ParameterSet {
     private final PolarizationModel model;
     private final Map<Binary, WurtziteMaterial> binaries;
     private final AlloyBowing bowing;
+    private final AlloyScattering alloyScattering;
     private final List<Source> sources;
     private final Map<String, String> notes;
 
     FileParameterSet(String name, String description, String fileName, PolarizationModel model,
-            Map<Binary, WurtziteMaterial> binaries, AlloyBowing bowing, List<Source> sources,
+            Map<Binary, WurtziteMaterial> binaries, AlloyBowing bowing, AlloyScattering alloyScattering, List<Source> sources,
             Map<String, String> notes) {
         this.name = name;
         this.description = description;
@@ -39,6 +41,7 @@ public final class FileParameterSet implements ParameterSet {
         this.model = model;
         this.binaries = Collections.unmodifiableMap(new EnumMap<>(binaries));
         this.bowing = bowing;
+        this.alloyScattering = alloyScattering;
         this.sources = List.copyOf(sources);
         this.notes = Collections.unmodifiableMap(new LinkedHashMap<>(notes));
     }
@@ -66,6 +69,11 @@ public final class FileParameterSet implements ParameterSet {
     @Override
     public AlloyBowing bowing() {
         return bowing;
+    }
+
+    @Override
+    public AlloyScattering alloyScattering() {
+        return alloyScattering;
     }
 
     @Override

@@ -17,6 +17,7 @@ import java.util.Set;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.AlloyBowing;
+import org.wurtzkit.material.AlloyScattering;
 import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.Bowing;
 import org.wurtzkit.material.Composition;
@@ -109,7 +110,7 @@ public final class JsonParameterSetReader {
     private static final JsonFactory FACTORY = JsonFactory.builder().build();
 
     private static final String[] ROOT_KEYS = {"formatVersion", "name", "description",
-        "recommendedPolarizationModel", "sources", "binaries", "bowing"};
+        "recommendedPolarizationModel", "sources", "binaries", "alloyScattering", "bowing"};
     private static final String[] SOURCE_KEYS = {"citation", "note"};
     private static final String[] ENTRY_KEYS = {"value", "source", "note", "rule", "unit"};
     private static final String[] BOWING_KINDS = {"gap", "polarization"};
@@ -262,6 +263,7 @@ public final class JsonParameterSetReader {
             }
 
             AlloyBowing bowing = readBowing(required(root, "", "bowing"));
+            AlloyScattering alloyScattering = readAlloyScattering(required(root, "", "alloyScattering"));
 
             for (Map.Entry<String, Source> s : sources.entrySet()) {
                 if (!usedSources.contains(s.getKey())) {
@@ -269,7 +271,7 @@ public final class JsonParameterSetReader {
                             "source \"" + s.getKey() + "\" is cited by no value; cite it or remove it");
                 }
             }
-            return new FileParameterSet(name, description, fileName, model, materials, bowing,
+            return new FileParameterSet(name, description, fileName, model, materials, bowing, alloyScattering,
                     new ArrayList<>(sources.values()), notes);
         }
 
@@ -364,6 +366,26 @@ public final class JsonParameterSetReader {
                 }
             }
             return new AlloyBowing(out[0][0], out[0][1], out[0][2], out[1][0], out[1][1], out[1][2]);
+        }
+
+        private AlloyScattering readAlloyScattering(JsonTree.Member member) {
+            JsonTree.Obj obj = object(member, "alloyScattering");
+            checkKeys(obj, "alloyScattering", BOWING_PAIRS);
+            Bowing[] out = new Bowing[BOWING_PAIRS.length];
+            for (int i = 0; i < BOWING_PAIRS.length; i++) {
+                String path = "alloyScattering." + BOWING_PAIRS[i];
+                Entry e = entry(required(obj, "alloyScattering", BOWING_PAIRS[i]), path, "eV");
+                if (e.sources().size() != 1) {
+                    throw fail(path, e.line(), "an alloy scattering potential takes exactly one source key, found "
+                            + e.sources().size());
+                }
+                if (e.fileValue() < 0) {
+                    throw fail(path, e.line(), "alloy scattering potential " + e.fileValue()
+                            + " eV is negative; allowed: [0, +inf) eV");
+                }
+                out[i] = new Bowing(e.fileValue(), e.sources().get(0));
+            }
+            return new AlloyScattering(out[0], out[1], out[2]);
         }
 
         private Entry entry(JsonTree.Member m, String path, String fileUnit) {

@@ -1,5 +1,6 @@
 package org.wurtzkit.materials.data;
 
+import java.util.List;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.wurtzkit.material.Binary.ALN;
@@ -150,6 +151,28 @@ class BuiltInValuesTest {
             check(s, GAN, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY, 5.35);
             check(s, ALN, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY, (4.68 + 4.84) / 2);
             check(s, INN, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY, 8.4);
+        }
+
+        @Test
+        void scatteringParametersOfGanAndInn() {
+            // Table 1 of O. Donmez et al., Nanoscale Res. Lett. 7, 490 (2012) [verified: table]:
+            // hbar omega_LO 92 / 73 meV, rho 6.15 / 6.81 g/cm^3, Xi 8.3 / 7.1 eV, K^2 0.038 / 0.028
+            for (ParameterSet set : List.of(s, BuiltInParameterSets.ambacher2002())) {
+                check(set, GAN, MaterialParameter.LO_PHONON_ENERGY, 92);
+                check(set, INN, MaterialParameter.LO_PHONON_ENERGY, 73);
+                check(set, GAN, MaterialParameter.MASS_DENSITY, 6.15);
+                check(set, INN, MaterialParameter.MASS_DENSITY, 6.81);
+                check(set, GAN, MaterialParameter.ACOUSTIC_DEFORMATION_POTENTIAL, 8.3);
+                check(set, INN, MaterialParameter.ACOUSTIC_DEFORMATION_POTENTIAL, 7.1);
+                check(set, GAN, MaterialParameter.ELECTROMECHANICAL_COUPLING, 0.038);
+                check(set, INN, MaterialParameter.ELECTROMECHANICAL_COUPLING, 0.028);
+                // AlN LO: Raman A1(LO) 890 cm^-1 = 110.3 meV (Davydov et al., Phys. Rev. B 58, 12899 (1998)) [from memory]
+                check(set, ALN, MaterialParameter.LO_PHONON_ENERGY, 110.3);
+                // alloy potentials: AlGaN 1.8 eV (Jena et al., Phys. Rev. B 67, 153306 (2003)) [verified: abstract];
+                // InGaN 2.72e-19 J (Donmez et al. 2012, Table 1) [verified: table] = 1.70 eV
+                assertEquals(1.8, set.alloyScattering().alGaN().value(), 1e-12);
+                assertEquals(2.72e-19 / 1.602176634e-19, set.alloyScattering().inGaN().value(), 0.005);
+            }
         }
 
         @Test

@@ -59,6 +59,10 @@ class ProvenanceTest {
                 set.bowing().polarizationAlGaN(), set.bowing().polarizationInGaN(), set.bowing().polarizationInAlN())) {
             assertTrue(set.sources().contains(bow.source()), set.name() + " bowing cites " + bow.source().key());
         }
+        for (Bowing u : List.of(set.alloyScattering().alGaN(), set.alloyScattering().inGaN(),
+                set.alloyScattering().inAlN())) {
+            assertTrue(set.sources().contains(u.source()), set.name() + " alloy scattering cites " + u.source().key());
+        }
     }
 
     @Property
@@ -85,8 +89,9 @@ class ProvenanceTest {
         for (FileParameterSet set : List.of(BuiltInParameterSets.vurgaftmanMeyer2003(),
                 BuiltInParameterSets.ambacher2002())) {
             Map<String, String> notes = set.notes();
-            // 3 binaries x 31 parameters (30 from the file, Psp_bowing from the loader) + 6 bowing values
-            assertEquals(3 * MaterialParameter.values().length + 6, notes.size(), set.name());
+            // 3 binaries x every parameter (Psp_bowing from the loader) + 6 bowing values + 3 alloy
+            // scattering potentials
+            assertEquals(3 * MaterialParameter.values().length + 6 + 3, notes.size(), set.name());
             for (Map.Entry<String, String> n : notes.entrySet()) {
                 String t = n.getValue();
                 assertTrue(t.contains("from memory") || t.contains("verified") || t.contains("by definition")

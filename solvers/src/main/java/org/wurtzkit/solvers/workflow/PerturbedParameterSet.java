@@ -71,6 +71,11 @@ final class PerturbedParameterSet implements ParameterSet {
     }
 
     @Override
+    public org.wurtzkit.material.AlloyScattering alloyScattering() {
+        return base.alloyScattering();
+    }
+
+    @Override
     public PolarizationModel recommendedPolarizationModel() {
         return base.recommendedPolarizationModel();
     }

@@ -1,0 +1,205 @@
+package org.wurtzkit.solvers.transport.mobility;
+
+import java.util.List;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.units.Constants;
+
+/**
+ * Mobility and sheet resistance of a 2DEG: rates per subband and mechanism, mobilities by
+ * Matthiessen's rule per subband, the total as the n_i-weighted mean (parallel conduction), and the
+ * warnings of the models used. Immutable. SI accessors, and cm^2/(V s) ones named so.
+ *
+ * <p>Definitions: mu_i = e/(m_i sum_k 1/tau_ik) (Matthiessen's rule on the rates);
+ * mu = sum n_i mu_i/sum n_i; R_sh = 1/(e sum n_i mu_i); the mobility limited by one mechanism k is
+ * sum n_i mu_ik/sum n_i with mu_ik = e/(m_i/tau_ik).
+ */
+public final class MobilityResult {
+    private final double temperatureK;
+    private final List<String> mechanisms;
+    private final double[] density;
+    private final double[] mass;
+    private final int[] subbandIndex;
+    private final int[] window;
+    private final double[][] rate;
+    private final List<String> warnings;
+    private final double excluded;
+
+    MobilityResult(double temperatureK, List<String> mechanisms, double[] density, double[] mass, int[] window,
+            int[] subbandIndex, double[][] rate, double excluded, List<String> warnings) {
+        this.excluded = excluded;
+        this.temperatureK = temperatureK;
+        this.mechanisms = List.copyOf(mechanisms);
+        this.density = density.clone();
+        this.mass = mass.clone();
+        this.window = window.clone();
+        this.subbandIndex = subbandIndex.clone();
+        this.rate = new double[rate.length][];
+        for (int i = 0; i < rate.length; i++) {
+            this.rate[i] = rate[i].clone();
+        }
+        this.warnings = List.copyOf(warnings);
+    }
+
+    /** @return the lattice temperature of the solution (K) */
+    public double temperatureK() {
+        return temperatureK;
+    }
+
+    /** @return the names of the mechanisms, in the order of the options */
+    public List<String> mechanisms() {
+        return mechanisms;
+    }
+
+    /** @return number of subbands that conduct */
+    public int subbandCount() {
+        return density.length;
+    }
+
+    /**
+     * @param i subband (0 to {@link #subbandCount()} - 1)
+     * @return its window in the solution
+     */
+    public int window(int i) {
+        return window[check(i)];
+    }
+
+    /**
+     * @param i subband
+     * @return its index within its window (0 = ground)
+     */
+    public int subbandIndex(int i) {
+        return subbandIndex[check(i)];
+    }
+
+    /**
+     * @param i subband
+     * @return its sheet density (m^-2)
+     */
+    public double sheetDensity(int i) {
+        return density[check(i)];
+    }
+
+    /** @return all conducting electrons (m^-2) */
+    public double sheetDensity() {
+        double s = 0;
+        for (double v : density) {
+            s += v;
+        }
+        return s;
+    }
+
+    /**
+     * @return electrons of the subbands left out by {@link MobilityOptions#minimumSubbandFraction()} (m^-2);
+     *         they are not in {@link #sheetDensity()} and do not conduct in {@link #sheetResistanceOhmPerSquare()}
+     */
+    public double excludedSheetDensity() {
+        return excluded;
+    }
+
+    /** @return all conducting electrons (cm^-2) */
+    public double sheetDensityPerCm2() {
+        return sheetDensity() * 1e-4;
+    }
+
+    /**
+     * @param i         subband
+     * @param mechanism a name of {@link #mechanisms()}
+     * @return its momentum relaxation rate 1/tau (1/s)
+     */
+    public double rate(int i, String mechanism) {
+        return rate[check(i)][index(mechanism)];
+    }
+
+    /**
+     * @param i subband
+     * @return Matthiessen mobility e/(m_i sum_k 1/tau_ik) (m^2/(V s)); +infinity if no rate is positive
+     */
+    public double subbandMobility(int i) {
+        check(i);
+        double s = 0;
+        for (double r : rate[i]) {
+            s += r;
+        }
+        return Constants.ELEMENTARY_CHARGE / (mass[i] * s);
+    }
+
+    /**
+     * @param i         subband
+     * @param mechanism a mechanism name
+     * @return mobility of subband i limited by that mechanism alone (m^2/(V s))
+     */
+    public double subbandMobility(int i, String mechanism) {
+        return Constants.ELEMENTARY_CHARGE / (mass[check(i)] * rate[i][index(mechanism)]);
+    }
+
+    /** @return the total mobility sum n_i mu_i/sum n_i (m^2/(V s)) */
+    public double mobility() {
+        double s = 0;
+        for (int i = 0; i < density.length; i++) {
+            s += density[i] * subbandMobility(i);
+        }
+        return s / sheetDensity();
+    }
+
+    /** @return the total mobility (cm^2/(V s)) */
+    public double mobilityCm2PerVs() {
+        return mobility() * 1e4;
+    }
+
+    /**
+     * @param mechanism a mechanism name
+     * @return the mobility limited by that mechanism alone, n_i-weighted (m^2/(V s))
+     */
+    public double mobility(String mechanism) {
+        int k = index(mechanism);
+        double s = 0;
+        for (int i = 0; i < density.length; i++) {
+            s += density[i] * Constants.ELEMENTARY_CHARGE / (mass[i] * rate[i][k]);
+        }
+        return s / sheetDensity();
+    }
+
+    /**
+     * @param mechanism a mechanism name
+     * @return the same in cm^2/(V s)
+     */
+    public double mobilityCm2PerVs(String mechanism) {
+        return mobility(mechanism) * 1e4;
+    }
+
+    /** @return sheet resistance 1/(e sum n_i mu_i) (ohm per square) */
+    public double sheetResistanceOhmPerSquare() {
+        double g = 0;
+        for (int i = 0; i < density.length; i++) {
+            g += Constants.ELEMENTARY_CHARGE * density[i] * subbandMobility(i);
+        }
+        return 1 / g;
+    }
+
+    /** @return the warnings of the models used, without duplicates; empty when none applies */
+    public List<String> warnings() {
+        return warnings;
+    }
+
+    private int check(int i) {
+        if (i < 0 || i >= density.length) {
+            throw new InvalidParameterException("subband", Integer.toString(i), "[0, " + (density.length - 1) + "]");
+        }
+        return i;
+    }
+
+    private int index(String mechanism) {
+        int k = mechanisms.indexOf(mechanism);
+        if (k < 0) {
+            throw new InvalidParameterException("mechanism", String.valueOf(mechanism), mechanisms.toString());
+        }
+        return k;
+    }
+
+    @Override
+    public String toString() {
+        return String.format(java.util.Locale.ROOT, "MobilityResult[T = %.0f K, n_s = %.3g cm^-2, mu = %.0f cm^2/Vs,"
+                + " R_sh = %.0f ohm/sq, %d subbands, %d warnings]", temperatureK, sheetDensityPerCm2(),
+                mobilityCm2PerVs(), sheetResistanceOhmPerSquare(), density.length, warnings.size());
+    }
+}
