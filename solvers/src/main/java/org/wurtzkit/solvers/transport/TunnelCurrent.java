@@ -35,7 +35,9 @@ import org.wurtzkit.units.Constants;
  * integrated by Commons Math's {@link IterativeLegendreGaussIntegrator} (6-point Gauss-Legendre rule
  * on 1, 2, 3, ... sub-intervals until two successive estimates agree) to the requested relative
  * accuracy, or to an absolute accuracy of 1e-3 of that times the integrand's largest sampled value
- * times kT, so that panels contributing nothing stop at once.
+ * times kT, so that panels contributing nothing stop at once. Below the top the panels are integrated
+ * in s = sqrt(top - E): the WKB transmission of a flat-topped barrier, exp(-K sqrt(top - E)), has a
+ * derivative singular at the top, smooth in s.
  */
 public final class TunnelCurrent {
     /** Lowest temperature accepted (K): below it the Fermi edges need more panels than is sensible. */
@@ -128,6 +130,9 @@ public final class TunnelCurrent {
         double absolute = 1e-3 * relativeAccuracy * peak * kT;
         IterativeLegendreGaussIntegrator gauss = new IterativeLegendreGaussIntegrator(GAUSS_POINTS, relativeAccuracy,
                 absolute, 1, MAX_ITERATIONS);
+        // below the top, E = top - s^2: T(E) of a flat-topped barrier goes as exp(-K sqrt(top - E)), whose
+        // derivative is singular at the top; in s it is smooth
+        UnivariateFunction g = sv -> 2 * sv * f.value(top - sv * sv);
         double below = 0;
         double above = 0;
         for (int i = 0; i + 1 < cuts.length; i++) {
@@ -135,7 +140,9 @@ public final class TunnelCurrent {
             double b = cuts[i + 1];
             double part;
             try {
-                part = gauss.integrate(MAX_EVALUATIONS_PER_PANEL, f, a, b);
+                part = b <= top
+                        ? gauss.integrate(MAX_EVALUATIONS_PER_PANEL, g, Math.sqrt(top - b), Math.sqrt(top - a))
+                        : gauss.integrate(MAX_EVALUATIONS_PER_PANEL, f, a, b);
             } catch (MaxCountExceededException e) {
                 throw new WurtzkitException(ErrorKind.NOT_CONVERGED, "Tsu-Esaki integral: the panel [" + a + ", " + b
                         + "] eV did not reach relative accuracy " + relativeAccuracy + " (" + e.getMessage()
