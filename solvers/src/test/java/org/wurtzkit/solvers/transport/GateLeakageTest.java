@@ -118,6 +118,45 @@ class GateLeakageTest {
     }
 
     /**
+     * Reverse field emission of a heavily doped n-GaN Schottky diode (N_D = 1e19 cm^-3, 77 K, phi_B =
+     * 0.8 eV; E00 = (q hbar / 2) sqrt(N_D / (m* eps_s eps0)) = 40.7 meV, six times kT) against the
+     * field-emission formula of F. A. Padovani and R. Stratton, Solid-State Electron. 9, 695 (1966), as
+     * quoted by S. M. Sze and K. K. Ng, Physics of Semiconductor Devices, 3rd ed. (2007), ch. 3 (from
+     * memory): J = A* (E00/k)^2 ((phi_B + V_R)/phi_B) exp[-2 phi_B^{3/2} / (3 E00 sqrt(phi_B + V_R))].
+     * The formula takes the barrier as a triangle with the surface field and linearises the exponent;
+     * the computed parabola is thicker, so the computed current is lower, and the formula improves as
+     * V_R grows past phi_B (the part of the parabola that matters becomes a triangle). Checked: the
+     * ratio lies in (0.5, 1) for V_R = 4, 8 and 16 V and rises with V_R.
+     */
+    @Test
+    void reverseFieldEmissionOfADegenerateDiodeApproachesPadovaniStratton() {
+        double nd = 1e19;
+        double phi = 0.8;
+        double t = 77;
+        var gan = SET.material(Composition.GAN);
+        double m = gan.masses().electronPerpendicular();
+        double e00 = Constants.HBAR / 2 * Math.sqrt(nd * 1e6
+                / (m * Constants.ELECTRON_MASS * gan.permittivityStatic() * Constants.VACUUM_PERMITTIVITY));
+        assertEquals(0.0407, e00, 0.0005, "E00 (eV)");
+        SelfConsistentSolver classical = new SelfConsistentSolver(
+                SolverOptions.defaults().withQuantumRegion(org.wurtzkit.solvers.sp.QuantumRegion.none()));
+        Structure d = Structure.builder(SET)
+                .grow(Layer.of("n+ GaN", Composition.GAN, 300 * NM).withDopant(Dopant.donorsPerCm3(nd, 0.0)))
+                .top(TopBoundary.schottky(phi, 0)).temperature(t).build();
+        double previous = 0;
+        for (double vr : new double[] {4, 8, 16}) {
+            Solution s = classical.solve(d.withTop(TopBoundary.schottky(phi, -vr)));
+            double j = -GateLeakage.of(s, LeakageOptions.defaults()).total();
+            double fe = ThermionicEmission.richardsonConstant(m) * Math.pow(e00 / Constants.BOLTZMANN_EV, 2)
+                    * (phi + vr) / phi * Math.exp(-2 * Math.pow(phi, 1.5) / (3 * e00 * Math.sqrt(phi + vr)));
+            double ratio = j / fe;
+            assertTrue(ratio > 0.5 && ratio < 1 && ratio > previous, "V_R " + vr + " V: computed " + j
+                    + " A/m^2, Padovani-Stratton " + fe + ", ratio " + ratio + " after " + previous);
+            previous = ratio;
+        }
+    }
+
+    /**
      * A thicker GaN cap lowers the reverse leakage at equal gate bias: it adds to the tunnelling
      * distance and its polarization raises the barrier (common practice, no source). Checked at
      * every bias from -1 to -4 V for caps of 0, 2, 4 and 8 nm.
