@@ -150,6 +150,7 @@ public final class TransferMatrixTransmission implements Transmission {
         double re = b * betaL * betaR - c;
         double im = a * betaR + d * betaL;
         double t = 4 * betaL * betaR / (re * re + im * im);
+        // T <= 1 by current conservation (det P = 1); the min removes only round-off above 1
         if (logScale == 0) {
             return Math.min(1, t);
         }
