@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.transport;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -8,7 +9,11 @@ import static org.wurtzkit.units.Units.NM;
 import java.io.IOException;
 import java.io.StringReader;
 import java.io.StringWriter;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.BeforeAll;
@@ -20,6 +25,7 @@ import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
+import org.wurtzkit.solvers.sp.QuantumRegion;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -139,7 +145,7 @@ class GateLeakageTest {
                 / (m * Constants.ELECTRON_MASS * gan.permittivityStatic() * Constants.VACUUM_PERMITTIVITY));
         assertEquals(0.0407, e00, 0.0005, "E00 (eV)");
         SelfConsistentSolver classical = new SelfConsistentSolver(
-                SolverOptions.defaults().withQuantumRegion(org.wurtzkit.solvers.sp.QuantumRegion.none()));
+                SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()));
         Structure d = Structure.builder(SET)
                 .grow(Layer.of("n+ GaN", Composition.GAN, 300 * NM).withDopant(Dopant.donorsPerCm3(nd, 0.0)))
                 .top(TopBoundary.schottky(phi, 0)).temperature(t).build();
@@ -291,6 +297,33 @@ class GateLeakageTest {
         double b = GateLeakage.atBias(capped[1], -3.5, LeakageOptions.defaults()).total();
         assertTrue(between.total() < a && between.total() > b, between.total() + " between " + a + " and " + b);
         assertTrue(between.warnings().stream().anyMatch(w -> w.contains("interpolated")));
+    }
+
+    /**
+     * GateLeakage holds no state: four threads computing the curves of all four stacks at once get
+     * the serial results bit for bit (the library's thread-safety rule, DEVELOPERS.md).
+     */
+    @Test
+    void parallelCurvesEqualSerialOnesBitForBit() throws Exception {
+        double[][] serial = new double[CAPS_NM.length][];
+        for (int i = 0; i < CAPS_NM.length; i++) {
+            serial[i] = GateLeakage.curve(capped[i], LeakageOptions.defaults()).totalAPerCm2();
+        }
+        ExecutorService pool = Executors.newFixedThreadPool(4);
+        try {
+            List<Future<double[]>> fs = new ArrayList<>();
+            for (int r = 0; r < 2; r++) {
+                for (int i = 0; i < CAPS_NM.length; i++) {
+                    BiasSweepResult sweep = capped[i];
+                    fs.add(pool.submit(() -> GateLeakage.curve(sweep, LeakageOptions.defaults()).totalAPerCm2()));
+                }
+            }
+            for (int k = 0; k < fs.size(); k++) {
+                assertArrayEquals(serial[k % CAPS_NM.length], fs.get(k).get());
+            }
+        } finally {
+            pool.shutdownNow();
+        }
     }
 
     @Test
