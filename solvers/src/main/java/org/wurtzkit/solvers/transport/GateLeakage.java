@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.transport;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
@@ -261,9 +262,8 @@ public final class GateLeakage {
         end = Math.max(end, 1);
         double kT = Constants.BOLTZMANN_EV * st.temperatureK();
         if (ec[end] > 3 * kT) {
-            warnings.add("no electron gas under the gate: the lowest E_c, " + String.format("%.3f", ec[end])
-                    + " eV above the Fermi level at " + String.format("%.1f", x[end] * 1e9)
-                    + " nm, is taken as the collector's band edge");
+            warnings.add(String.format(Locale.ROOT, "no electron gas under the gate: the lowest E_c, %.3f eV above "
+                    + "the Fermi level at %.1f nm, is taken as the collector's band edge", ec[end], x[end] * 1e9));
         }
         double gateEps = st.pointAt(0).material().permittivityHighFrequency();
         double[] field = solution.electricField();
@@ -281,8 +281,8 @@ public final class GateLeakage {
             xs = java.util.Arrays.copyOf(x, end + 1);
             us = java.util.Arrays.copyOf(ec, end + 1);
             if (lowering > IMAGE_FORCE_WARNING_EV) {
-                warnings.add("image-force lowering is off; at the gate field of " + String.format("%.2f", gateField / 1e8)
-                        + " MV/cm it would lower the barrier by " + String.format("%.3f", lowering) + " eV");
+                warnings.add(String.format(Locale.ROOT, "image-force lowering is off; at the gate field of %.2f MV/cm "
+                        + "it would lower the barrier by %.3f eV", gateField / 1e8, lowering));
             }
         }
         double[] m = new double[xs.length - 1];
@@ -300,7 +300,8 @@ public final class GateLeakage {
      * mesh nodes and on extra nodes spaced geometrically (ratio 1.15) from x_c to 10 nm, where x_c =
      * q / (16 pi eps0 eps_inf phi_B) is the depth at which the image potential equals the barrier height;
      * between the gate and x_c the image term is held at its value at x_c (minus phi_B: the band edge
-     * meets the metal's Fermi level there).
+     * meets the metal's Fermi level there). For phi_B below 0.05 eV, x_c is that of 0.05 eV, so that
+     * the held part stays under a nanometre.
      */
     private static double[][] withImagePotential(double[] x, double[] ec, int end, double eps, double phiB) {
         double k = Constants.ELEMENTARY_CHARGE / (16 * Math.PI * Constants.VACUUM_PERMITTIVITY * eps);
