@@ -64,7 +64,8 @@ public class LeakageBenchmark {
             }
             for (int i = 1; i < j.length; i++) {
                 if (!(j[i] < 0) || !(j[i] <= j[i - 1])) {
-                    throw new IllegalStateException("leakage at point " + i + ": " + j[i] + " A/cm^2 after " + j[i - 1]);
+                    throw new IllegalStateException("leakage at point " + i + ": " + j[i] + " A/cm^2 after "
+                            + j[i - 1]);
                 }
             }
             System.out.printf("%n[leakage, %d points] J(%.2f V) = %.3e A/cm^2%n", j.length, grid.get(j.length - 1),

@@ -111,7 +111,8 @@ public final class GateLeakage {
             }
             try {
                 points[i] = of(s.get(), options);
-                status[i] = points[i].warnings().isEmpty() ? "ok" : "ok, " + points[i].warnings().size() + " warning(s)";
+                int w = points[i].warnings().size();
+                status[i] = w == 0 ? "ok" : "ok, " + w + " warning(s)";
             } catch (WurtzkitException e) {
                 if (e.kind() != ErrorKind.NOT_CONVERGED) {
                     throw e;
@@ -160,7 +161,8 @@ public final class GateLeakage {
         if (below < 0 || above < 0) {
             throw new InvalidParameterException("gate bias for the leakage current (V)", Double.toString(biasV),
                     lo > hi ? "none: no point of the sweep converged"
-                            : "[" + lo + ", " + hi + "], the converged points of the sweep; extend the sweep to reach it");
+                            : "[" + lo + ", " + hi + "], the converged points of the sweep; extend the sweep to "
+                                    + "reach it");
         }
         LeakageCurrent a = of(sweep.solution(below).orElseThrow(), options);
         LeakageCurrent b = of(sweep.solution(above).orElseThrow(), options);
@@ -232,7 +234,8 @@ public final class GateLeakage {
             return a;
         }
         if (a != 0 && b != 0 && Math.signum(a) == Math.signum(b)) {
-            return Math.signum(a) * Math.exp(Math.log(Math.abs(a)) + w * (Math.log(Math.abs(b)) - Math.log(Math.abs(a))));
+            double la = Math.log(Math.abs(a));
+            return Math.signum(a) * Math.exp(la + w * (Math.log(Math.abs(b)) - la));
         }
         return a + w * (b - a);
     }

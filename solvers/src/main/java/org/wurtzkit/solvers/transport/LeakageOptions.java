@@ -48,7 +48,8 @@ public record LeakageOptions(Set<LeakageMechanism> mechanisms, TransmissionMetho
         }
         Require.inRange("relative accuracy of the Tsu-Esaki integral", relativeAccuracy, 1e-10, 1e-2);
         if (!(slabWidth > 0 && slabWidth <= 1e-9)) {
-            throw new InvalidParameterException("transfer-matrix slab width (m)", Double.toString(slabWidth), "(0, 1e-9]");
+            throw new InvalidParameterException("transfer-matrix slab width (m)", Double.toString(slabWidth),
+                    "(0, 1e-9]");
         }
         if (mechanisms.contains(LeakageMechanism.POOLE_FRENKEL) && pooleFrenkel == null) {
             throw new InvalidParameterException("Poole-Frenkel parameters", "null",

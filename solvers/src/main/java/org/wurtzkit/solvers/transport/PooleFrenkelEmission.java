@@ -29,7 +29,8 @@ public record PooleFrenkelEmission(double trapBarrierEv, double prefactor) {
                     "(0, 3]");
         }
         if (!(prefactor > 0 && prefactor <= 1e6)) {
-            throw new InvalidParameterException("Poole-Frenkel prefactor (S/m)", Double.toString(prefactor), "(0, 1e6]");
+            throw new InvalidParameterException("Poole-Frenkel prefactor (S/m)", Double.toString(prefactor),
+                    "(0, 1e6]");
         }
     }
 
@@ -54,6 +55,7 @@ public record PooleFrenkelEmission(double trapBarrierEv, double prefactor) {
     public double current(double fieldVPerM, double highFrequencyPermittivity, double temperatureK) {
         TunnelCurrent.checkTemperature(temperatureK);
         double kT = Constants.BOLTZMANN_EV * temperatureK;
-        return prefactor * fieldVPerM * Math.exp(-(trapBarrierEv - lowering(fieldVPerM, highFrequencyPermittivity)) / kT);
+        double barrier = trapBarrierEv - lowering(fieldVPerM, highFrequencyPermittivity);
+        return prefactor * fieldVPerM * Math.exp(-barrier / kT);
     }
 }

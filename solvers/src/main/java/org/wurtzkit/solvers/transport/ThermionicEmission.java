@@ -40,7 +40,8 @@ public final class ThermionicEmission {
      * @param barrierEv    phi_B (eV), in [0, 6]
      * @param biasV        forward bias V (V), finite
      * @param mass         m* for A* (m0)
-     * @param temperatureK T (K), in [{@value TunnelCurrent#MIN_TEMPERATURE_K}, {@value TunnelCurrent#MAX_TEMPERATURE_K}]
+     * @param temperatureK T (K), in [{@value TunnelCurrent#MIN_TEMPERATURE_K},
+     *                     {@value TunnelCurrent#MAX_TEMPERATURE_K}]
      * @return J (A/m^2), positive in forward bias
      */
     public static double diodeCurrent(double barrierEv, double biasV, double mass, double temperatureK) {

@@ -137,7 +137,8 @@ public final class TransferMatrixTransmission implements Transmission {
             b = nb;
             c = nc;
             d = nd;
-            double big = Math.max(Math.max(Math.abs(a), Math.abs(b * betaL)), Math.max(Math.abs(c / betaL), Math.abs(d)));
+            double big = Math.max(Math.max(Math.abs(a), Math.abs(b * betaL)),
+                    Math.max(Math.abs(c / betaL), Math.abs(d)));
             if (big > RESCALE_ABOVE) {
                 double f = 1 / big;
                 a *= f;

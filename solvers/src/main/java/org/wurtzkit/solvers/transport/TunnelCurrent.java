@@ -147,7 +147,8 @@ public final class TunnelCurrent {
                 throw new WurtzkitException(ErrorKind.NOT_CONVERGED, "Tsu-Esaki integral: the panel [" + a + ", " + b
                         + "] eV did not reach relative accuracy " + relativeAccuracy + " (" + e.getMessage()
                         + "); integrated so far (electron flux current, A/m^2): below the top "
-                        + scale(below, supplyMass, temperatureK) + ", above it " + scale(above, supplyMass, temperatureK),
+                        + scale(below, supplyMass, temperatureK) + ", above it "
+                        + scale(above, supplyMass, temperatureK),
                         e);
             }
             if (b <= top) {

@@ -235,7 +235,8 @@ class GateLeakageTest {
         LeakageCurrent image = GateLeakage.of(s, LeakageOptions.defaults().withImageForceLowering(true));
         double f = Math.abs(s.electricField()[0]);
         double eps = SET.material(Composition.alGaN(0.25)).permittivityHighFrequency();
-        double expected = Math.sqrt(Constants.ELEMENTARY_CHARGE * f / (4 * Math.PI * Constants.VACUUM_PERMITTIVITY * eps));
+        double expected = Math.sqrt(Constants.ELEMENTARY_CHARGE * f
+                / (4 * Math.PI * Constants.VACUUM_PERMITTIVITY * eps));
         assertEquals(expected, plain.barrierTopEv() - image.barrierTopEv(), 0.05 * expected);
         assertTrue(image.total() < plain.total() && plain.total() < 0);
         assertTrue(plain.warnings().stream().anyMatch(w -> w.contains("image-force lowering is off")), plain.warnings()
@@ -256,12 +257,13 @@ class GateLeakageTest {
         Solution s = capped[1].solution(8).orElseThrow();
         LeakageCurrent j = GateLeakage.of(s, LeakageOptions.defaults().withPooleFrenkel(pf));
         double eps = SET.material(Composition.GAN).permittivityHighFrequency();
-        assertEquals(-pf.current(j.barrierFieldVPerM(), eps, 300), j.pooleFrenkel(), 1e-12 * Math.abs(j.pooleFrenkel()));
+        assertEquals(-pf.current(j.barrierFieldVPerM(), eps, 300), j.pooleFrenkel(),
+                1e-12 * Math.abs(j.pooleFrenkel()));
         assertTrue(j.barrierFieldVPerM() > 1e8 && j.barrierFieldVPerM() < 5e8, "field in the barrier "
                 + j.barrierFieldVPerM());
         assertEquals(0, GateLeakage.of(s, LeakageOptions.defaults()).pooleFrenkel());
-        assertEquals(0, GateLeakage.of(capped[1].solution(0).orElseThrow(), LeakageOptions.defaults().withPooleFrenkel(pf))
-                .pooleFrenkel());
+        LeakageOptions withPf = LeakageOptions.defaults().withPooleFrenkel(pf);
+        assertEquals(0, GateLeakage.of(capped[1].solution(0).orElseThrow(), withPf).pooleFrenkel());
         assertThrows(InvalidParameterException.class, () -> new PooleFrenkelEmission(0, 1));
         assertThrows(InvalidParameterException.class,
                 () -> LeakageOptions.defaults().withMechanisms(LeakageMechanism.POOLE_FRENKEL));
@@ -330,7 +332,8 @@ class GateLeakageTest {
     void badInputGetsAClearException() {
         InvalidParameterException far = assertThrows(InvalidParameterException.class,
                 () -> GateLeakage.atBias(capped[0], -10, LeakageOptions.defaults()));
-        assertTrue(far.getMessage().contains("gate bias") && far.getMessage().contains("[-4.0, 0.0]"), far.getMessage());
+        assertTrue(far.getMessage().contains("gate bias") && far.getMessage().contains("[-4.0, 0.0]"),
+                far.getMessage());
         for (double t : new double[] {5, 1500}) {
             InvalidParameterException e = assertThrows(InvalidParameterException.class,
                     () -> GateLeakage.atReverseBias(hemt(0).withTemperature(t), 2, SWEEP, LeakageOptions.defaults()));

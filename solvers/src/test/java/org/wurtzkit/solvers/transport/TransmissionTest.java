@@ -11,7 +11,8 @@ import org.wurtzkit.units.Constants;
 
 /** WKB and transfer-matrix transmission against exact results. */
 class TransmissionTest {
-    private static final double C = Math.sqrt(2 * Constants.ELECTRON_MASS * Constants.ELEMENTARY_CHARGE) / Constants.HBAR;
+    private static final double C = Math.sqrt(2 * Constants.ELECTRON_MASS * Constants.ELEMENTARY_CHARGE)
+            / Constants.HBAR;
 
     /**
      * Exact transmission of a rectangular barrier for equal masses (textbook quantum mechanics, e.g.
@@ -79,7 +80,8 @@ class TransmissionTest {
                 double kappaA = C * Math.sqrt(m * (v0 - e)) * aNm * NM;
                 double p = 16 * e * (v0 - e) / (v0 * v0);
                 double w = Math.exp(-2 * kappaA);
-                assertEquals(p * (1 + (2 - p) * w), exact / wkb.at(e), p * (1e-9 + 10 * w * w), "a " + aNm + " nm, E " + e);
+                assertEquals(p * (1 + (2 - p) * w), exact / wkb.at(e), p * (1e-9 + 10 * w * w),
+                        "a " + aNm + " nm, E " + e);
                 assertEquals(-2 * kappaA, Math.log(wkb.at(e)), 1e-12 * kappaA, "WKB exponent");
             }
         }
@@ -165,8 +167,8 @@ class TransmissionTest {
     @Test
     void badInputIsRefusedWithItsRange() {
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
-                () -> TunnelBarrier.of(new double[] {0, 1e-9, 0.5e-9}, new double[] {1, 1, 1}, new double[] {0.2, 0.2}, 0,
-                        0.2, 0, 0.2));
+                () -> TunnelBarrier.of(new double[] {0, 1e-9, 0.5e-9}, new double[] {1, 1, 1},
+                        new double[] {0.2, 0.2}, 0, 0.2, 0, 0.2));
         assertTrue(e.getMessage().contains("non-decreasing"), e.getMessage());
         assertThrows(InvalidParameterException.class, () -> TunnelBarrier.rectangular(1, 1e-9, 0));
         assertThrows(InvalidParameterException.class, () -> TunnelBarrier.rectangular(Double.NaN, 1e-9, 0.2));
