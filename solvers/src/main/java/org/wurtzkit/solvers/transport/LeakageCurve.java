@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.transport;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.function.ToDoubleFunction;
 import org.wurtzkit.solvers.workflow.Column;
 import org.wurtzkit.solvers.workflow.CsvTable;
 
@@ -52,9 +53,28 @@ public final class LeakageCurve implements CsvTable {
 
     /** @return total current density per point (A/cm^2), NaN where failed */
     public double[] totalAPerCm2() {
+        return column(LeakageCurrent::totalAPerCm2);
+    }
+
+    /** @return thermionic current density per point (A/cm^2), NaN where failed */
+    public double[] thermionicAPerCm2() {
+        return column(LeakageCurrent::thermionicAPerCm2);
+    }
+
+    /** @return tunnelling current density per point (A/cm^2), NaN where failed */
+    public double[] tunnellingAPerCm2() {
+        return column(LeakageCurrent::tunnellingAPerCm2);
+    }
+
+    /** @return Poole-Frenkel current density per point (A/cm^2), NaN where failed */
+    public double[] pooleFrenkelAPerCm2() {
+        return column(LeakageCurrent::pooleFrenkelAPerCm2);
+    }
+
+    private double[] column(ToDoubleFunction<LeakageCurrent> f) {
         double[] out = new double[bias.length];
         for (int i = 0; i < out.length; i++) {
-            out[i] = points[i] == null ? Double.NaN : points[i].totalAPerCm2();
+            out[i] = points[i] == null ? Double.NaN : f.applyAsDouble(points[i]);
         }
         return out;
     }

@@ -282,6 +282,9 @@ class GateLeakageTest {
         assertEquals(9, rows.size());
         for (int i = 0; i < rows.size(); i++) {
             assertEquals(c.totalAPerCm2()[i], Double.parseDouble(rows.get(i).get("total_A/cm^2")));
+            assertEquals(c.tunnellingAPerCm2()[i], Double.parseDouble(rows.get(i).get("tunnelling_A/cm^2")));
+            assertEquals(c.thermionicAPerCm2()[i], Double.parseDouble(rows.get(i).get("thermionic_A/cm^2")));
+            assertEquals(0.0, Double.parseDouble(rows.get(i).get("poole_frenkel_A/cm^2")));
             assertTrue(rows.get(i).get("status").startsWith("ok"));
         }
     }
