@@ -44,6 +44,25 @@ class ExamplesTest {
     }
 
     @Test
+    void gateLeakage(@TempDir Path out) throws IOException {
+        GateLeakageExample.Result r = GateLeakageExample.run(out, GateLeakageExample.Settings.quick(), log);
+        Outputs.assertPng(file(r, "gate-leakage.png"), GateLeakageExample.WIDTH, GateLeakageExample.HEIGHT);
+        List<CSVRecord> rows = csv(r, "gate-leakage.csv", "gate_bias_V", "total_A/cm^2", "thermionic_A/cm^2",
+                "tunnelling_A/cm^2", "poole_frenkel_A/cm^2", "barrier_top_eV", "status");
+        assertEquals(r.wafer().size(), rows.size());
+        double[] j = r.wafer().totalAPerCm2();
+        double[] image = r.imageForce().totalAPerCm2();
+        double[] cap = r.thickerCap().totalAPerCm2();
+        assertEquals(0, j[0], "no current at 0 V");
+        for (int i = 1; i < j.length; i++) {
+            assertEquals(j[i], Double.parseDouble(rows.get(i).get("total_A/cm^2")));
+            // reverse current, larger with image-force lowering, smaller with the thicker cap
+            assertTrue(j[i] < 0 && image[i] < j[i] && cap[i] > j[i], "point " + i);
+        }
+        assertTrue(r.summary().get(0).contains("Gate leakage of wafer " + DemoLab.WAFER), r.summary().toString());
+    }
+
+    @Test
     void bandDiagram(@TempDir Path out) throws IOException {
         BandDiagramExample.Result r = BandDiagramExample.run(out, log);
         Outputs.assertPng(file(r, "band-diagram.png"), BandDiagramExample.WIDTH, BandDiagramExample.HEIGHT);

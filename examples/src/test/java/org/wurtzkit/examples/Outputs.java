@@ -79,7 +79,7 @@ final class Outputs {
             if (dimensionless.contains(h)) {
                 continue;
             }
-            boolean unit = h.matches(".*_(nm|eV|V|cm\\^-2|cm\\^-3|C/m\\^2|F/m\\^2|uF/cm\\^2|MV/cm|nm\\^-1|m0)");
+            boolean unit = h.matches(".*_(nm|eV|V|cm\\^-2|cm\\^-3|C/m\\^2|F/m\\^2|uF/cm\\^2|MV/cm|nm\\^-1|m0|A/cm\\^2)");
             assertTrue(unit, "header " + h + " names no unit");
         }
     }

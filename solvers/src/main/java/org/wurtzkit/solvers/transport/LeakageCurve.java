@@ -1,0 +1,102 @@
+package org.wurtzkit.solvers.transport;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.function.ToDoubleFunction;
+import org.wurtzkit.solvers.workflow.Column;
+import org.wurtzkit.solvers.workflow.CsvTable;
+
+/**
+ * A gate-leakage J-V curve ({@link GateLeakage#curve}): per bias point of the sweep, the current
+ * density and its parts, in the sweep's order. Immutable; array accessors return copies. A point
+ * without a value (its solve or its current integral failed) is NaN, with the reason in
+ * {@link #status(int)}.
+ *
+ * <p>CSV columns: {@code gate_bias_V, total_A/cm^2, thermionic_A/cm^2, tunnelling_A/cm^2,
+ * poole_frenkel_A/cm^2, barrier_top_eV, status}; sign as in {@link LeakageCurrent} (negative in
+ * reverse bias).
+ */
+public final class LeakageCurve implements CsvTable {
+    private static final List<Column> COLUMNS = List.of(Column.of("gate_bias", "V"), Column.of("total", "A/cm^2"),
+            Column.of("thermionic", "A/cm^2"), Column.of("tunnelling", "A/cm^2"), Column.of("poole_frenkel", "A/cm^2"),
+            Column.of("barrier_top", "eV"), Column.of("status", ""));
+
+    private final double[] bias;
+    private final LeakageCurrent[] points;
+    private final String[] status;
+
+    LeakageCurve(double[] bias, LeakageCurrent[] points, String[] status) {
+        this.bias = bias.clone();
+        this.points = points.clone();
+        this.status = status.clone();
+    }
+
+    /** @return number of points */
+    public int size() {
+        return bias.length;
+    }
+
+    /** @return the gate biases (V) */
+    public double[] gateBiasV() {
+        return bias.clone();
+    }
+
+    /** @param i point index @return the current at point i, empty where it failed */
+    public Optional<LeakageCurrent> point(int i) {
+        return Optional.ofNullable(points[i]);
+    }
+
+    /** @param i point index @return "ok", "ok, n warning(s)", or "failed: " and the reason */
+    public String status(int i) {
+        return status[i];
+    }
+
+    /** @return total current density per point (A/cm^2), NaN where failed */
+    public double[] totalAPerCm2() {
+        return column(LeakageCurrent::totalAPerCm2);
+    }
+
+    /** @return thermionic current density per point (A/cm^2), NaN where failed */
+    public double[] thermionicAPerCm2() {
+        return column(LeakageCurrent::thermionicAPerCm2);
+    }
+
+    /** @return tunnelling current density per point (A/cm^2), NaN where failed */
+    public double[] tunnellingAPerCm2() {
+        return column(LeakageCurrent::tunnellingAPerCm2);
+    }
+
+    /** @return Poole-Frenkel current density per point (A/cm^2), NaN where failed */
+    public double[] pooleFrenkelAPerCm2() {
+        return column(LeakageCurrent::pooleFrenkelAPerCm2);
+    }
+
+    private double[] column(ToDoubleFunction<LeakageCurrent> f) {
+        double[] out = new double[bias.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = points[i] == null ? Double.NaN : f.applyAsDouble(points[i]);
+        }
+        return out;
+    }
+
+    @Override
+    public List<Column> columns() {
+        return COLUMNS;
+    }
+
+    @Override
+    public int rowCount() {
+        return bias.length;
+    }
+
+    @Override
+    public List<String> row(int i) {
+        LeakageCurrent p = points[i];
+        if (p == null) {
+            return List.of(CsvTable.cell(bias[i]), "", "", "", "", "", status[i]);
+        }
+        return List.of(CsvTable.cell(bias[i]), CsvTable.cell(p.totalAPerCm2()), CsvTable.cell(p.thermionicAPerCm2()),
+                CsvTable.cell(p.tunnellingAPerCm2()), CsvTable.cell(p.pooleFrenkelAPerCm2()),
+                CsvTable.cell(p.barrierTopEv()), status[i]);
+    }
+}
