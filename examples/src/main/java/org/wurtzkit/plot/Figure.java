@@ -131,16 +131,43 @@ public final class Figure {
 
     /** @return the figure drawn into a new image of {@link #width()} by {@link #height()} pixels */
     public BufferedImage image() {
-        BufferedImage img = new BufferedImage(width(), height(), BufferedImage.TYPE_INT_RGB);
+        return render(width(), height(), this::paint);
+    }
+
+    /**
+     * Draws into a new anti-aliased RGB image: the one rendering path of the plotting package.
+     *
+     * @param width   pixels
+     * @param height  pixels
+     * @param painter what to draw, with the origin at the top left
+     * @return the image
+     */
+    static BufferedImage render(int width, int height, java.util.function.Consumer<Graphics2D> painter) {
+        BufferedImage img = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            paint(g);
+            painter.accept(g);
         } finally {
             g.dispose();
         }
         return img;
+    }
+
+    /**
+     * Writes an image as PNG.
+     *
+     * @param image the image
+     * @param file  the file, replaced if it exists
+     * @return the file
+     * @throws IOException from the file system
+     */
+    static Path writePng(BufferedImage image, Path file) throws IOException {
+        if (!ImageIO.write(image, "png", file.toFile())) {
+            throw new IOException("no PNG writer in this JDK");
+        }
+        return file;
     }
 
     /**
@@ -151,10 +178,7 @@ public final class Figure {
      * @throws IOException from the file system
      */
     public Path writePng(Path file) throws IOException {
-        if (!ImageIO.write(image(), "png", file.toFile())) {
-            throw new IOException("no PNG writer in this JDK");
-        }
-        return file;
+        return writePng(image(), file);
     }
 
     /**

@@ -10,8 +10,6 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
-import javax.imageio.ImageIO;
-import org.knowm.xchart.BitmapEncoder;
 import org.knowm.xchart.CategoryChart;
 import org.knowm.xchart.CategoryChartBuilder;
 import org.knowm.xchart.CategorySeries;
@@ -89,26 +87,23 @@ public final class TolerancePlot {
         if (panels.isEmpty()) {
             throw Require.invalid("panels", "[]", "at least one (add a histogram or the ranking)");
         }
-        int w = 0;
-        int h = 0;
-        for (Chart<?, ?> c : panels) {
-            w += c.getWidth();
-            h = Math.max(h, c.getHeight());
-        }
-        BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
-        Graphics2D g = img.createGraphics();
-        try {
+        int w = panels.stream().mapToInt(Chart::getWidth).sum();
+        int h = panels.stream().mapToInt(Chart::getHeight).max().orElseThrow();
+        return Figure.render(w, h, g -> {
             g.setColor(Color.WHITE);
             g.fillRect(0, 0, w, h);
             int x = 0;
             for (Chart<?, ?> c : panels) {
-                g.drawImage(BitmapEncoder.getBufferedImage(c), x, 0, null);
+                Graphics2D pg = (Graphics2D) g.create();
+                try {
+                    pg.translate(x, 0);
+                    c.paint(pg, c.getWidth(), c.getHeight());
+                } finally {
+                    pg.dispose();
+                }
                 x += c.getWidth();
             }
-        } finally {
-            g.dispose();
-        }
-        return img;
+        });
     }
 
     /**
@@ -117,10 +112,7 @@ public final class TolerancePlot {
      * @throws IOException if it cannot be written
      */
     public Path writePng(Path file) throws IOException {
-        if (!ImageIO.write(image(), "png", file.toFile())) {
-            throw new IOException("no PNG writer in this JDK");
-        }
-        return file;
+        return Figure.writePng(image(), file);
     }
 
     /** A histogram of the independent samples of one output, with mean and 5 % / 95 % quantiles. */
