@@ -47,7 +47,13 @@ public sealed interface BandAlignment permits BandAlignment.ValenceBandTable, Ba
      * @param fraction f in [0, 1]
      */
     record ConductionBandFraction(double fraction) implements BandAlignment {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param fraction f in [0, 1]
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public ConductionBandFraction {
             Require.inRange("conduction-band offset fraction", fraction, 0, 1);
         }

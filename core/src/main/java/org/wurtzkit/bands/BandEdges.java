@@ -9,7 +9,14 @@ import org.wurtzkit.errors.Require;
  * @param valenceEv    E_v (eV)
  */
 public record BandEdges(double conductionEv, double valenceEv) {
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param conductionEv E_c (eV)
+     * @param valenceEv    E_v (eV)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public BandEdges {
         Require.finite("conduction-band edge (eV)", conductionEv);
         Require.finite("valence-band edge (eV)", valenceEv);

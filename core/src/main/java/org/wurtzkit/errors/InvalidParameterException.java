@@ -10,11 +10,17 @@ package org.wurtzkit.errors;
  */
 public class InvalidParameterException extends IllegalArgumentException implements WurtzkitError {
     private static final long serialVersionUID = 1L;
+    /** The parameter's name as the user knows it; part of the serialized form. */
     private final String parameter;
+    /** The offending value, as text; part of the serialized form. */
     private final String value;
+    /** The allowed range, as text; part of the serialized form. */
     private final String allowedRange;
 
     /**
+     * Creates the exception; its message reads
+     * {@code "<parameter> = <value> is outside the allowed range <allowedRange>"}.
+     *
      * @param parameter    the parameter's name as the user knows it
      * @param value        the offending value, as text
      * @param allowedRange the allowed range, as text (e.g. "[0, 1]" or "finite and > 0")

@@ -7,9 +7,12 @@ package org.wurtzkit.errors;
  */
 public class WurtzkitException extends RuntimeException implements WurtzkitError {
     private static final long serialVersionUID = 1L;
+    /** The kind of failure; part of the serialized form. */
     private final ErrorKind kind;
 
     /**
+     * Creates an exception of the given kind.
+     *
      * @param kind    the kind of failure
      * @param message a complete English message
      */
@@ -19,6 +22,8 @@ public class WurtzkitException extends RuntimeException implements WurtzkitError
     }
 
     /**
+     * Creates an exception of the given kind that wraps the failure behind it.
+     *
      * @param kind    the kind of failure
      * @param message a complete English message
      * @param cause   the underlying failure

@@ -18,7 +18,18 @@ import org.wurtzkit.errors.Require;
  */
 public record AlloyBowing(Bowing gapAlGaN, Bowing gapInGaN, Bowing gapInAlN, Bowing polarizationAlGaN,
         Bowing polarizationInGaN, Bowing polarizationInAlN) {
-    /** Validates that all six are present. */
+    /**
+     * Creates the record and checks that all six are present.
+     *
+     * @param gapAlGaN          AlGaN gap bowing (eV)
+     * @param gapInGaN          InGaN gap bowing (eV)
+     * @param gapInAlN          InAlN gap bowing (eV)
+     * @param polarizationAlGaN AlGaN spontaneous-polarization bowing (C/m&sup2;)
+     * @param polarizationInGaN InGaN spontaneous-polarization bowing (C/m&sup2;)
+     * @param polarizationInAlN InAlN spontaneous-polarization bowing (C/m&sup2;)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public AlloyBowing {
         Require.nonNull("AlGaN gap bowing", gapAlGaN);
         Require.nonNull("InGaN gap bowing", gapInGaN);

@@ -44,7 +44,15 @@ public record BandGap(double gap0KEv, double alphaEvPerK, double betaK, PerBinar
      * @param bowingEv  the bowing term sum b_ij x_i x_j (eV)
      */
     public record PerBinary(double[] fractions, BandGap[] binaries, double bowingEv) {
-        /** Copies and validates. */
+        /**
+         * Creates the record with copies of both arrays, after checking that they match in length.
+         *
+         * @param fractions the binaries' fractions (sum 1)
+         * @param binaries  the binaries' gaps (one Varshni law each)
+         * @param bowingEv  the bowing term sum b_ij x_i x_j (eV)
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public PerBinary {
             Require.nonNull("binary fractions", fractions);
             Require.nonNull("binary gaps", binaries);
@@ -57,11 +65,13 @@ public record BandGap(double gap0KEv, double alphaEvPerK, double betaK, PerBinar
             Require.finite("gap bowing term (eV)", bowingEv);
         }
 
+        /** {@return a copy of the binaries' fractions (sum 1)} */
         @Override
         public double[] fractions() {
             return fractions.clone();
         }
 
+        /** {@return a copy of the binaries' gaps, one Varshni law each, in the order of the fractions} */
         @Override
         public BandGap[] binaries() {
             return binaries.clone();

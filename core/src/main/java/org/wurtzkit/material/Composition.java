@@ -20,7 +20,14 @@ public record Composition(double aluminium, double indium) {
     /** Binary InN. */
     public static final Composition INN = new Composition(0, 1);
 
-    /** Validates the fractions. */
+    /**
+     * Creates the record and checks the fractions.
+     *
+     * @param aluminium Al fraction x
+     * @param indium    In fraction y
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Composition {
         check("Al fraction x", aluminium);
         check("In fraction y", indium);
@@ -39,12 +46,22 @@ public record Composition(double aluminium, double indium) {
         }
     }
 
-    /** @param x Al fraction in [0, 1] @return Al<sub>x</sub>Ga<sub>1-x</sub>N */
+    /**
+     * Returns the composition of the ternary Al<sub>x</sub>Ga<sub>1-x</sub>N.
+     *
+     * @param x Al fraction in [0, 1]
+     * @return Al<sub>x</sub>Ga<sub>1-x</sub>N
+     */
     public static Composition alGaN(double x) {
         return new Composition(x, 0);
     }
 
-    /** @param y In fraction in [0, 1] @return In<sub>y</sub>Ga<sub>1-y</sub>N */
+    /**
+     * Returns the composition of the ternary In<sub>y</sub>Ga<sub>1-y</sub>N.
+     *
+     * @param y In fraction in [0, 1]
+     * @return In<sub>y</sub>Ga<sub>1-y</sub>N
+     */
     public static Composition inGaN(double y) {
         return new Composition(0, y);
     }

@@ -19,7 +19,14 @@ public record PolarizationModel(Spontaneous spontaneous, Piezoelectric piezoelec
     public static final PolarizationModel NONLINEAR = new PolarizationModel(Spontaneous.BOWING,
             Piezoelectric.NONLINEAR);
 
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param spontaneous   spontaneous-polarization model
+     * @param piezoelectric piezoelectric model
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public PolarizationModel {
         Require.nonNull("spontaneous polarization model", spontaneous);
         Require.nonNull("piezoelectric polarization model", piezoelectric);

@@ -10,7 +10,14 @@ import java.util.List;
  * @param sources the sources of every number used (never empty)
  */
 public record Provenance(String rule, List<Source> sources) {
-    /** Copies the list. */
+    /**
+     * Creates the record; copies the list.
+     *
+     * @param rule    e.g. "tabulated", "Vegard's law", "Vegard's law with bowing b = 0.7 eV"
+     * @param sources the sources of every number used (never empty)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Provenance {
         org.wurtzkit.errors.Require.nonNull("provenance rule", rule);
         org.wurtzkit.errors.Require.nonNull("provenance sources", sources);

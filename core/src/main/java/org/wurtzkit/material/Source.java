@@ -10,7 +10,15 @@ import org.wurtzkit.errors.Require;
  * @param note     how the value was taken (e.g. "from memory, check against the original"); may be empty
  */
 public record Source(String key, String citation, String note) {
-    /** Validates that key and citation are present. */
+    /**
+     * Creates the record and checks that key and citation are present.
+     *
+     * @param key      short key used in data files, e.g. "VM03"
+     * @param citation full citation: authors, journal, volume, page, year
+     * @param note     how the value was taken (e.g. "from memory, check against the original"); may be empty
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Source {
         Require.nonNull("source key", key);
         Require.nonNull("source citation", citation);

@@ -25,7 +25,14 @@ import org.wurtzkit.units.Decimals;
  */
 public record Polarization(double spontaneous, double piezoelectric) {
 
-    /** Validates: both components finite. */
+    /**
+     * Creates the record and checks that both components are finite.
+     *
+     * @param spontaneous   P_sp along [0001] (C/m&sup2;)
+     * @param piezoelectric P_pz along [0001] (C/m&sup2;)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Polarization {
         org.wurtzkit.errors.Require.finite("spontaneous polarization (C/m^2)", spontaneous);
         org.wurtzkit.errors.Require.finite("piezoelectric polarization (C/m^2)", piezoelectric);

@@ -1,6 +1,6 @@
 /**
  * Spontaneous and piezoelectric polarization of strained layers. A
- * {@link org.wurtzkit.polarization.PolarizationModel} chooses linear or bowed spontaneous
+ * {@link org.wurtzkit.material.PolarizationModel} chooses linear or bowed spontaneous
  * polarization and a piezoelectric part linear in strain or nonlinear (F. Bernardini and
  * V. Fiorentini, Phys. Rev. B 64, 085207 (2001)); the default comes from the parameter set.
  * {@link org.wurtzkit.polarization.Polarization} holds the components along [0001] in C/m<sup>2</sup>

@@ -31,7 +31,13 @@ public record CriticalThickness(double alphaDegrees, double lambdaDegrees) imple
     /** The default geometry, alpha = lambda = 60 degrees. */
     public static final CriticalThickness MATTHEWS_BLAKESLEE_60 = new CriticalThickness(60, 60);
 
-    /** Validates the angles. */
+    /**
+     * Creates the record and checks the angles.
+     *
+     * @param alphaDegrees  angle between dislocation line and Burgers vector (degrees), in (0, 90]
+     * @param lambdaDegrees angle between slip direction and interface normal (degrees), in [0, 90)
+     * @throws org.wurtzkit.errors.InvalidParameterException if an angle is NaN or outside its range
+     */
     public CriticalThickness {
         if (!(alphaDegrees > 0 && alphaDegrees <= 90)) {
             throw new org.wurtzkit.errors.InvalidParameterException("dislocation angle alpha (degrees)",

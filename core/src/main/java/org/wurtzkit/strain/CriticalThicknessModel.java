@@ -92,7 +92,12 @@ public sealed interface CriticalThicknessModel
          */
         public static final ChannelCracking EINFELDT_2000 = new ChannelCracking(9);
 
-        /** Validates Gamma. */
+        /**
+         * Creates the record and checks Gamma.
+         *
+         * @param fractureResistanceJPerM2 Gamma (J/m&sup2;), in (0, 1000]
+         * @throws org.wurtzkit.errors.InvalidParameterException if Gamma is NaN or outside (0, 1000]
+         */
         public ChannelCracking {
             if (!(fractureResistanceJPerM2 > 0 && fractureResistanceJPerM2 <= 1000)) {
                 throw new org.wurtzkit.errors.InvalidParameterException("fracture resistance Gamma (J/m^2)",
@@ -142,7 +147,14 @@ public sealed interface CriticalThicknessModel
      * @param cracking the fracture model for layers under tension
      */
     record CPlaneWurtzite(CriticalThicknessModel slip, ChannelCracking cracking) implements CriticalThicknessModel {
-        /** Validates the parts. */
+        /**
+         * Creates the record and checks the parts.
+         *
+         * @param slip     the dislocation model for compressed layers
+         * @param cracking the fracture model for layers under tension
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public CPlaneWurtzite {
             org.wurtzkit.errors.Require.nonNull("slip model", slip);
             org.wurtzkit.errors.Require.nonNull("cracking model", cracking);

@@ -21,7 +21,14 @@ public record Strain(double xx, double zz) {
     /** No strain. */
     public static final Strain NONE = new Strain(0, 0);
 
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param xx in-plane strain eps_xx = eps_yy
+     * @param zz strain along c, eps_zz
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Strain {
         Require.finite("strain eps_xx", xx);
         Require.finite("strain eps_zz", zz);

@@ -22,7 +22,13 @@ public sealed interface BottomBoundary permits BottomBoundary.ZeroField, BottomB
      * @param conductionAboveFermiEv E_c - E_F at the bottom (eV), in [-1, 7]
      */
     record FixedFermiLevel(double conductionAboveFermiEv) implements BottomBoundary {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param conductionAboveFermiEv E_c - E_F at the bottom (eV), in [-1, 7]
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public FixedFermiLevel {
             Require.inRange("E_c - E_F at the bottom (eV)", conductionAboveFermiEv, -1, 7);
         }

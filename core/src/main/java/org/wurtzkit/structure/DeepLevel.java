@@ -22,7 +22,15 @@ public record DeepLevel(Kind kind, double densityPerM3, double energyBelowConduc
         ACCEPTOR_LIKE
     }
 
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param kind                    donor-like or acceptor-like
+     * @param densityPerM3            density (m^-3), &ge; 0
+     * @param energyBelowConductionEv E_c - E_T (eV), &ge; 0; must lie inside the gap of the host
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public DeepLevel {
         Require.nonNull("deep level kind", kind);
         Require.inRange("deep level density (m^-3)", densityPerM3, 0, Dopant.MAX_DENSITY_PER_M3);

@@ -15,7 +15,17 @@ import org.wurtzkit.units.Units;
  */
 public record DeltaDoping(Dopant.Kind kind, double sheetDensityPerM2, double ionizationEnergyEv,
         double offsetFromLayerTop) {
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param kind               donor or acceptor
+     * @param sheetDensityPerM2  sheet density (m^-2), &ge; 0
+     * @param ionizationEnergyEv ionization energy (eV), in [0, 2]
+     * @param offsetFromLayerTop distance of the sheet below the top of its layer (m), &ge; 0 and
+     *                                                     not beyond the layer's thickness (checked by the layer)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public DeltaDoping {
         Require.nonNull("delta doping kind", kind);
         Require.inRange("delta sheet density (m^-2)", sheetDensityPerM2, 0, 1e19);

@@ -26,7 +26,16 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
     /** Largest accepted dopant density (m^-3): 1e22 cm^-3. */
     public static final double MAX_DENSITY_PER_M3 = 1e28;
 
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param kind               donor or acceptor
+     * @param densityPerM3       density (m^-3), &ge; 0
+     * @param ionizationEnergyEv ionization energy (eV), in [0, 2]
+     * @param degeneracy         degeneracy factor g, &gt; 0 (2 for donors, 4 for acceptors is usual)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Dopant {
         Require.nonNull("dopant kind", kind);
         Require.inRange("dopant density (m^-3)", densityPerM3, 0, MAX_DENSITY_PER_M3);

@@ -31,7 +31,19 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
     /** Largest accepted layer thickness (m). */
     public static final double MAX_THICKNESS = 1e-3;
 
-    /** Validates and copies the lists. */
+    /**
+     * Creates the record and checks and copies the lists.
+     *
+     * @param name        a name for reports (need not be unique)
+     * @param material    what the layer is made of
+     * @param thickness   thickness (m), &gt; 0 and at most 1 mm
+     * @param dopants     shallow dopants (uniform)
+     * @param deepLevels  deep levels (uniform)
+     * @param deltaSheets delta-doping sheets inside the layer
+     * @param relaxation  relaxation r in [0, 1] with respect to the layer below (0 = pseudomorphic)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Layer {
         Require.nonNull("layer name", name);
         Require.nonNull("material of layer \"" + name + "\"", material);
@@ -82,33 +94,58 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
         return new Layer(name, new LayerMaterial.Graded(bottom, top), thickness, List.of(), List.of(), List.of(), 0);
     }
 
-    /** @param d a dopant @return a copy with the dopant added */
+    /**
+     * Returns a copy of this layer with one more dopant.
+     *
+     * @param d a dopant
+     * @return a copy with the dopant added
+     */
     public Layer withDopant(Dopant d) {
         List<Dopant> l = new ArrayList<>(dopants);
         l.add(Require.nonNull("dopant", d));
         return new Layer(name, material, thickness, l, deepLevels, deltaSheets, relaxation);
     }
 
-    /** @param d a deep level @return a copy with the level added */
+    /**
+     * Returns a copy of this layer with one more deep level.
+     *
+     * @param d a deep level
+     * @return a copy with the level added
+     */
     public Layer withDeepLevel(DeepLevel d) {
         List<DeepLevel> l = new ArrayList<>(deepLevels);
         l.add(Require.nonNull("deep level", d));
         return new Layer(name, material, thickness, dopants, l, deltaSheets, relaxation);
     }
 
-    /** @param d a delta sheet @return a copy with the sheet added */
+    /**
+     * Returns a copy of this layer with one more delta-doped sheet.
+     *
+     * @param d a delta sheet
+     * @return a copy with the sheet added
+     */
     public Layer withDeltaDoping(DeltaDoping d) {
         List<DeltaDoping> l = new ArrayList<>(deltaSheets);
         l.add(Require.nonNull("delta doping", d));
         return new Layer(name, material, thickness, dopants, deepLevels, l, relaxation);
     }
 
-    /** @param r relaxation in [0, 1] @return a copy with that relaxation */
+    /**
+     * Returns a copy of this layer with another degree of strain relaxation.
+     *
+     * @param r relaxation in [0, 1]
+     * @return a copy with that relaxation
+     */
     public Layer withRelaxation(double r) {
         return new Layer(name, material, thickness, dopants, deepLevels, deltaSheets, r);
     }
 
-    /** @param t thickness (m) @return a copy with that thickness */
+    /**
+     * Returns a copy of this layer with another thickness.
+     *
+     * @param t thickness (m)
+     * @return a copy with that thickness
+     */
     public Layer withThickness(double t) {
         return new Layer(name, material, t, dopants, deepLevels, deltaSheets, relaxation);
     }

@@ -27,7 +27,13 @@ public sealed interface LayerMaterial permits LayerMaterial.Alloy, LayerMaterial
      * @param composition the alloy
      */
     record Alloy(Composition composition) implements LayerMaterial {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param composition the alloy
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Alloy {
             Require.nonNull("layer composition", composition);
         }
@@ -55,7 +61,14 @@ public sealed interface LayerMaterial permits LayerMaterial.Alloy, LayerMaterial
      * @param top    composition at the top of the layer
      */
     record Graded(Composition bottom, Composition top) implements LayerMaterial {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param bottom composition at the bottom of the layer
+         * @param top    composition at the top of the layer
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Graded {
             Require.nonNull("graded layer bottom composition", bottom);
             Require.nonNull("graded layer top composition", top);
@@ -84,7 +97,13 @@ public sealed interface LayerMaterial permits LayerMaterial.Alloy, LayerMaterial
      * @param material the material
      */
     record Custom(WurtziteMaterial material) implements LayerMaterial {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param material the material
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Custom {
             Require.nonNull("layer material", material);
         }

@@ -137,12 +137,22 @@ public final class Structure {
         return b;
     }
 
-    /** @param t temperature (K) @return a copy at that temperature */
+    /**
+     * Returns a copy of this structure at another lattice temperature.
+     *
+     * @param t temperature (K)
+     * @return a copy at that temperature
+     */
     public Structure withTemperature(double t) {
         return toBuilder().temperature(t).build();
     }
 
-    /** @param boundary the new top boundary @return a copy with it */
+    /**
+     * Returns a copy of this structure with another top boundary.
+     *
+     * @param boundary the new top boundary
+     * @return a copy with it
+     */
     public Structure withTop(TopBoundary boundary) {
         Builder b = toBuilder();
         b.top = Require.nonNull("top boundary", boundary);
@@ -415,7 +425,12 @@ public final class Structure {
             return this;
         }
 
-        /** @param p polarity (default metal-face) @return this builder */
+        /**
+         * Sets the polarity of the stack.
+         *
+         * @param p polarity (default metal-face)
+         * @return this builder
+         */
         public Builder polarity(Polarity p) {
             this.polarity = Require.nonNull("polarity", p);
             return this;
@@ -452,7 +467,12 @@ public final class Structure {
             return this;
         }
 
-        /** @param t temperature in (0, 2000] K (default 300 K) @return this builder */
+        /**
+         * Sets the lattice temperature.
+         *
+         * @param t temperature in (0, 2000] K (default 300 K)
+         * @return this builder
+         */
         public Builder temperature(double t) {
             this.temperatureK = BandGap.checkTemperature(t);
             return this;
@@ -476,7 +496,12 @@ public final class Structure {
             return this;
         }
 
-        /** @param boundary the bottom boundary (default zero field) @return this builder */
+        /**
+         * Sets the boundary condition below the deepest layer.
+         *
+         * @param boundary the bottom boundary (default zero field)
+         * @return this builder
+         */
         public Builder bottom(BottomBoundary boundary) {
             this.bottom = Require.nonNull("bottom boundary", boundary);
             return this;

@@ -21,13 +21,25 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
      * @param biasV           gate bias with respect to the bottom contact (V), in [-100, 20]
      */
     record Schottky(double barrierHeightEv, double biasV) implements TopBoundary {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param barrierHeightEv phi_B (eV), in [0, 6]
+         * @param biasV           gate bias with respect to the bottom contact (V), in [-100, 20]
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Schottky {
             Require.inRange("Schottky barrier height (eV)", barrierHeightEv, 0, 6);
             Require.inRange("gate bias (V)", biasV, -100, 20);
         }
 
-        /** @param v bias (V) @return a copy at that bias */
+        /**
+         * Returns a copy of this gate contact at another bias.
+         *
+         * @param v bias (V)
+         * @return a copy at that bias
+         */
         public Schottky withBias(double v) {
             return new Schottky(barrierHeightEv, v);
         }
@@ -60,7 +72,14 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
      * @param donorDensityPerM2    surface donor density (m^-2), in [0, 1e20]
      */
     record FreeSurface(double donorEnergyBelowEcEv, double donorDensityPerM2) implements TopBoundary {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param donorEnergyBelowEcEv E_c - E_D at the surface (eV), in [0, 6]
+         * @param donorDensityPerM2    surface donor density (m^-2), in [0, 1e20]
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public FreeSurface {
             Require.inRange("surface donor energy below E_c (eV)", donorEnergyBelowEcEv, 0, 6);
             Require.inRange("surface donor density (m^-2)", donorDensityPerM2, 0, 1e20);

@@ -19,32 +19,62 @@ public final class Units {
     /** Farads per square metre in one uF/cm^2 (capacitance per area). */
     public static final double UF_PER_CM2 = 1e-2;
 
-    /** @param nm length (nm) @return length (m) */
+    /**
+     * Converts a length from nanometres to metres.
+     *
+     * @param nm length (nm)
+     * @return length (m)
+     */
     public static double nmToM(double nm) {
         return nm * NM;
     }
 
-    /** @param m length (m) @return length (nm) */
+    /**
+     * Converts a length from metres to nanometres.
+     *
+     * @param m length (m)
+     * @return length (nm)
+     */
     public static double mToNm(double m) {
         return m / NM;
     }
 
-    /** @param perCm2 areal density (cm^-2) @return areal density (m^-2) */
+    /**
+     * Converts an areal density from cm<sup>-2</sup> to m<sup>-2</sup>.
+     *
+     * @param perCm2 areal density (cm^-2)
+     * @return areal density (m^-2)
+     */
     public static double perCm2ToPerM2(double perCm2) {
         return perCm2 * 1e4;
     }
 
-    /** @param perM2 areal density (m^-2) @return areal density (cm^-2) */
+    /**
+     * Converts an areal density from m<sup>-2</sup> to cm<sup>-2</sup>.
+     *
+     * @param perM2 areal density (m^-2)
+     * @return areal density (cm^-2)
+     */
     public static double perM2ToPerCm2(double perM2) {
         return perM2 * 1e-4;
     }
 
-    /** @param perCm3 volume density (cm^-3) @return volume density (m^-3) */
+    /**
+     * Converts a volume density from cm<sup>-3</sup> to m<sup>-3</sup>.
+     *
+     * @param perCm3 volume density (cm^-3)
+     * @return volume density (m^-3)
+     */
     public static double perCm3ToPerM3(double perCm3) {
         return perCm3 * 1e6;
     }
 
-    /** @param perM3 volume density (m^-3) @return volume density (cm^-3) */
+    /**
+     * Converts a volume density from m<sup>-3</sup> to cm<sup>-3</sup>.
+     *
+     * @param perM3 volume density (m^-3)
+     * @return volume density (cm^-3)
+     */
     public static double perM3ToPerCm3(double perM3) {
         return perM3 * 1e-6;
     }

@@ -75,7 +75,12 @@ public final class BandDiagramPlot {
         return this;
     }
 
-    /** @param text the title @return this plot */
+    /**
+     * Sets the title over the diagram.
+     *
+     * @param text the title
+     * @return this plot
+     */
     public BandDiagramPlot title(String text) {
         this.title = Require.nonNull("title", text);
         return this;
@@ -118,7 +123,12 @@ public final class BandDiagramPlot {
         return this;
     }
 
-    /** @param show whether E_v is drawn (default true) @return this plot */
+    /**
+     * Chooses whether the valence-band edge is drawn.
+     *
+     * @param show whether E_v is drawn (default true)
+     * @return this plot
+     */
     public BandDiagramPlot valenceBand(boolean show) {
         this.valenceBand = show;
         return this;

@@ -90,26 +90,47 @@ public final class DesignMapPlot {
         return a.unit().isEmpty() ? a.name() : a.name() + " (" + a.unit() + ")";
     }
 
-    /** @param x title of the x axis, with unit @param y title of the y axis @return this plot */
+    /**
+     * Sets the titles of both axes.
+     *
+     * @param x title of the x axis, with unit
+     * @param y title of the y axis
+     * @return this plot
+     */
     public DesignMapPlot axes(String x, String y) {
         this.xTitle = Require.nonNull("x title", x);
         this.yTitle = Require.nonNull("y title", y);
         return this;
     }
 
-    /** @param label what the values are, with unit, e.g. "n_s (10¹³ cm⁻²)" @return this plot */
+    /**
+     * Names the mapped quantity; the colour scale is labelled with it.
+     *
+     * @param label what the values are, with unit, e.g. "n_s (10¹³ cm⁻²)"
+     * @return this plot
+     */
     public DesignMapPlot quantity(String label) {
         this.quantity = Require.nonNull("quantity", label);
         return this;
     }
 
-    /** @param text what every panel title ends with, e.g. the wafer family @return this plot */
+    /**
+     * Sets the text every panel title ends with.
+     *
+     * @param text what every panel title ends with, e.g. the wafer family
+     * @return this plot
+     */
     public DesignMapPlot title(String text) {
         this.subject = Require.nonNull("title", text);
         return this;
     }
 
-    /** @param name what the first map is, e.g. "self-consistent solver" @return this plot */
+    /**
+     * Names the first map; its panel title begins with this name (default "map").
+     *
+     * @param name what the first map is, e.g. "self-consistent solver"
+     * @return this plot
+     */
     public DesignMapPlot name(String name) {
         this.firstName = Require.nonNull("name", name);
         return this;
@@ -129,20 +150,38 @@ public final class DesignMapPlot {
         return this;
     }
 
-    /** @param label legend text @param x position @param y position @return this plot */
+    /**
+     * Marks one design point on every panel, with a legend entry.
+     *
+     * @param label legend text
+     * @param x     position along the x axis, in the units of the x values; finite
+     * @param y     position along the y axis, in the units of the y values; finite
+     * @return this plot
+     */
     public DesignMapPlot mark(String label, double x, double y) {
         markNames.add(Require.nonNull("label", label));
         marks.add(new double[] {Require.finite("x", x), Require.finite("y", y)});
         return this;
     }
 
-    /** @param count about how many colour bands (2 to 20, default 9) @return this plot */
+    /**
+     * Sets about how many colour bands the value range is cut into.
+     *
+     * @param count about how many colour bands (2 to 20, default 9)
+     * @return this plot
+     */
     public DesignMapPlot bands(int count) {
         this.bands = Require.inRange("bands", count, 2, 20);
         return this;
     }
 
-    /** @param widthPx width of each panel @param heightPx height @return this plot */
+    /**
+     * Sets the size of each panel.
+     *
+     * @param widthPx  width of each panel (pixels)
+     * @param heightPx height of each panel (pixels)
+     * @return this plot
+     */
     public DesignMapPlot panelSize(int widthPx, int heightPx) {
         this.panelWidth = Require.inRange("width", widthPx, 300, 20_000);
         this.panelHeight = Require.inRange("height", heightPx, 200, 20_000);

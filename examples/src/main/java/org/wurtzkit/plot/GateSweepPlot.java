@@ -47,7 +47,12 @@ public final class GateSweepPlot {
         return new GateSweepPlot(sweep);
     }
 
-    /** @param m the analytic model of the same stack, drawn beside the solver @return this plot */
+    /**
+     * Adds the closed-form charge-balance model of the same stack, drawn beside the solver.
+     *
+     * @param m the analytic model of the same stack, drawn beside the solver
+     * @return this plot
+     */
     public GateSweepPlot analyticModel(ChargeBalanceModel m) {
         this.model = Require.nonNull("model", m);
         return this;
@@ -64,7 +69,12 @@ public final class GateSweepPlot {
         return this;
     }
 
-    /** @param text what the panels' titles begin with, e.g. the wafer's name @return this plot */
+    /**
+     * Sets the text the panel titles begin with.
+     *
+     * @param text what the panels' titles begin with, e.g. the wafer's name
+     * @return this plot
+     */
     public GateSweepPlot title(String text) {
         this.subject = Require.nonNull("title", text);
         return this;

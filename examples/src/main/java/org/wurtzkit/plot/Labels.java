@@ -69,7 +69,12 @@ public final class Labels {
         return sb.toString();
     }
 
-    /** @return "10" with the exponent as superscript, e.g. 10&sup1;&sup3; */
+    /**
+     * Writes a power of ten with a superscript exponent.
+     *
+     * @param exponent the exponent, e.g. 13 (a minus sign is kept)
+     * @return "10" with the exponent as superscript, e.g. 10&sup1;&sup3;
+     */
     public static String powerOfTen(int exponent) {
         return "10" + superscript(Integer.toString(exponent));
     }
@@ -88,17 +93,34 @@ public final class Labels {
         return true;
     }
 
-    /** @return v with n significant digits */
+    /**
+     * Formats a number to a given count of significant digits (Locale.ROOT, {@code %g}).
+     *
+     * @param v the number
+     * @param n significant digits
+     * @return v with n significant digits
+     */
     public static String sig(double v, int n) {
         return String.format(Locale.ROOT, "%." + n + "g", v);
     }
 
-    /** @return v with d decimals */
+    /**
+     * Formats a number with a fixed count of decimals (Locale.ROOT).
+     *
+     * @param v the number
+     * @param d decimals after the point
+     * @return v with d decimals
+     */
     public static String fixed(double v, int d) {
         return String.format(Locale.ROOT, "%." + d + "f", v);
     }
 
-    /** @return v to six significant digits without trailing zeros, e.g. "2", "22", "1800", "2.5" */
+    /**
+     * Formats a number for a label: six significant digits, no trailing zeros, no exponent.
+     *
+     * @param v the number
+     * @return v to six significant digits without trailing zeros, e.g. "2", "22", "1800", "2.5"
+     */
     public static String trimmed(double v) {
         return new BigDecimal(sig(v, 6)).stripTrailingZeros().toPlainString();
     }

@@ -67,25 +67,46 @@ public final class SpreadPlot {
         return new SpreadPlot(xs, spreads);
     }
 
-    /** @param title the x-axis title, with unit @return this plot */
+    /**
+     * Sets the title of the x axis.
+     *
+     * @param title the x-axis title, with unit
+     * @return this plot
+     */
     public SpreadPlot xTitle(String title) {
         this.xTitle = Require.nonNull("x title", title);
         return this;
     }
 
-    /** @param text what the panel titles end with, e.g. the stack @return this plot */
+    /**
+     * Sets the text the panel titles end with.
+     *
+     * @param text what the panel titles end with, e.g. the stack
+     * @return this plot
+     */
     public SpreadPlot title(String text) {
         this.subject = Require.nonNull("title", text);
         return this;
     }
 
-    /** @param label how a parameter set's name is written in the legend @return this plot */
+    /**
+     * Sets how a parameter set's name is written in the legend.
+     *
+     * @param label how a parameter set's name is written in the legend
+     * @return this plot
+     */
     public SpreadPlot setLabels(Function<String, String> label) {
         this.setLabel = Require.nonNull("label", label);
         return this;
     }
 
-    /** @param widthPx width of each panel @param heightPx height @return this plot */
+    /**
+     * Sets the size of each panel.
+     *
+     * @param widthPx  width of each panel (pixels)
+     * @param heightPx height of each panel (pixels)
+     * @return this plot
+     */
     public SpreadPlot panelSize(int widthPx, int heightPx) {
         this.panelWidth = Require.inRange("width", widthPx, 300, 20_000);
         this.panelHeight = Require.inRange("height", heightPx, 200, 20_000);

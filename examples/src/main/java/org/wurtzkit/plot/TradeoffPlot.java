@@ -78,13 +78,24 @@ public final class TradeoffPlot {
         return new TradeoffPlot(xTitle, x);
     }
 
-    /** @param text title over the top panel @return this plot */
+    /**
+     * Sets the title over the top panel.
+     *
+     * @param text title over the top panel
+     * @return this plot
+     */
     public TradeoffPlot title(String text) {
         this.title = Require.nonNull("title", text);
         return this;
     }
 
-    /** @param widthPx width of the figure @param heightPx height of each panel @return this plot */
+    /**
+     * Sets the size of the figure.
+     *
+     * @param widthPx  width of the figure (pixels)
+     * @param heightPx height of each panel (pixels)
+     * @return this plot
+     */
     public TradeoffPlot size(int widthPx, int heightPx) {
         this.width = Require.inRange("width", widthPx, 300, 20_000);
         this.panelHeight = Require.inRange("panel height", heightPx, 150, 20_000);
@@ -102,17 +113,35 @@ public final class TradeoffPlot {
         return this;
     }
 
-    /** @param name legend text @param y one value per x (NaN for a failed point) @return this plot */
+    /**
+     * Adds a series of markers to the current panel, one per x value.
+     *
+     * @param name legend text
+     * @param y    one value per x (NaN for a failed point)
+     * @return this plot
+     */
     public TradeoffPlot points(String name, double[] y) {
         return add(name, y, true);
     }
 
-    /** A dashed line without markers, e.g. a model. @param name legend text @param y one value per x @return this plot */
+    /**
+     * Adds a dashed line without markers to the current panel, e.g. a model.
+     *
+     * @param name legend text
+     * @param y    one value per x (NaN for a failed point)
+     * @return this plot
+     */
     public TradeoffPlot line(String name, double[] y) {
         return add(name, y, false);
     }
 
-    /** @param label legend text @param xValue where a vertical dotted line runs through every panel @return this plot */
+    /**
+     * Draws a vertical dotted line through every panel, with a legend entry.
+     *
+     * @param label  legend text
+     * @param xValue where a vertical dotted line runs through every panel
+     * @return this plot
+     */
     public TradeoffPlot mark(String label, double xValue) {
         markNames.add(Require.nonNull("label", label));
         marks.add(Require.finite("mark", xValue));

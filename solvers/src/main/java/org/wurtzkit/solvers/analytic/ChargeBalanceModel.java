@@ -108,7 +108,18 @@ public final class ChargeBalanceModel {
      *                             [-1, 1]
      */
     public record BarrierLayer(String name, double thickness, double relativePermittivity, double chargeBelow) {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param name                 a name for messages
+         * @param thickness            thickness (m), in (0, 1e-3]
+         * @param relativePermittivity static relative permittivity, finite and &gt; 0
+         * @param chargeBelow          S_j = P_z(channel) - P_z(this layer) (C/m&sup2;): the bound sheet
+         *                                                         charge of all interfaces between this layer and the channel, in
+         *                                                         [-1, 1]
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public BarrierLayer {
             Require.nonNull("barrier layer name", name);
             if (!(thickness > 0 && thickness <= Layer.MAX_THICKNESS)) {

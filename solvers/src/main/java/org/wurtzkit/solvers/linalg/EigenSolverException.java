@@ -10,9 +10,12 @@ import org.wurtzkit.errors.WurtzkitException;
  */
 public final class EigenSolverException extends WurtzkitException {
     private static final long serialVersionUID = 1L;
+    /** Zero-based index of the failing eigenpair, or -1; part of the serialized form. */
     private final int eigenpairIndex;
 
     /**
+     * Creates the exception for one eigenpair (or for the solve as a whole).
+     *
      * @param eigenpairIndex zero-based index of the eigenpair that failed, or -1 if the failure is
      *                       not tied to one eigenpair
      * @param message        a complete English message

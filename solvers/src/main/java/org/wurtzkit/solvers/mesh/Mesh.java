@@ -104,7 +104,12 @@ public final class Mesh {
         return nodes.length;
     }
 
-    /** @param i node index @return its depth (m) */
+    /**
+     * Returns the depth of one node.
+     *
+     * @param i node index
+     * @return its depth (m)
+     */
     public double node(int i) {
         return nodes[i];
     }
@@ -114,7 +119,12 @@ public final class Mesh {
         return nodes.clone();
     }
 
-    /** @param i cell index in [0, size - 2] @return spacing z[i+1] - z[i] (m) */
+    /**
+     * Returns the width of one cell, the spacing between two neighbouring nodes.
+     *
+     * @param i cell index in [0, size - 2]
+     * @return spacing z[i+1] - z[i] (m)
+     */
     public double spacing(int i) {
         return nodes[i + 1] - nodes[i];
     }

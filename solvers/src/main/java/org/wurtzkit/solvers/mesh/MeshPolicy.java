@@ -24,7 +24,15 @@ public record MeshPolicy(double interfaceSpacing, double growthRatio, double max
     /** The default policy: 0.1 nm at interfaces, growth 1.06, at most 50 nm. */
     public static final MeshPolicy DEFAULT = new MeshPolicy(0.1 * Units.NM, 1.06, 50 * Units.NM);
 
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param interfaceSpacing spacing h0 at layer boundaries (m), in [1e-12, 1e-6]
+     * @param growthRatio      g, in (1, 2]
+     * @param maxSpacing       h_max (m), &ge; interfaceSpacing and &le; 1e-5
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public MeshPolicy {
         Require.inRange("mesh interface spacing (m)", interfaceSpacing, 1e-12, 1e-6);
         if (!(growthRatio > 1 && growthRatio <= 2)) {

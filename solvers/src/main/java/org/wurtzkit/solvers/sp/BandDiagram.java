@@ -16,7 +16,15 @@ import org.wurtzkit.units.Units;
  * @param valenceEv    E_v at each point (eV)
  */
 public record BandDiagram(double[] depth, double[] conductionEv, double[] valenceEv) {
-    /** Validates lengths and copies the arrays. */
+    /**
+     * Creates the record and checks lengths and copies the arrays.
+     *
+     * @param depth        depth of each point (m, 0 at the surface), non-decreasing
+     * @param conductionEv E_c at each point (eV)
+     * @param valenceEv    E_v at each point (eV)
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public BandDiagram {
         Require.nonNull("band-diagram depths", depth);
         Require.nonNull("band-diagram conduction-band edges", conductionEv);

@@ -14,7 +14,15 @@ import org.wurtzkit.units.Decimals;
  */
 public record ConvergenceRecord(boolean converged, int iterations, int newtonIterations, double[] residualHistory,
         String message) {
-    /** Copies the history. */
+    /**
+     * Creates the record; copies the history.
+     *
+     * @param converged        whether the tolerance was met
+     * @param iterations       outer iterations performed (0 for a purely classical solve)
+     * @param newtonIterations Newton steps summed over every Poisson solve
+     * @param residualHistory  max |phi_new - phi_old| after each outer iteration (V)
+     * @param message          why it stopped
+     */
     public ConvergenceRecord {
         residualHistory = residualHistory.clone();
     }

@@ -11,7 +11,14 @@ import org.wurtzkit.units.Units;
  * @param bottom depth of its bottom (m), &ge; top
  */
 public record DepthRange(double top, double bottom) {
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param top    depth of its top (m, 0 at the surface)
+     * @param bottom depth of its bottom (m), &ge; top
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public DepthRange {
         Require.finite("top depth of a depth range (m)", top);
         Require.finite("bottom depth of a depth range (m)", bottom);

@@ -10,7 +10,9 @@ import org.wurtzkit.errors.WurtzkitException;
 public class NotConvergedException extends WurtzkitException {
     private static final long serialVersionUID = 1L;
     private final transient ConvergenceRecord record;
+    /** Node depths of the last finite iterate (m); part of the serialized form. */
     private final double[] depth;
+    /** Electrostatic potential at those nodes (V); part of the serialized form. */
     private final double[] potential;
 
     NotConvergedException(String message, ConvergenceRecord record, double[] depth, double[] potential) {

@@ -22,7 +22,13 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
      * @param extension how far each window reaches on both sides of its interface (m), in [1 nm, 1 um]
      */
     record Automatic(double extension) implements QuantumRegion {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param extension how far each window reaches on both sides of its interface (m), in [1 nm, 1 um]
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Automatic {
             Require.inRange("quantum window extension around an interface (m)", extension, 1e-9, 1e-6);
         }
@@ -50,7 +56,13 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
      * @param windows the windows, shallowest first
      */
     record Windows(List<Window> windows) implements QuantumRegion {
-        /** Validates order and overlap. */
+        /**
+         * Creates the record and checks order and overlap.
+         *
+         * @param windows the windows, shallowest first
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Windows {
             windows = List.copyOf(windows);
             if (windows.isEmpty()) {
@@ -73,7 +85,14 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
      * @param depthBottom depth of its bottom (m), &gt; depthTop by at least 1 nm
      */
     record Window(double depthTop, double depthBottom) {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param depthTop    depth of its top (m), &ge; 0
+         * @param depthBottom depth of its bottom (m), &gt; depthTop by at least 1 nm
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Window {
             Require.nonNegative("quantum window top depth (m)", depthTop);
             Require.finite("quantum window bottom depth (m)", depthBottom);

@@ -7,6 +7,9 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * Settings of a self-consistent solve, with documented defaults ({@link #defaults()}); change one
  * with a {@code with...} method, which returns a copy.
  *
+ * <p>Physical model choices (polarization model, band line-up, strain shifts of the band edges)
+ * live on the {@link org.wurtzkit.structure.Structure}; these options are numerics only.
+ *
  * @param tolerance             convergence of the outer loop, max |delta phi| between iterations (V); default 1e-6, in [1e-12, 1e-2]
  * @param maxIterations         outer iterations allowed; default 100, in [1, 10000]
  * @param newtonTolerance       convergence of each Newton-Poisson solve, max |delta phi| (V); default 1e-9, in [1e-14, 1e-3]
@@ -17,9 +20,6 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
  * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
- *
- * <p>Physical model choices (polarization model, band line-up, strain shifts of the band edges)
- * live on the {@link org.wurtzkit.structure.Structure}; these options are numerics only.
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
         double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
@@ -28,7 +28,22 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
             QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE);
 
-    /** Validates every field. */
+    /**
+     * Creates the settings and validates every field against the range given in the class
+     * documentation.
+     *
+     * @param tolerance           convergence of the outer loop, max |delta phi| between iterations (V), in [1e-12, 1e-2]
+     * @param maxIterations       outer iterations allowed, in [1, 10000]
+     * @param newtonTolerance     convergence of each Newton-Poisson solve, max |delta phi| (V), in [1e-14, 1e-3]
+     * @param maxNewtonIterations Newton steps allowed per Poisson solve, in [1, 100000]
+     * @param maxNewtonStep       largest change of the potential at any node in one Newton step (V), in [1e-3, 10]
+     * @param mesh                mesh policy, not null
+     * @param quantumRegion       where electrons are quantum, not null
+     * @param maxSubbands         most subbands kept per window, in [1, 2000]
+     * @param subbandCutoffKT     subbands are kept up to E_F + this many kT, in [1, 200]
+     * @param holeFermiLevel      holes' quasi-Fermi level, not null
+     * @throws org.wurtzkit.errors.InvalidParameterException if a value is outside its range or null
+     */
     public SolverOptions {
         Require.inRange("tolerance (V)", tolerance, 1e-12, 1e-2);
         Require.inRange("maxIterations", maxIterations, 1, 10000);
@@ -47,61 +62,121 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         return DEFAULTS;
     }
 
-    /** @param v tolerance (V) @return a copy */
+    /**
+     * Returns a copy with another value of the outer-loop tolerance; every other setting is kept.
+     *
+     * @param v tolerance (V), in [1e-12, 1e-2]
+     * @return a copy with {@code tolerance} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
                 quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v outer iteration budget @return a copy */
+    /**
+     * Returns a copy with another value of the outer iteration budget; every other setting is kept.
+     *
+     * @param v outer iterations allowed, in [1, 10000]
+     * @return a copy with {@code maxIterations} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withMaxIterations(int v) {
         return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
                 maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v Newton tolerance (V) @return a copy */
+    /**
+     * Returns a copy with another value of the Newton-Poisson tolerance; every other setting is kept.
+     *
+     * @param v Newton tolerance (V), in [1e-14, 1e-3]
+     * @return a copy with {@code newtonTolerance} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withNewtonTolerance(double v) {
         return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
                 maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v Newton step budget per Poisson solve @return a copy */
+    /**
+     * Returns a copy with another value of the Newton step budget; every other setting is kept.
+     *
+     * @param v Newton steps allowed per Poisson solve, in [1, 100000]
+     * @return a copy with {@code maxNewtonIterations} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withMaxNewtonIterations(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
                 maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v largest Newton update (V) @return a copy */
+    /**
+     * Returns a copy with another value of the largest Newton update; every other setting is kept.
+     *
+     * @param v largest change of the potential in one Newton step (V), in [1e-3, 10]
+     * @return a copy with {@code maxNewtonStep} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withMaxNewtonStep(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
                 maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v mesh policy @return a copy */
+    /**
+     * Returns a copy with another value of the mesh policy; every other setting is kept.
+     *
+     * @param v mesh policy, not null
+     * @return a copy with {@code mesh} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
                 quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v quantum region @return a copy */
+    /**
+     * Returns a copy with another value of the quantum region; every other setting is kept.
+     *
+     * @param v where electrons are quantum, not null
+     * @return a copy with {@code quantumRegion} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withQuantumRegion(QuantumRegion v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
                 maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v most subbands per window @return a copy */
+    /**
+     * Returns a copy with another value of the subband budget; every other setting is kept.
+     *
+     * @param v most subbands kept per window, in [1, 2000]
+     * @return a copy with {@code maxSubbands} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
                 quantumRegion, v, subbandCutoffKT, holeFermiLevel);
     }
 
-    /** @param v subband cut-off above E_F in kT @return a copy */
+    /**
+     * Returns a copy with another value of the subband cut-off; every other setting is kept.
+     *
+     * @param v subband cut-off above E_F in kT, in [1, 200]
+     * @return a copy with {@code subbandCutoffKT} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
                 quantumRegion, maxSubbands, v, holeFermiLevel);
     }
 
-    /** @param v holes' quasi-Fermi level @return a copy */
+    /**
+     * Returns a copy with another value of the holes' quasi-Fermi level; every other setting is kept.
+     *
+     * @param v holes' quasi-Fermi level, not null
+     * @return a copy with {@code holeFermiLevel} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     */
     public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
                 quantumRegion, maxSubbands, subbandCutoffKT, v);

@@ -16,7 +16,17 @@ import org.wurtzkit.units.Units;
  */
 public record Subband(int window, int index, double energyEv, double[] wavefunction, double sheetDensity,
         double inPlaneMass) {
-    /** Copies the wavefunction. */
+    /**
+     * Creates the record; copies the wavefunction.
+     *
+     * @param window       index of its window
+     * @param index        0 for the ground state
+     * @param energyEv     E_k - E_F (eV)
+     * @param wavefunction psi on the full mesh (1/sqrt(m)), zero outside the window, normalised to
+     *                                             sum psi^2 w = 1 over the box widths
+     * @param sheetDensity occupation (m^-2)
+     * @param inPlaneMass  in-plane mass averaged over |psi|^2 (relative to m0)
+     */
     public Subband {
         wavefunction = wavefunction.clone();
     }

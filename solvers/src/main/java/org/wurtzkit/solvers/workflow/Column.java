@@ -12,7 +12,14 @@ import org.wurtzkit.errors.Require;
  * @param unit the unit as written in the header (may be empty), without commas, quotes or line breaks
  */
 public record Column(String name, String unit) {
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param name a name without commas, quotes or line breaks, not blank
+     * @param unit the unit as written in the header (may be empty), without commas, quotes or line breaks
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Column {
         Require.nonNull("column name", name);
         Require.nonNull("column unit", unit);

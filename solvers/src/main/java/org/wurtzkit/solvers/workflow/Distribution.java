@@ -48,7 +48,14 @@ public sealed interface Distribution permits Distribution.Normal, Distribution.U
      * @param standardDeviation standard deviation, &gt; 0
      */
     record Normal(double mean, double standardDeviation) implements Distribution {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param mean              mean, finite
+         * @param standardDeviation standard deviation, &gt; 0
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Normal {
             Require.finite("mean of a normal distribution", mean);
             Require.positive("standard deviation of a normal distribution", standardDeviation);
@@ -82,7 +89,14 @@ public sealed interface Distribution permits Distribution.Normal, Distribution.U
      * @param upper upper end, finite and &gt; lower
      */
     record Uniform(double lower, double upper) implements Distribution {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param lower lower end, finite
+         * @param upper upper end, finite and &gt; lower
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public Uniform {
             Require.finite("lower end of a uniform distribution", lower);
             Require.finite("upper end of a uniform distribution", upper);
@@ -114,14 +128,24 @@ public sealed interface Distribution permits Distribution.Normal, Distribution.U
      * tolerance whose tails are screened out (a wafer outside the window is rejected). Sampled by
      * inversion of the restricted cumulative distribution.
      *
-     * @param mean              mean of the parent normal, finite
-     * @param standardDeviation standard deviation of the parent normal, &gt; 0
-     * @param lower             lower cut, finite
-     * @param upper             upper cut, finite, &gt; lower, and the window must keep a probability
-     *                          mass of at least 1e-6 of the parent normal
+     * @param parentMean              mean of the parent normal, finite
+     * @param parentStandardDeviation standard deviation of the parent normal, &gt; 0
+     * @param lower                   lower cut, finite
+     * @param upper                   upper cut, finite, &gt; lower, and the window must keep a
+     *                                probability mass of at least 1e-6 of the parent normal
      */
     record TruncatedNormal(double parentMean, double parentStandardDeviation, double lower, double upper) implements Distribution {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component and the probability mass inside the cuts.
+         *
+         * @param parentMean              mean of the parent normal, finite
+         * @param parentStandardDeviation standard deviation of the parent normal, &gt; 0
+         * @param lower                   lower cut, finite
+         * @param upper                   upper cut, finite, &gt; lower, and the window must keep a
+         *                                probability mass of at least 1e-6 of the parent normal
+         * @throws InvalidParameterException if a component is not finite or out of range, or the
+         *         window [lower, upper] keeps less than 1e-6 of the parent normal
+         */
         public TruncatedNormal {
             Require.finite("mean of a truncated normal distribution", parentMean);
             Require.positive("standard deviation of a truncated normal distribution", parentStandardDeviation);

@@ -10,15 +10,29 @@ import org.wurtzkit.errors.Require;
  * Spark tasks, see the examples module) can be brought back and assembled with
  * {@link ToleranceStudyResult#of(SampleDesign, java.util.List, java.util.Collection)}.
  *
- * @param index   the evaluation's index in its design
+ * <p>The serialized form is the four components {@code index}, {@code outputs}, {@code failureKind}
+ * and {@code failure} (a record is serialized component by component); the Serialized Form page
+ * of the API documentation leaves it out.
+ *
+ * @param index       the evaluation's index in its design
  * @param outputs     one value per output column, or null if it failed (cloned in and out)
  * @param failureKind the kind of the library exception that failed it, or null if it succeeded
  * @param failure     why it failed (exception type and message), or null if it succeeded
+ * @serial exclude
  */
 public record Evaluation(int index, double[] outputs, ErrorKind failureKind, String failure) implements Serializable {
     private static final long serialVersionUID = 1L;
 
-    /** Validates: exactly one of outputs and failure is given. */
+    /**
+     * Creates the record and checks that exactly one of outputs and failure is given.
+     *
+     * @param index       the evaluation's index in its design
+     * @param outputs     one value per output column, or null if it failed (cloned in and out)
+     * @param failureKind the kind of the library exception that failed it, or null if it succeeded
+     * @param failure     why it failed (exception type and message), or null if it succeeded
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Evaluation {
         Require.inRange("evaluation index", index, 0, Integer.MAX_VALUE);
         if ((outputs == null) == (failure == null)) {

@@ -14,7 +14,17 @@ import org.wurtzkit.errors.WurtzkitError;
  * @param message the exception's type and message
  */
 public record PointFailure(int index, String where, ErrorKind kind, String message) {
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param index   the point's index in its workflow (sweep order, map order or member order)
+     * @param where   what the point is, e.g. "gate bias = -2.5 V"
+     * @param kind    the kind of the library exception that failed the point (for a point retried
+     *                               from a cold start, the kind of the last attempt)
+     * @param message the exception's type and message
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public PointFailure {
         Require.nonNull("failure location", where);
         Require.nonNull("failure kind", kind);

@@ -28,7 +28,14 @@ public record Quantity(Column column, ToDoubleFunction<Solution> extractor) {
     /** Lowest subband energy minus the Fermi level (eV); fails the point if there is no subband. */
     public static final Quantity GROUND_SUBBAND = of("ground_subband_minus_fermi", "eV", Quantity::groundSubband);
 
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param column    name and unit of the output column
+     * @param extractor reads the value from a solution
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public Quantity {
         Require.nonNull("quantity column", column);
         Require.nonNull("quantity extractor", extractor);

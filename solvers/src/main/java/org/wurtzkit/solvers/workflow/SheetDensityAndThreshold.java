@@ -19,8 +19,8 @@ import org.wurtzkit.units.Decimals;
  * to choose by hand. Columns: {@code sheet_density_cm^-2}, {@code threshold_voltage_V} and
  * {@code model_threshold_voltage_V}, the closed-form estimate that placed the range.
  *
- * <p>At each point the closed-form charge balance ({@link ChargeBalanceModel#fromStructure(Structure,
- * org.wurtzkit.solvers.sp.SolverOptions)}, with the map solver's options) gives an estimate
+ * <p>At each point the closed-form charge balance ({@link ChargeBalanceModel#fromStructure(Structure)})
+ * gives an estimate
  * V<sub>th,model</sub>. The sweep runs from the structure's bias V<sub>0</sub> down to
  * min(V<sub>0</sub>, V<sub>th,model</sub>) - margin, margin = max({@link #marginV()},
  * {@link #marginFraction()} |V<sub>0</sub> - V<sub>th,model</sub>|), rounded down to a whole
@@ -57,7 +57,16 @@ public record SheetDensityAndThreshold(ThresholdDefinition definition, double st
     private static final List<Column> COLUMNS = List.of(Column.of("sheet_density", "cm^-2"),
             Column.of("threshold_voltage", "V"), Column.of("model_threshold_voltage", "V"));
 
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param definition     the threshold definition
+     * @param stepV          bias step (V), in [0.001, 5]
+     * @param marginV        least distance the sweep runs below the model's V_th (V), in [0, 50]
+     * @param marginFraction further margin as a fraction of |V_0 - V_th,model|, in [0, 10]
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public SheetDensityAndThreshold {
         Require.nonNull("threshold definition", definition);
         Require.inRange("bias step (V)", stepV, 0.001, 5);

@@ -11,11 +11,17 @@ import org.wurtzkit.errors.InvalidParameterException;
  */
 public class TargetOutOfReachException extends InvalidParameterException {
     private static final long serialVersionUID = 1L;
+    /** The requested target value; part of the serialized form. */
     private final double target;
+    /** The smaller of the values at the two ends of the interval; part of the serialized form. */
     private final double reachableMin;
+    /** The larger of the values at the two ends of the interval; part of the serialized form. */
     private final double reachableMax;
+    /** Header of the searched parameter's column; part of the serialized form. */
     private final String searchedParameter;
+    /** Lower end of the searched interval; part of the serialized form. */
     private final double lowerBound;
+    /** Upper end of the searched interval; part of the serialized form. */
     private final double upperBound;
 
     TargetOutOfReachException(Column quantity, double target, double reachableMin, double reachableMax,

@@ -30,7 +30,13 @@ public sealed interface ThresholdDefinition permits ThresholdDefinition.Constant
      * @param levelPerCm2 the level (cm^-2), finite and &gt; 0
      */
     record ConstantDensity(double levelPerCm2) implements ThresholdDefinition {
-        /** Validates. */
+        /**
+         * Creates the record and checks every component.
+         *
+         * @param levelPerCm2 the level (cm^-2), finite and &gt; 0
+         * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+         *         finite or outside its documented range
+         */
         public ConstantDensity {
             Require.positive("threshold sheet-density level (cm^-2)", levelPerCm2);
         }

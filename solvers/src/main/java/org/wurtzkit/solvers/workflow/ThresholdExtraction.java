@@ -14,7 +14,14 @@ import org.wurtzkit.units.Decimals;
  * @param definition the threshold definition
  */
 public record ThresholdExtraction(BiasGrid grid, ThresholdDefinition definition) {
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param grid       the gate biases to sweep
+     * @param definition the threshold definition
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public ThresholdExtraction {
         Require.nonNull("bias grid", grid);
         Require.nonNull("threshold definition", definition);

@@ -26,15 +26,15 @@ import org.wurtzkit.errors.WurtzkitException;
  * Hyndman, Y. Fan, Am. Stat. 50, 361 (1996), Commons Math's {@code Percentile.EstimationType.R_7}).
  *
  * <p><b>Sensitivity</b> ({@link #sensitivity(int)}): with f<sub>A</sub>, f<sub>B</sub> and
- * f<sub>A<sub>B</sub><sup>(i)</sup></sub> the outputs of the rows of the three matrices (see
+ * f(A<sub>B</sub><sup>(i)</sup>) the outputs of the rows of the three matrices (see
  * {@link SampleDesign}), centred on the mean of f<sub>A</sub> and f<sub>B</sub> (this leaves the
  * indices' expectations unchanged and avoids cancellation for outputs such as n_s ~ 10<sup>13</sup>),
  * and V the sample variance of f<sub>A</sub> and f<sub>B</sub> together:
  * <ul>
- * <li>first order, S<sub>i</sub> = (1/N) &Sigma; f<sub>B</sub> (f<sub>A<sub>B</sub><sup>(i)</sup></sub> -
+ * <li>first order, S<sub>i</sub> = (1/N) &Sigma; f<sub>B</sub> (f(A<sub>B</sub><sup>(i)</sup>) -
  * f<sub>A</sub>) / V, the estimator of A. Saltelli et al., Comput. Phys. Commun. 181, 259 (2010),
  * Table 2 (b);</li>
- * <li>total effect, S<sub>Ti</sub> = (1/2N) &Sigma; (f<sub>A</sub> - f<sub>A<sub>B</sub><sup>(i)</sup></sub>)<sup>2</sup>
+ * <li>total effect, S<sub>Ti</sub> = (1/2N) &Sigma; (f<sub>A</sub> - f(A<sub>B</sub><sup>(i)</sup>))<sup>2</sup>
  * / V, the estimator of M. J. W. Jansen, Comput. Phys. Commun. 117, 35 (1999), Table 2 (f) of
  * Saltelli et al. (2010);</li>
  * <li>a standard error of S<sub>i</sub> from the spread of its N terms, sd / &radic;N / V (central
@@ -95,7 +95,19 @@ public final class ToleranceStudyResult implements CsvTable {
         /** Standard error of a first-order index above which the ranking gets a warning. */
         public static final double ROUGH_STANDARD_ERROR = 0.05;
 
-        /** Copies the lists. */
+        /**
+         * Creates the record; copies the lists.
+         *
+         * @param column   the output
+         * @param variance V, the output's variance over the rows of A and B used
+         * @param rows     rows of the design used (all k + 2 evaluations succeeded)
+         * @param skipped  rows left out because an evaluation failed
+         * @param indices  one index per input, in input order
+         * @param warnings why the indices may mislead, if they may (empty otherwise): a standard error
+         *                                 above {@value #ROUGH_STANDARD_ERROR}, which can reorder inputs whose indices lie
+         *                                 closer than that; rows left out by failures, which select the samples by
+         *                                 their outcome
+         */
         public Sensitivity {
             indices = List.copyOf(indices);
             warnings = List.copyOf(warnings);

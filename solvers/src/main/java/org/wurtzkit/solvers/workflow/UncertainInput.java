@@ -10,7 +10,14 @@ import org.wurtzkit.errors.Require;
  * @param distribution how the input is distributed
  */
 public record UncertainInput(Column column, Distribution distribution) {
-    /** Validates. */
+    /**
+     * Creates the record and checks every component.
+     *
+     * @param column       name and unit
+     * @param distribution how the input is distributed
+     * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
+     *         finite or outside its documented range
+     */
     public UncertainInput {
         Require.nonNull("input column", column);
         Require.nonNull("distribution of input " + column.name(), distribution);
