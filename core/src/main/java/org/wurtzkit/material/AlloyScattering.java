@@ -21,7 +21,15 @@ import org.wurtzkit.errors.Require;
  * @param inAlN InAlN potential (eV)
  */
 public record AlloyScattering(Bowing alGaN, Bowing inGaN, Bowing inAlN) {
-    /** Validates: all three present, each non-negative (the rate depends on U^2; the sign is a convention). */
+    /**
+     * Validates: all three present, each non-negative (the rate depends on U^2; the sign is a
+     * convention).
+     *
+     * @param alGaN AlGaN potential (eV)
+     * @param inGaN InGaN potential (eV)
+     * @param inAlN InAlN potential (eV)
+     * @throws org.wurtzkit.errors.InvalidParameterException if one is missing or negative
+     */
     public AlloyScattering {
         Require.nonNull("AlGaN alloy scattering potential", alGaN);
         Require.nonNull("InGaN alloy scattering potential", inGaN);

@@ -23,7 +23,17 @@ public record LeakageCurrent(double gateBiasV, double thermionic, double tunnell
         double barrierTopEv, double barrierFieldVPerM, List<String> warnings) {
     private static final double A_PER_M2_PER_A_PER_CM2 = 1e4;
 
-    /** Validates and copies the warnings. */
+    /**
+     * Validates and copies the warnings.
+     *
+     * @param gateBiasV the gate bias V_g of the solution (V)
+     * @param thermionic over the top of the barrier (A/m^2); 0 if not computed
+     * @param tunnelling through the barrier, below its top (A/m^2); 0 if not computed
+     * @param pooleFrenkel Poole-Frenkel emission (A/m^2); 0 if not computed
+     * @param barrierTopEv the highest conduction-band edge between gate and channel, with image-force lowering if chosen (eV, relative to the bottom contact's Fermi level)
+     * @param barrierFieldVPerM the magnitude of the mean field in the barrier layers (V/m), the field of Poole-Frenkel emission
+     * @param warnings what the result rests on that may not hold (empty when nothing)
+     */
     public LeakageCurrent {
         Require.nonNull("warnings", warnings);
         warnings = List.copyOf(warnings);

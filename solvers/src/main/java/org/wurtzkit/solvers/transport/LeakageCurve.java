@@ -41,12 +41,28 @@ public final class LeakageCurve implements CsvTable {
         return bias.clone();
     }
 
-    /** @param i point index @return the current at point i, empty where it failed */
+    /**
+
+     * {@return the current at point i, empty where it failed}
+
+     *
+
+     * @param i point index
+
+     */
     public Optional<LeakageCurrent> point(int i) {
         return Optional.ofNullable(points[i]);
     }
 
-    /** @param i point index @return "ok", "ok, n warning(s)", or "failed: " and the reason */
+    /**
+
+     * {@return "ok", "ok, n warning(s)", or "failed: " and the reason}
+
+     *
+
+     * @param i point index
+
+     */
     public String status(int i) {
         return status[i];
     }

@@ -33,7 +33,17 @@ public record LeakageOptions(Set<LeakageMechanism> mechanisms, TransmissionMetho
         boolean imageForceLowering, double richardsonMass, double relativeAccuracy, double slabWidth,
         PooleFrenkelEmission pooleFrenkel) {
 
-    /** Validates and copies. */
+    /**
+     * Validates and copies.
+     *
+     * @param mechanisms which currents are computed; default thermionic and tunnelling. Poole-Frenkel needs measured trap parameters, so it is off until {
+     * @param transmission how T(E) is evaluated; default {@link TransmissionMethod#WKB}
+     * @param imageForceLowering whether the image potential -q / (16 pi eps0 eps_inf x) of the gate metal is added to the barrier (S. M. Sze and K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, sec. 3.2.4); default false, because the gate's barrier height phi_B given to the structure is normally a measured effective barrier (from I-V or internal photoemission), which already contains the lowering at the fields of the measurement; turning it on counts it again. Each result warns when the lowering it leaves out exceeds 0.1 eV
+     * @param richardsonMass the in-plane mass of the supply function (m0), i.e. the mass in A* = 4 pi q m* k^2 / h^3; NaN (the default) takes the in-plane (basal-plane) electron mass of the semiconductor at the gate, the usual choice for a Schottky contact (Sze and Ng, above, ch. 3). In (0, 100] otherwise
+     * @param relativeAccuracy relative accuracy of each panel of the Tsu-Esaki integral, in [1e-10, 1e-2]; default 1e-6
+     * @param slabWidth slab width of the transfer matrix (m), in (0, 1e-9]; default 0.02 nm
+     * @param pooleFrenkel measured trap parameters, or null when Poole-Frenkel emission is not computed
+     */
     public LeakageOptions {
         Require.nonNull("leakage mechanisms", mechanisms);
         Require.nonNull("transmission method", transmission);
@@ -64,37 +74,82 @@ public record LeakageOptions(Set<LeakageMechanism> mechanisms, TransmissionMetho
                 TransmissionMethod.WKB, false, Double.NaN, 1e-6, TransmissionMethod.DEFAULT_SLAB_WIDTH, null);
     }
 
-    /** @param first a mechanism @param rest more @return a copy computing exactly these mechanisms */
+    /**
+     * {@return a copy computing exactly these mechanisms}
+     *
+     * @param first a mechanism
+     * @param rest  more mechanisms
+     */
     public LeakageOptions withMechanisms(LeakageMechanism first, LeakageMechanism... rest) {
         return new LeakageOptions(EnumSet.of(first, rest), transmission, imageForceLowering, richardsonMass,
                 relativeAccuracy, slabWidth, pooleFrenkel);
     }
 
-    /** @param v the method @return a copy */
+    /**
+
+     * {@return a copy}
+
+     *
+
+     * @param v the method
+
+     */
     public LeakageOptions withTransmission(TransmissionMethod v) {
         return new LeakageOptions(mechanisms, v, imageForceLowering, richardsonMass, relativeAccuracy, slabWidth,
                 pooleFrenkel);
     }
 
-    /** @param v whether to add the image potential @return a copy */
+    /**
+
+     * {@return a copy}
+
+     *
+
+     * @param v whether to add the image potential
+
+     */
     public LeakageOptions withImageForceLowering(boolean v) {
         return new LeakageOptions(mechanisms, transmission, v, richardsonMass, relativeAccuracy, slabWidth,
                 pooleFrenkel);
     }
 
-    /** @param v supply mass (m0), NaN for the default @return a copy */
+    /**
+
+     * {@return a copy}
+
+     *
+
+     * @param v supply mass (m0), NaN for the default
+
+     */
     public LeakageOptions withRichardsonMass(double v) {
         return new LeakageOptions(mechanisms, transmission, imageForceLowering, v, relativeAccuracy, slabWidth,
                 pooleFrenkel);
     }
 
-    /** @param v relative accuracy @return a copy */
+    /**
+
+     * {@return a copy}
+
+     *
+
+     * @param v relative accuracy
+
+     */
     public LeakageOptions withRelativeAccuracy(double v) {
         return new LeakageOptions(mechanisms, transmission, imageForceLowering, richardsonMass, v, slabWidth,
                 pooleFrenkel);
     }
 
-    /** @param v slab width (m) @return a copy */
+    /**
+
+     * {@return a copy}
+
+     *
+
+     * @param v slab width (m)
+
+     */
     public LeakageOptions withSlabWidth(double v) {
         return new LeakageOptions(mechanisms, transmission, imageForceLowering, richardsonMass, relativeAccuracy, v,
                 pooleFrenkel);
@@ -111,7 +166,15 @@ public record LeakageOptions(Set<LeakageMechanism> mechanisms, TransmissionMetho
         return new LeakageOptions(m, transmission, imageForceLowering, richardsonMass, relativeAccuracy, slabWidth, v);
     }
 
-    /** @param m a mechanism @return whether it is computed */
+    /**
+
+     * {@return whether it is computed}
+
+     *
+
+     * @param m a mechanism
+
+     */
     public boolean computes(LeakageMechanism m) {
         return mechanisms.contains(m);
     }

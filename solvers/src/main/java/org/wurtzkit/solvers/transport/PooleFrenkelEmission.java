@@ -22,7 +22,12 @@ import org.wurtzkit.units.Constants;
  * @param prefactor     C (A V^-1 m^-1, i.e. S/m: J in A/m^2 for F in V/m), in (0, 1e6]
  */
 public record PooleFrenkelEmission(double trapBarrierEv, double prefactor) {
-    /** Validates. */
+    /**
+     * Validates.
+     *
+     * @param trapBarrierEv phi_t (eV), in (0, 3]
+     * @param prefactor C (A V^-1 m^-1, i.e. S/m: J in A/m^2 for F in V/m), in (0, 1e6]
+     */
     public PooleFrenkelEmission {
         if (!(trapBarrierEv > 0 && trapBarrierEv <= 3)) {
             throw new InvalidParameterException("Poole-Frenkel trap barrier (eV)", Double.toString(trapBarrierEv),

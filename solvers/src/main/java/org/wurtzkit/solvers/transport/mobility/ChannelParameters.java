@@ -30,7 +30,18 @@ import org.wurtzkit.material.WurtziteMaterial;
 public record ChannelParameters(double staticPermittivity, double highFrequencyPermittivity, double loPhononEnergyEv,
         double massDensity, double longitudinalSoundVelocity, double deformationPotentialEv,
         double electromechanicalCoupling, double latticeC) {
-    /** Validates every value. */
+    /**
+     * Validates every value.
+     *
+     * @param staticPermittivity relative static permittivity
+     * @param highFrequencyPermittivity relative high-frequency permittivity
+     * @param loPhononEnergyEv hbar omega_LO (eV)
+     * @param massDensity rho (kg/m^3)
+     * @param longitudinalSoundVelocity v_L (m/s)
+     * @param deformationPotentialEv acoustic deformation potential Xi (eV)
+     * @param electromechanicalCoupling angular-averaged K^2
+     * @param latticeC lattice constant c (m): the spacing of charges on a dislocation line
+     */
     public ChannelParameters {
         Require.positive("static permittivity", staticPermittivity);
         Require.inRange("high-frequency permittivity", highFrequencyPermittivity, Double.MIN_VALUE,

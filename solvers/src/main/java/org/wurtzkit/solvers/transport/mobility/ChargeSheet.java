@@ -11,7 +11,12 @@ import org.wurtzkit.errors.Require;
  *                charge does not matter, the rate goes with its square
  */
 public record ChargeSheet(double depth, double density) {
-    /** Validates. */
+    /**
+     * Validates.
+     *
+     * @param depth depth below the surface (m), &ge; 0
+     * @param density number of charges per area (m^-2), in [0, 1e19] (up to 1e15 cm^-2); the sign of the charge does not matter, the rate goes with its square
+     */
     public ChargeSheet {
         Require.nonNegative("charge sheet depth (m)", depth);
         Require.inRange("charge sheet density (m^-2)", density, 0, 1e19);

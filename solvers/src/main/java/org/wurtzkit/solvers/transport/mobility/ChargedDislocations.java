@@ -24,7 +24,12 @@ public record ChargedDislocations(double density, double occupancy) implements S
     /** 5e8 cm^-2, f = 1. */
     public static final ChargedDislocations DEFAULT = perCm2(5e8, 1);
 
-    /** Validates the ranges. */
+    /**
+     * Validates the ranges.
+     *
+     * @param density N_dis (m^-2), in [0, 1e17] (up to 1e13 cm^-2)
+     * @param occupancy f, in [0, 1]
+     */
     public ChargedDislocations {
         Require.inRange("dislocation density (m^-2)", density, 0, 1e17);
         Require.inRange("dislocation occupancy f", occupancy, 0, 1);

@@ -29,7 +29,12 @@ public record InterfaceRoughness(double rmsHeight, double correlationLength) imp
     /** Delta 0.26 nm, Lambda 3 nm. */
     public static final InterfaceRoughness DEFAULT = ofNm(0.26, 3);
 
-    /** Validates the ranges. */
+    /**
+     * Validates the ranges.
+     *
+     * @param rmsHeight Delta (m), in [0, 2 nm]
+     * @param correlationLength Lambda (m), in [0.1 nm, 100 nm]
+     */
     public InterfaceRoughness {
         Require.inRange("interface roughness rms height Delta (m)", rmsHeight, 0, 2e-9);
         Require.inRange("interface roughness correlation length Lambda (m)", correlationLength, 1e-10, 1e-7);

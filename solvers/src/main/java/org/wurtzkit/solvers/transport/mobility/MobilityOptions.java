@@ -35,7 +35,15 @@ public record MobilityOptions(List<ScatteringMechanism> mechanisms, Screening sc
      */
     public static final double DEFAULT_MINIMUM_SUBBAND_FRACTION = 1e-3;
 
-    /** Validates and copies. */
+    /**
+     * Validates and copies.
+     *
+     * @param mechanisms at least one, names unique
+     * @param screening screening model
+     * @param channel constants to use for every subband instead of the parameter set's, or null
+     * @param quadraturePoints nodes of the graded Gauss-Legendre rule, in [12, 1000]; used in panels of 6
+     * @param minimumSubbandFraction subbands holding less than this fraction of the subband electrons are left out of the mobility (their electrons are reported by {
+     */
     public MobilityOptions {
         mechanisms = List.copyOf(Require.nonNull("mechanisms", mechanisms));
         if (mechanisms.isEmpty()) {

@@ -25,7 +25,13 @@ public record RemoteCharge(boolean solutionIons, boolean solutionSurface, List<C
     /** The solution's ions and surface charge. */
     public static final RemoteCharge DEFAULT = new RemoteCharge(true, true, List.of());
 
-    /** Copies the list. */
+    /**
+     * Copies the list.
+     *
+     * @param solutionIons include the solution's ionised donors and acceptors
+     * @param solutionSurface include the solution's charged surface states (first node)
+     * @param sheets further sheets
+     */
     public RemoteCharge {
         sheets = List.copyOf(Require.nonNull("charge sheets", sheets));
     }
