@@ -26,10 +26,13 @@ import org.wurtzkit.structure.StructureCodec;
  * @param parameterSetName   name of the structure's parameter set
  * @param parameterSetSha256 content hash of that set's values when the result was computed
  * @param solverOptions      the solver options as ordered name/value pairs
+ * @param run                what was computed, as ordered name/value pairs: {@code computation} (e.g.
+ *                           "single solve", "bias sweep") and what else is needed to repeat it (the
+ *                           start of a single solve, the biases of a sweep in solving order)
  * @param warnings           warnings the result carries, possibly none
  */
 public record ResultProvenance(String libraryVersion, Structure structure, String parameterSetName,
-        String parameterSetSha256, Map<String, String> solverOptions, List<String> warnings) {
+        String parameterSetSha256, Map<String, String> solverOptions, Map<String, String> run, List<String> warnings) {
 
     /** Validates and copies (the options keep their order). */
     public ResultProvenance {
@@ -38,8 +41,10 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
         Require.nonNull("parameter set name", parameterSetName);
         Require.nonNull("parameter set hash", parameterSetSha256);
         Require.nonNull("solver options", solverOptions);
+        Require.nonNull("run description", run);
         Require.nonNull("warnings", warnings);
         solverOptions = Collections.unmodifiableMap(new LinkedHashMap<>(solverOptions));
+        run = Collections.unmodifiableMap(new LinkedHashMap<>(run));
         warnings = List.copyOf(warnings);
     }
 
@@ -48,13 +53,15 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
      *
      * @param structure     the structure solved
      * @param solverOptions the solver options as ordered name/value pairs
+     * @param run           what was computed (see the record's documentation)
      * @param warnings      the result's warnings
      * @return the provenance, with this library's version and the set's current hash
      */
-    public static ResultProvenance of(Structure structure, Map<String, String> solverOptions, List<String> warnings) {
+    public static ResultProvenance of(Structure structure, Map<String, String> solverOptions, Map<String, String> run,
+            List<String> warnings) {
         Require.nonNull("structure", structure);
         return new ResultProvenance(LibraryVersion.get(), structure, structure.parameters().name(),
-                ParameterSetHash.sha256(structure.parameters()), solverOptions, warnings);
+                ParameterSetHash.sha256(structure.parameters()), solverOptions, run, warnings);
     }
 
     /**
@@ -70,12 +77,8 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
         List<String> out = new ArrayList<>();
         out.add("produced by wurtzkit " + libraryVersion);
         out.add("parameter set: " + parameterSetName + ", sha256 " + parameterSetSha256);
-        StringBuilder sb = new StringBuilder("solver options:");
-        solverOptions.forEach((k, v) -> sb.append(' ').append(k).append('=').append(v).append(';'));
-        if (!solverOptions.isEmpty()) {
-            sb.setLength(sb.length() - 1);
-        }
-        out.add(sb.toString());
+        out.add(pairs("solver options:", solverOptions));
+        out.add(pairs("run:", run));
         for (String w : warnings) {
             out.add("warning: " + w.replace('\r', ' ').replace('\n', ' '));
         }
@@ -87,6 +90,15 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
                     + structure.toString().replace('\n', '|'));
         }
         return Collections.unmodifiableList(out);
+    }
+
+    private static String pairs(String title, Map<String, String> m) {
+        StringBuilder sb = new StringBuilder(title);
+        m.forEach((k, v) -> sb.append(' ').append(k).append('=').append(v).append(';'));
+        if (!m.isEmpty()) {
+            sb.setLength(sb.length() - 1);
+        }
+        return sb.toString().replace('\r', ' ').replace('\n', ' ');
     }
 
     /** @return the {@link #headerLines()} joined by '\n' */

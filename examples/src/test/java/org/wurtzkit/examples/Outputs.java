@@ -58,7 +58,8 @@ final class Outputs {
      */
     static List<CSVRecord> assertCsv(Path file, List<String> header) throws IOException {
         try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                CSVParser p = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
+                CSVParser p = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true)
+                        .get().parse(r)) {
             assertEquals(header, p.getHeaderNames(), file + " header");
             List<CSVRecord> rows = p.getRecords();
             assertTrue(rows.size() > 0, file + " has no rows");

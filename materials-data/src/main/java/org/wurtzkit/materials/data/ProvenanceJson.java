@@ -26,6 +26,7 @@ import org.wurtzkit.structure.Structure;
  *   "libraryVersion": "0.1.0",
  *   "parameterSet": {"name": "...", "sha256": "..."},
  *   "solverOptions": {"tolerance": "1.0E-6", ...},
+ *   "run": {"computation": "single solve", "start": "cold"},
  *   "warnings": ["..."],
  *   "structure": { the stack, exactly as {@link StructureJson} writes it }
  * }
@@ -59,6 +60,11 @@ public final class ProvenanceJson {
             g.writeEndObject();
             g.writeObjectFieldStart("solverOptions");
             for (Map.Entry<String, String> e : p.solverOptions().entrySet()) {
+                g.writeStringField(e.getKey(), e.getValue());
+            }
+            g.writeEndObject();
+            g.writeObjectFieldStart("run");
+            for (Map.Entry<String, String> e : p.run().entrySet()) {
                 g.writeStringField(e.getKey(), e.getValue());
             }
             g.writeEndObject();
@@ -102,8 +108,8 @@ public final class ProvenanceJson {
         JsonTree.Node root = StructureJson.parse(json, fileName);
         StructureJson.TreeReader t = new StructureJson.TreeReader(fileName, "");
         JsonTree.Obj o = t.object(root, "");
-        t.onlyKeys(o, "", Set.of("formatVersion", "libraryVersion", "parameterSet", "solverOptions", "warnings",
-                "structure"));
+        t.onlyKeys(o, "", Set.of("formatVersion", "libraryVersion", "parameterSet", "solverOptions", "run",
+                "warnings", "structure"));
         JsonTree.Member v = t.required(o, "", "formatVersion");
         if (t.number(v.value(), "formatVersion") != FORMAT_VERSION) {
             throw t.fail("formatVersion", v.value().line(), StructureFormatException.Reason.UNSUPPORTED_VERSION,
@@ -120,13 +126,18 @@ public final class ProvenanceJson {
         for (JsonTree.Member m : so.members().values()) {
             options.put(m.key(), t.string(m.value(), "solverOptions." + m.key()));
         }
+        Map<String, String> run = new LinkedHashMap<>();
+        JsonTree.Obj ro = t.object(t.required(o, "", "run").value(), "run");
+        for (JsonTree.Member m : ro.members().values()) {
+            run.put(m.key(), t.string(m.value(), "run." + m.key()));
+        }
         List<String> warnings = new ArrayList<>();
         List<JsonTree.Node> ws = t.array(t.required(o, "", "warnings").value(), "warnings");
         for (int i = 0; i < ws.size(); i++) {
             warnings.add(t.string(ws.get(i), "warnings[" + i + "]"));
         }
         Structure s = reader.readStructure(t.required(o, "", "structure").value(), fileName, "structure");
-        return new ResultProvenance(version, s, name, hash, options, warnings);
+        return new ResultProvenance(version, s, name, hash, options, run, warnings);
     }
 
     /**

@@ -212,12 +212,15 @@ class BiasSweepTest {
         StringWriter w = new StringWriter();
         sweep.writeCsv(w);
         String text = w.toString();
-        assertTrue(text.startsWith(
+        // the provenance comment lines come first, then the header
+        String table = text.substring(text.indexOf("\r\ngate_bias_V") + 2);
+        assertTrue(text.startsWith("# produced by wurtzkit "), text);
+        assertTrue(table.startsWith(
                 "gate_bias_V,sheet_density_cm^-2,gate_charge_C/m^2,electrons_total_cm^-2,outer_iterations,status\r\n"),
                 text);
         List<CSVRecord> rows;
         try (CSVParser p = CSVParser.parse(new StringReader(text),
-                CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get())) {
+                CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get())) {
             rows = p.getRecords();
         }
         assertEquals(sweep.size(), rows.size());
