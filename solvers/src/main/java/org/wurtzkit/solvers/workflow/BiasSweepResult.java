@@ -78,7 +78,7 @@ public final class BiasSweepResult implements CsvTable {
             }
         }
         this.failures = Collections.unmodifiableList(f);
-        this.cv = new CapacitanceVoltage(bias, gateCharge);
+        this.cv = new CapacitanceVoltage(bias, gateCharge, this::provenance);
     }
 
     /** {@return the structure as given to the sweep (its own bias is not one of the points, unless listed)} */

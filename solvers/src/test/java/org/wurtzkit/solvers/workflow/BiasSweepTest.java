@@ -234,9 +234,11 @@ class BiasSweepTest {
         }
         StringWriter cvText = new StringWriter();
         sweep.capacitanceVoltage().writeCsv(cvText);
-        assertTrue(cvText.toString().startsWith("interval_start_V,interval_end_V,gate_bias_midpoint_V,capacitance_F/m^2,"
+        String cvTable = cvText.toString().substring(cvText.toString().indexOf("\r\ninterval_start_V") + 2);
+        assertTrue(cvText.toString().startsWith("# produced by wurtzkit "), cvText.toString());
+        assertTrue(cvTable.startsWith("interval_start_V,interval_end_V,gate_bias_midpoint_V,capacitance_F/m^2,"
                 + "capacitance_uF/cm^2,status\r\n"), cvText.toString());
-        assertEquals(sweep.size(), cvText.toString().split("\r\n").length); // header + (points - 1) intervals
+        assertEquals(sweep.size(), cvTable.split("\r\n").length); // header + (points - 1) intervals
     }
 
     @Test
