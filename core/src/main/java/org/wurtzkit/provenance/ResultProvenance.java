@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.ParameterSetHash;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.StructureCodec;
@@ -68,8 +69,8 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
      * The lines of a CSV file's header, without the comment marker: who produced the result, the
      * parameter set and its hash, the solver options, every warning and the structure. The
      * structure is written on one line in the JSON format of the installed {@link StructureCodec};
-     * when none is on the class path (materials-data absent), its summary is written instead and the
-     * line says so.
+     * when none is on the class path (materials-data absent), or the format cannot hold the stack (a
+     * layer of a custom material), its summary is written instead and the line says why.
      *
      * @return the lines, none containing a line break
      */
@@ -83,12 +84,17 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
             out.add("warning: " + w.replace('\r', ' ').replace('\n', ' '));
         }
         Optional<StructureCodec> codec = StructureCodec.installed();
+        String why = "no StructureCodec on the class path to write its JSON";
         if (codec.isPresent()) {
-            out.add("structure: " + codec.get().writeCompact(structure));
-        } else {
-            out.add("structure (summary; no StructureCodec on the class path to write its JSON): "
-                    + structure.toString().replace('\n', '|'));
+            try {
+                out.add("structure: " + codec.get().writeCompact(structure));
+                return Collections.unmodifiableList(out);
+            } catch (WurtzkitException e) {
+                // a stack the format cannot hold (a layer of a custom material): say so, keep the table
+                why = e.getMessage().replace('\r', ' ').replace('\n', ' ');
+            }
         }
+        out.add("structure (summary; " + why + "): " + structure.toString().replace('\n', '|'));
         return Collections.unmodifiableList(out);
     }
 
