@@ -40,9 +40,9 @@ import org.wurtzkit.structure.TopBoundary;
  * A layer stack as data: wurtzkit's own versioned JSON format for a {@link Structure}, written and
  * read here (the module that reads files). Writing then reading gives an equal structure, bit for
  * bit: numbers are written with {@link Double#toString(double)} (the shortest text that reads back
- * to the same double) and read with {@link Double#parseDouble(String)}; a quantity is written in its
- * customary unit (nm, cm^-3, ...) only when converting back gives the identical double, otherwise
- * in SI.
+ * to the same double) and read with {@link Double#parseDouble(String)}; a quantity is written in the
+ * unit of its kind (nm, cm^-3, ... or SI) whose text is shortest among those that convert back to the
+ * identical double, the customary unit first.
  *
  * <p>Read a stack in two lines:
  *
@@ -293,21 +293,34 @@ public final class StructureJson {
     }
 
     /**
-     * A quantity in the preferred unit when the reader's conversion gives back the identical double,
-     * else in the SI unit (the first whose factor is 1) of the family.
+     * A quantity in the unit of its family whose shortest text converts back to the identical
+     * double ({@code value * factor}, as the reader computes it) with the fewest characters, the
+     * preferred unit winning a tie: 22 nm stays "22.0 nm", whereas 1800e-9 m, which no double times
+     * 1e-9 gives exactly, goes out as "1.8E-6 m" rather than "1799.9999999999998 nm". The SI unit
+     * (factor 1) always converts back exactly, so a unit is always found.
      */
     private static void quantity(JsonGenerator g, String key, double si, Unit preferred, List<Unit> family)
             throws IOException {
-        Unit unit = preferred;
-        double v = si / preferred.toSi;
-        if (!(v * preferred.toSi == si) || Double.doubleToRawLongBits(v * preferred.toSi) != Double
-                .doubleToRawLongBits(si)) {
-            unit = family.stream().filter(u -> u.toSi == 1).findFirst().orElseThrow();
-            v = si;
+        Unit unit = null;
+        String text = null;
+        List<Unit> order = new java.util.ArrayList<>(family);
+        order.remove(preferred);
+        order.add(0, preferred);
+        for (Unit u : order) {
+            String t = Double.toString(si / u.toSi);
+            double back = Double.parseDouble(t) * u.toSi;
+            if (Double.doubleToRawLongBits(back) == Double.doubleToRawLongBits(si)
+                    && (text == null || t.length() < text.length())) {
+                unit = u;
+                text = t;
+            }
+        }
+        if (unit == null) {
+            throw new AssertionError("no unit of " + family + " holds " + si + " exactly; the SI unit always does");
         }
         g.writeObjectFieldStart(key);
         g.writeFieldName("value");
-        g.writeNumber(Double.toString(v));
+        g.writeNumber(text);
         g.writeStringField("unit", unit.symbol);
         g.writeEndObject();
     }

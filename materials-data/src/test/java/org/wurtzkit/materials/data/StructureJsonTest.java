@@ -120,6 +120,18 @@ class StructureJsonTest {
     }
 
     @Test
+    void aThicknessThatNanometresCannotHoldShortlyIsWrittenInAnotherUnit() {
+        // 1800e-9 is the double nearest 1.8 um; 1800 * 1e-9 is another double (1.8000000000000001E-6),
+        // so "1800 nm" would not read back to it (IEEE 754 rounding; common practice, no source);
+        // 1.8 * 1e-6 is exactly 1800e-9, so micrometres hold it in the shortest text
+        Structure s = Structure.builder(ParameterSets.defaultSet()).grow(Layer.of("buffer", Composition.GAN, 1800e-9))
+                .top(TopBoundary.schottky(1)).build();
+        String text = StructureJson.write(s);
+        assertTrue(text.contains("\"value\" : 1.8,\n        \"unit\" : \"um\""), text);
+        assertEquals(s, StructureJson.reader().read(text, "m"));
+    }
+
+    @Test
     void aValueThatTheCustomaryUnitCannotHoldExactlyIsWrittenInSi() {
         // 0.1 + 0.2 nm in metres is not k * 1e-9 for any double k that converts back exactly
         double t = (0.1 + 0.2) * 1e-9 + Math.ulp(1e-9) * 3;
