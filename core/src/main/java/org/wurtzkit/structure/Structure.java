@@ -138,6 +138,27 @@ public final class Structure {
     }
 
     /**
+     * Two structures are equal when everything the builder was given is equal: the same parameter
+     * set (by its own {@code equals}, identity for the built-in sets), the same layers, reference
+     * lattice, polarity, polarization model, band line-up, strain-shift switch, temperature and
+     * boundaries. Doubles compare bit for bit ({@link Double#compare}), as in records.
+     */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Structure s && s.parameters.equals(parameters) && s.bottomUp.equals(bottomUp)
+                && Double.compare(s.referenceLatticeA, referenceLatticeA) == 0 && s.polarity == polarity
+                && s.polarizationModel.equals(polarizationModel) && s.bandAlignment.equals(bandAlignment)
+                && s.strainShiftsBandEdges == strainShiftsBandEdges
+                && Double.compare(s.temperatureK, temperatureK) == 0 && s.top.equals(top) && s.bottom.equals(bottom);
+    }
+
+    @Override
+    public int hashCode() {
+        return java.util.Objects.hash(parameters, bottomUp, referenceLatticeA, polarity, polarizationModel,
+                bandAlignment, strainShiftsBandEdges, temperatureK, top, bottom);
+    }
+
+    /**
      * Returns a copy of this structure at another lattice temperature.
      *
      * @param t temperature (K)

@@ -7,17 +7,22 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.wurtzkit.materials.data.StructureJson;
 
 /**
  * Runs the five examples one after the other in the invented scenario of {@link DemoLab} (the
  * fictional {@value DemoLab#LAB} and its wafer {@value DemoLab#WAFER}), shows their progress,
- * prints their summaries, lists every file written with its size, and ends with the 2DEG sheet
- * density of the wafer's stack.
+ * prints their summaries, writes the wafer's stack as JSON ({@value #STACK_FILE}, the format of
+ * {@link StructureJson}) beside the plots, lists every file written with its size, and ends with
+ * the 2DEG sheet density of the wafer's stack.
  *
  * <p>Run: {@code mvn -B -ntp -Pdemo -DskipTests package} from the repository root (writes into
  * {@code out/}), or {@code java -Djava.awt.headless=true -cp ... org.wurtzkit.examples.Demo [out] [--quick]}.
  */
 public final class Demo {
+    /** The file the demo writes the stack of wafer {@value DemoLab#WAFER} into. */
+    public static final String STACK_FILE = "tnl-0731-stack.json";
+
     private Demo() {
     }
 
@@ -79,6 +84,9 @@ public final class Demo {
         }
         List<Path> files = new ArrayList<>();
         results.forEach(r -> files.addAll(r.files()));
+        Path stack = out.resolve(STACK_FILE);
+        StructureJson.writeFile(DemoLab.wafer(), stack); // invented demo data: the stack of the fictional wafer
+        files.add(stack);
         double ns = ((BandDiagramExample.Result) results.get(0)).sheetDensityPerCm2();
 
         List<String> summary = new ArrayList<>();

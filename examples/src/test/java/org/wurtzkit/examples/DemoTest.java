@@ -36,6 +36,10 @@ class DemoTest {
             assertTrue(Files.size(f) > 0, f + " is empty");
             assertTrue(printed.contains(f.getFileName().toString()), f + " is listed");
         }
+        Path stack = out.resolve(Demo.STACK_FILE);
+        assertTrue(r.files().contains(stack), "the demo lists the stack file");
+        assertEquals(DemoLab.wafer(), org.wurtzkit.materials.data.StructureJson.readFile(stack),
+                "the stack written beside the plots reads back to the wafer");
         assertTrue(printed.contains("invented"), "the demo says its data is invented");
         assertTrue(printed.contains("confirm it by measurement"), "the demo carries the caution");
     }

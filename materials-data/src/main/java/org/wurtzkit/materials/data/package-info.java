@@ -9,5 +9,15 @@
  * {@link org.wurtzkit.materials.data.ParameterSetFormatException} naming the set, the file, the key
  * and the line. This is the only module that reads data files; a team adds its own set by shipping a
  * JSON file and a small provider in its own jar.
+ *
+ * <p>Stacks and results as data: {@link org.wurtzkit.materials.data.StructureJson} writes and reads
+ * a {@link org.wurtzkit.structure.Structure} in wurtzkit's own versioned JSON format (schema
+ * {@code schema/stack-v1.schema.json} beside this package), bit for bit, checking the recorded
+ * content hash of the parameter set; {@link org.wurtzkit.materials.data.StructureJsonCodec} offers it
+ * to other modules as the {@link org.wurtzkit.structure.StructureCodec} service; and
+ * {@link org.wurtzkit.materials.data.ProvenanceJson} writes and reads a result's
+ * {@link org.wurtzkit.provenance.ResultProvenance} as a JSON side file. Their failures are
+ * {@link org.wurtzkit.materials.data.StructureFormatException}s naming file, key path, line and a
+ * typed reason.
  */
 package org.wurtzkit.materials.data;

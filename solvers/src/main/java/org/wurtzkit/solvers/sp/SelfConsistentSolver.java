@@ -139,7 +139,7 @@ public final class SelfConsistentSolver {
         if (nw == 0) {
             ConvergenceRecord rec = new ConvergenceRecord(true, 0, newtonSteps, new double[0],
                     "classical solve converged");
-            return new Solution(d, phi, null, null, charges.report(phi, null, null), rec);
+            return new Solution(d, phi, null, null, charges.report(phi, null, null), rec, cold);
         }
         QuantumStates qs = new QuantumStates(d);
         double[] ref = new double[d.n];
@@ -184,7 +184,7 @@ public final class SelfConsistentSolver {
                         Arrays.copyOf(history, it + 1), String.format(Locale.ROOT,
                                 "converged: max |delta phi| = %.3g V < %.3g V after %d iterations", delta,
                                 options.tolerance(), it + 1));
-                return new Solution(d, phi, ref, qs, charges.report(phi, ref, qs), rec);
+                return new Solution(d, phi, ref, qs, charges.report(phi, ref, qs), rec, cold);
             }
         }
         int m = options.maxIterations();

@@ -2,9 +2,12 @@ package org.wurtzkit.solvers.sp;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
@@ -48,16 +51,20 @@ public final class Solution {
     private final double holeFermiEv;
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
+    private final SolverOptions options;
+    private final boolean coldStart;
 
     /**
      * Copies out what one solve computed: the potential and subbands are read, never kept; the
      * report's arrays are taken over (the caller hands them on and keeps no reference).
      */
     Solution(Device d, double[] phi, double[] ref, QuantumStates qs, ChargeModel.Report report,
-            ConvergenceRecord record) {
+            ConvergenceRecord record, boolean coldStart) {
         int nn = d.n;
         this.structure = d.structure;
         this.record = record;
+        this.options = d.options;
+        this.coldStart = coldStart;
         this.holeFermiEv = d.holeFermiEv;
         this.subbandLimitReached = qs != null && qs.limitReached;
         depth = d.x.clone();
@@ -347,6 +354,54 @@ public final class Solution {
      */
     public boolean subbandLimitReached() {
         return subbandLimitReached;
+    }
+
+    /** {@return the solver options that produced this solution} */
+    public SolverOptions options() {
+        return options;
+    }
+
+    /**
+     * {@return whether the solve started cold (true) or from a neighbouring solution or a given
+     * potential (false, as in a sweep)}
+     */
+    public boolean coldStart() {
+        return coldStart;
+    }
+
+    /**
+     * What produced this solution: library version, structure, parameter set with its content hash,
+     * solver options, the start and the warnings. A cold-started solution is reproduced bit for bit
+     * by {@code new SelfConsistentSolver(SolverOptions.fromSettings(p.solverOptions())).solve(p.structure())};
+     * a warm-started one (in a sweep) carries a warning that a cold re-solve agrees only within the
+     * tolerance: repeat the whole sweep from its own provenance instead.
+     *
+     * @return the provenance (computed on each call; it hashes the parameter set)
+     */
+    public ResultProvenance provenance() {
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "single solve");
+        run.put("start", coldStart ? "cold" : "from a neighbouring solution");
+        return ResultProvenance.of(structure, options.settings(), run, warnings());
+    }
+
+    /**
+     * {@return the warnings of this solution: the subband limit, layers beyond their critical
+     * thickness, and a warm start that a cold re-solve reproduces only within the tolerance}
+     */
+    List<String> warnings() {
+        List<String> w = new ArrayList<>();
+        if (subbandLimitReached) {
+            w.add("a quantum window reached the subband limit; its density is too low");
+        }
+        for (org.wurtzkit.structure.LayerState s : structure.layersBeyondCriticalThickness()) {
+            w.add(s.layer().name() + " is thicker than its critical thickness (an estimate); it may relax");
+        }
+        if (!coldStart) {
+            w.add("started from a neighbouring solution: a cold re-solve agrees within the tolerance "
+                    + options.tolerance() + " V, not bit for bit");
+        }
+        return w;
     }
 
     /** {@return how the solve converged} */

@@ -1,5 +1,12 @@
 package org.wurtzkit.solvers.sp;
 
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
 
@@ -180,5 +187,133 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
                 quantumRegion, maxSubbands, subbandCutoffKT, v);
+    }
+    /**
+     * Every option as ordered name/value text, for the provenance of a result: numbers written with
+     * {@link Double#toString(double)} (which reads back to the same double), the mesh policy as its
+     * three numbers, the quantum region as {@code automatic <extension m>}, {@code none} or
+     * {@code windows <top m> <bottom m>, ...}, the holes' Fermi level by its constant's name.
+     * {@link #fromSettings(Map)} reads it back to an equal record.
+     *
+     * @return the settings, in the order of the record's components
+     */
+    public Map<String, String> settings() {
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put("tolerance", Double.toString(tolerance));
+        m.put("maxIterations", Integer.toString(maxIterations));
+        m.put("newtonTolerance", Double.toString(newtonTolerance));
+        m.put("maxNewtonIterations", Integer.toString(maxNewtonIterations));
+        m.put("maxNewtonStep", Double.toString(maxNewtonStep));
+        m.put("mesh.interfaceSpacing", Double.toString(mesh.interfaceSpacing()));
+        m.put("mesh.growthRatio", Double.toString(mesh.growthRatio()));
+        m.put("mesh.maxSpacing", Double.toString(mesh.maxSpacing()));
+        m.put("quantumRegion", quantumRegionText(quantumRegion));
+        m.put("maxSubbands", Integer.toString(maxSubbands));
+        m.put("subbandCutoffKT", Double.toString(subbandCutoffKT));
+        m.put("holeFermiLevel", holeFermiLevel.name());
+        return Collections.unmodifiableMap(m);
+    }
+
+    private static String quantumRegionText(QuantumRegion q) {
+        if (q instanceof QuantumRegion.Automatic a) {
+            return "automatic " + Double.toString(a.extension());
+        }
+        if (q instanceof QuantumRegion.Windows w) {
+            StringBuilder sb = new StringBuilder("windows");
+            for (int i = 0; i < w.windows().size(); i++) {
+                QuantumRegion.Window x = w.windows().get(i);
+                sb.append(i == 0 ? " " : ", ").append(Double.toString(x.depthTop())).append(' ')
+                        .append(Double.toString(x.depthBottom()));
+            }
+            return sb.toString();
+        }
+        return "none";
+    }
+
+    /**
+     * Reads the options back from {@link #settings()}, e.g. from a result's provenance.
+     *
+     * @param settings every name of {@link #settings()} with its text
+     * @return the options, equal to those that wrote the settings
+     * @throws InvalidParameterException naming the setting that is missing, unknown or unreadable
+     */
+    public static SolverOptions fromSettings(Map<String, String> settings) {
+        Require.nonNull("solver settings", settings);
+        Set<String> known = DEFAULTS.settings().keySet();
+        for (String k : settings.keySet()) {
+            if (!known.contains(k)) {
+                throw new InvalidParameterException("solver setting name", k, "one of " + known);
+            }
+        }
+        return new SolverOptions(real(settings, "tolerance"), integer(settings, "maxIterations"),
+                real(settings, "newtonTolerance"), integer(settings, "maxNewtonIterations"),
+                real(settings, "maxNewtonStep"),
+                new MeshPolicy(real(settings, "mesh.interfaceSpacing"), real(settings, "mesh.growthRatio"),
+                        real(settings, "mesh.maxSpacing")),
+                quantumRegion(text(settings, "quantumRegion")), integer(settings, "maxSubbands"),
+                real(settings, "subbandCutoffKT"), holeFermiLevel(text(settings, "holeFermiLevel")));
+    }
+
+    private static String text(Map<String, String> m, String key) {
+        String v = m.get(key);
+        if (v == null) {
+            throw new InvalidParameterException("solver setting \"" + key + "\"", "missing",
+                    "present (every setting of SolverOptions.settings() is needed)");
+        }
+        return v.trim();
+    }
+
+    private static double real(Map<String, String> m, String key) {
+        String v = text(m, key);
+        try {
+            return Double.parseDouble(v);
+        } catch (NumberFormatException e) {
+            throw new InvalidParameterException("solver setting \"" + key + "\"", v, "a decimal number");
+        }
+    }
+
+    private static int integer(Map<String, String> m, String key) {
+        String v = text(m, key);
+        try {
+            return Integer.parseInt(v);
+        } catch (NumberFormatException e) {
+            throw new InvalidParameterException("solver setting \"" + key + "\"", v, "an integer");
+        }
+    }
+
+    private static HoleFermiLevel holeFermiLevel(String v) {
+        for (HoleFermiLevel h : HoleFermiLevel.values()) {
+            if (h.name().equals(v)) {
+                return h;
+            }
+        }
+        throw new InvalidParameterException("solver setting \"holeFermiLevel\"", v,
+                "one of " + java.util.Arrays.toString(HoleFermiLevel.values()));
+    }
+
+    private static QuantumRegion quantumRegion(String v) {
+        String allowed = "\"none\", \"automatic <extension m>\" or \"windows <top m> <bottom m>, ...\"";
+        try {
+            if ("none".equals(v)) {
+                return QuantumRegion.none();
+            }
+            if (v.startsWith("automatic ")) {
+                return new QuantumRegion.Automatic(Double.parseDouble(v.substring("automatic ".length()).trim()));
+            }
+            if (v.startsWith("windows ")) {
+                List<QuantumRegion.Window> ws = new ArrayList<>();
+                for (String part : v.substring("windows ".length()).split(",")) {
+                    String[] tb = part.trim().split(" ");
+                    if (tb.length != 2) {
+                        throw new InvalidParameterException("solver setting \"quantumRegion\"", v, allowed);
+                    }
+                    ws.add(new QuantumRegion.Window(Double.parseDouble(tb[0]), Double.parseDouble(tb[1])));
+                }
+                return new QuantumRegion.Windows(ws);
+            }
+        } catch (NumberFormatException e) {
+            throw new InvalidParameterException("solver setting \"quantumRegion\"", v, allowed);
+        }
+        throw new InvalidParameterException("solver setting \"quantumRegion\"", v, allowed);
     }
 }

@@ -68,6 +68,6 @@ public final class BiasSweep {
         Solution[] solutions = new Solution[n];
         PointFailure.Reason[] failures = new PointFailure.Reason[n];
         Continuation.solveInOrder(solver, at, grid.values(), solutions, failures);
-        return new BiasSweepResult(structure, grid, solutions, failures);
+        return new BiasSweepResult(structure, grid, solutions, failures, solver.options());
     }
 }

@@ -2,11 +2,15 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
@@ -39,10 +43,13 @@ public final class BiasSweepResult implements CsvTable {
     private final List<PointFailure> failures;
     private final String[] status;
     private final CapacitanceVoltage cv;
+    private final SolverOptions options;
 
-    BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, PointFailure.Reason[] reasons) {
+    BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, PointFailure.Reason[] reasons,
+            SolverOptions options) {
         int n = grid.size();
         this.structure = structure;
+        this.options = options;
         this.bias = grid.values();
         this.solutions = solutions.clone();
         this.sheet = new double[n];
@@ -71,7 +78,7 @@ public final class BiasSweepResult implements CsvTable {
             }
         }
         this.failures = Collections.unmodifiableList(f);
-        this.cv = new CapacitanceVoltage(bias, gateCharge);
+        this.cv = new CapacitanceVoltage(bias, gateCharge, this::provenance);
     }
 
     /** {@return the structure as given to the sweep (its own bias is not one of the points, unless listed)} */
@@ -216,6 +223,34 @@ public final class BiasSweepResult implements CsvTable {
                     "a range over which n_s rises with the gate bias (no converged interval has a positive slope)");
         }
         return v[best] - s[best] / bestSlope;
+    }
+
+    /**
+     * What produced this sweep: the structure (with its own bias before the sweep), the solver
+     * options, the biases in solving order and a warning for every failed point and every layer
+     * beyond its critical thickness. Repeating
+     * {@code new BiasSweep(new SelfConsistentSolver(SolverOptions.fromSettings(p.solverOptions()))).run(p.structure(), biases)}
+     * with the biases of {@code p.run().get("biasesV")} gives the same numbers bit for bit.
+     *
+     * @return the provenance (computed on each call; it hashes the parameter set)
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "bias sweep");
+        StringBuilder b = new StringBuilder();
+        for (double v : bias) {
+            b.append(b.length() == 0 ? "" : " ").append(Double.toString(v));
+        }
+        run.put("biasesV", b.toString());
+        List<String> warnings = new ArrayList<>();
+        for (PointFailure f : failures) {
+            warnings.add("point failed: " + f);
+        }
+        for (org.wurtzkit.structure.LayerState s : structure.layersBeyondCriticalThickness()) {
+            warnings.add(s.layer().name() + " is thicker than its critical thickness (an estimate); it may relax");
+        }
+        return Optional.of(ResultProvenance.of(structure, options.settings(), run, warnings));
     }
 
     @Override

@@ -1,7 +1,10 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.List;
+import java.util.Optional;
+import java.util.function.Supplier;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
@@ -31,14 +34,27 @@ public final class CapacitanceVoltage implements CsvTable {
     private final double[] bias;
     private final double[] charge;
     private final double[] capacitance;
+    private final Supplier<Optional<ResultProvenance>> origin;
 
     CapacitanceVoltage(double[] bias, double[] charge) {
+        this(bias, charge, Optional::empty);
+    }
+
+    /** @param origin the provenance of the sweep the curve comes from */
+    CapacitanceVoltage(double[] bias, double[] charge, Supplier<Optional<ResultProvenance>> origin) {
+        this.origin = origin;
         this.bias = bias.clone();
         this.charge = charge.clone();
         this.capacitance = new double[bias.length - 1];
         for (int k = 0; k < capacitance.length; k++) {
             capacitance[k] = (charge[k + 1] - charge[k]) / (bias[k + 1] - bias[k]);
         }
+    }
+
+    /** {@return the provenance of the bias sweep this curve was computed from, when known} */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        return origin.get();
     }
 
     /** {@return number of intervals (one fewer than the sweep's points)} */

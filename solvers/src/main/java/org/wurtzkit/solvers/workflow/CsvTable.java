@@ -8,9 +8,11 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.provenance.ResultProvenance;
 
 /**
  * A result that can be written as a CSV table: one header line naming every column and its unit
@@ -18,6 +20,11 @@ import org.wurtzkit.errors.Require;
  * ({@link CSVFormat#RFC4180}, line separator "\r\n" as RFC 4180 prescribes). Numbers are written
  * with {@link Double#toString(double)}, which reads back to the identical double; a value that
  * does not exist (a failed point) is an empty cell, and the row's {@code status} column says why.
+ *
+ * <p>A result that knows what produced it ({@link #provenance()}) starts its CSV with comment lines
+ * beginning with {@code "# "}: the library version, the parameter set and its content hash, the
+ * solver options, the run, every warning and the structure as one line of JSON. Read such a file
+ * with a comment marker, e.g. Commons CSV's {@code CSVFormat.RFC4180.builder().setCommentMarker('#')}.
  */
 public interface CsvTable {
     /** {@return the columns, in order} */
@@ -38,14 +45,28 @@ public interface CsvTable {
     }
 
     /**
-     * Writes the table. The writer is flushed, not closed.
+     * {@return what produced this table, written as comment lines at the head of its CSV; empty for
+     * a table that does not know (the default)}
+     */
+    default Optional<ResultProvenance> provenance() {
+        return Optional.empty();
+    }
+
+    /**
+     * Writes the table, after the {@link #provenance()} comment lines if there are any. The writer is
+     * flushed, not closed.
      *
      * @param out where to write
      * @throws IOException from the writer
      */
     default void writeCsv(Writer out) throws IOException {
         Require.nonNull("writer", out);
-        CSVFormat format = CSVFormat.RFC4180.builder().setHeader(headers().toArray(new String[0])).get();
+        CSVFormat.Builder b = CSVFormat.RFC4180.builder().setHeader(headers().toArray(new String[0]));
+        Optional<ResultProvenance> p = provenance();
+        if (p.isPresent()) {
+            b.setCommentMarker('#').setHeaderComments(p.get().headerLines().toArray(new Object[0]));
+        }
+        CSVFormat format = b.get();
         CSVPrinter printer = new CSVPrinter(out, format);
         for (int i = 0; i < rowCount(); i++) {
             printer.printRecord(row(i));

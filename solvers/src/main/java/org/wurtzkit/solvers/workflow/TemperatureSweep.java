@@ -69,6 +69,6 @@ public final class TemperatureSweep {
         Solution[] solutions = new Solution[t.length];
         PointFailure.Reason[] failures = new PointFailure.Reason[t.length];
         Continuation.solveInOrder(solver, at, t, solutions, failures);
-        return new TemperatureSweepResult(structure, t, solutions, failures);
+        return new TemperatureSweepResult(structure, t, solutions, failures, solver.options());
     }
 }

@@ -2,9 +2,13 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.solvers.sp.Subband;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
@@ -36,10 +40,13 @@ public final class TemperatureSweepResult implements CsvTable {
     private final String[] status;
     private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
+    private final SolverOptions options;
 
-    TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, PointFailure.Reason[] reasons) {
+    TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, PointFailure.Reason[] reasons,
+            SolverOptions options) {
         int n = temperature.length;
         this.structure = structure;
+        this.options = options;
         this.temperature = temperature.clone();
         this.solutions = solutions.clone();
         sheet = new double[n];
@@ -155,6 +162,32 @@ public final class TemperatureSweepResult implements CsvTable {
     /** {@return the failed points, in sweep order} */
     public List<PointFailure> failures() {
         return failures;
+    }
+
+    /**
+     * What produced this sweep: the structure, the solver options, the temperatures in solving order
+     * and a warning for every failed point and every layer beyond its critical thickness. Running
+     * the sweep again with them gives the same numbers bit for bit.
+     *
+     * @return the provenance (computed on each call; it hashes the parameter set)
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "temperature sweep");
+        StringBuilder b = new StringBuilder();
+        for (double t : temperature) {
+            b.append(b.length() == 0 ? "" : " ").append(Double.toString(t));
+        }
+        run.put("temperaturesK", b.toString());
+        List<String> warnings = new ArrayList<>();
+        for (PointFailure f : failures) {
+            warnings.add("point failed: " + f);
+        }
+        for (org.wurtzkit.structure.LayerState s : structure.layersBeyondCriticalThickness()) {
+            warnings.add(s.layer().name() + " is thicker than its critical thickness (an estimate); it may relax");
+        }
+        return Optional.of(ResultProvenance.of(structure, options.settings(), run, warnings));
     }
 
     @Override

@@ -212,12 +212,15 @@ class BiasSweepTest {
         StringWriter w = new StringWriter();
         sweep.writeCsv(w);
         String text = w.toString();
-        assertTrue(text.startsWith(
+        // the provenance comment lines come first, then the header
+        String table = text.substring(text.indexOf("\r\ngate_bias_V") + 2);
+        assertTrue(text.startsWith("# produced by wurtzkit "), text);
+        assertTrue(table.startsWith(
                 "gate_bias_V,sheet_density_cm^-2,gate_charge_C/m^2,electrons_total_cm^-2,outer_iterations,status\r\n"),
                 text);
         List<CSVRecord> rows;
         try (CSVParser p = CSVParser.parse(new StringReader(text),
-                CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get())) {
+                CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get())) {
             rows = p.getRecords();
         }
         assertEquals(sweep.size(), rows.size());
@@ -231,9 +234,11 @@ class BiasSweepTest {
         }
         StringWriter cvText = new StringWriter();
         sweep.capacitanceVoltage().writeCsv(cvText);
-        assertTrue(cvText.toString().startsWith("interval_start_V,interval_end_V,gate_bias_midpoint_V,capacitance_F/m^2,"
+        String cvTable = cvText.toString().substring(cvText.toString().indexOf("\r\ninterval_start_V") + 2);
+        assertTrue(cvText.toString().startsWith("# produced by wurtzkit "), cvText.toString());
+        assertTrue(cvTable.startsWith("interval_start_V,interval_end_V,gate_bias_midpoint_V,capacitance_F/m^2,"
                 + "capacitance_uF/cm^2,status\r\n"), cvText.toString());
-        assertEquals(sweep.size(), cvText.toString().split("\r\n").length); // header + (points - 1) intervals
+        assertEquals(sweep.size(), cvTable.split("\r\n").length); // header + (points - 1) intervals
     }
 
     @Test

@@ -146,10 +146,12 @@ class ReadableResultsTest {
         Path file = dir.resolve("sweep.csv");
         sweep.writeCsv(file);
         assertEquals(csv, Files.readString(file, StandardCharsets.UTF_8));
-        assertTrue(csv.startsWith("gate_bias_V,sheet_density_cm^-2,"), csv);
-        assertTrue(csv.contains("\r\n-0.75,"), csv);
+        assertTrue(csv.startsWith("# produced by wurtzkit "), csv);
+        String table = csv.substring(csv.indexOf("\r\ngate_bias_V") + 2); // after the provenance comments
+        assertTrue(table.startsWith("gate_bias_V,sheet_density_cm^-2,"), csv);
+        assertTrue(table.contains("\r\n-0.75,"), csv);
         // CSV keeps every digit: the cell reads back to the identical double
-        String[] row = csv.split("\r\n")[2].split(",");
+        String[] row = table.split("\r\n")[2].split(",");
         assertEquals(sweep.sheetDensityPerCm2()[1], Double.parseDouble(row[1]));
     }
 

@@ -61,7 +61,9 @@ class TemperatureSweepTest {
     void csvHeaderAndFailures() throws IOException {
         StringWriter w = new StringWriter();
         sweep.writeCsv(w);
-        assertTrue(w.toString().startsWith("temperature_K,sheet_density_cm^-2,gate_charge_C/m^2,"
+        assertTrue(w.toString().startsWith("# produced by wurtzkit "), w.toString());
+        assertTrue(w.toString().contains("# run: computation=temperature sweep; temperaturesK="), w.toString());
+        assertTrue(w.toString().substring(w.toString().indexOf("\r\ntemperature_K") + 2).startsWith("temperature_K,sheet_density_cm^-2,gate_charge_C/m^2,"
                 + "ground_subband_minus_fermi_eV,bottom_band_gap_eV,outer_iterations,status\r\n"), w.toString());
         TemperatureSweepResult failed = new TemperatureSweep(
                 new SelfConsistentSolver(Hemts.COARSE.withMaxIterations(1))).run(Hemts.standard(), 300, 350);
