@@ -74,8 +74,9 @@ class ReadableTextTest {
                 .top(TopBoundary.schottky(1.0))
                 .build();
         assertFalse(thick.layersBeyondCriticalThickness().isEmpty(), "80 nm of AlN on GaN (2.4 % mismatch)");
-        assertTrue(thick.toString().endsWith("\n  warning: barrier (80 nm) is thicker than its Matthews-Blakeslee"
-                + " critical thickness (an estimate); it may relax"), thick.toString());
+        assertTrue(thick.toString().contains("\n  warning: barrier (80 nm) is thicker than its critical thickness "),
+                thick.toString());
+        assertTrue(thick.toString().endsWith("it may relax or crack"), thick.toString());
         Structure s = stack();
         assertEquals(s.layersBeyondCriticalThickness().size(), s.toString().split("\n  warning: ", -1).length - 1,
                 s.toString());

@@ -8,7 +8,10 @@ import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Units;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * A converged band diagram. Immutable: every array accessor returns a copy. No field holds NaN.
@@ -48,6 +51,24 @@ public final class Solution {
     private final double holeFermiEv;
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
+    private final List<Warning> warnings;
+
+    /**
+     * Holes in the top layer under a free surface above this sheet density (m^-2, 1e10 cm^-2) raise
+     * {@link WarningKind#SURFACE_HOLE_GAS}.
+     */
+    public static final double WARN_SURFACE_HOLES_PER_M2 = 1e14;
+    /**
+     * Window-bound subbands (above the band edge outside an edge of their window) raise
+     * {@link WarningKind#WINDOW_BOUND_SUBBAND} when they hold more than this fraction of their
+     * window's electrons and more than {@link #WARN_SURFACE_HOLES_PER_M2} (1e10 cm^-2).
+     */
+    public static final double WARN_WINDOW_BOUND_FRACTION = 0.01;
+    /**
+     * A window edge raises {@link WarningKind#WINDOW_EDGE_IN_ELECTRONS} when the classical electron
+     * density just outside it exceeds this fraction of the peak density inside the window.
+     */
+    public static final double WARN_EDGE_DENSITY_FRACTION = 0.01;
 
     /**
      * Copies out what one solve computed: the potential and subbands are read, never kept; the
@@ -150,6 +171,77 @@ public final class Solution {
         }
         subbands = Collections.unmodifiableList(bands);
         checkFinite();
+        warnings = collectWarnings(d, phi);
+    }
+
+    private List<Warning> collectWarnings(Device d, double[] phi) {
+        List<Warning> out = new ArrayList<>(structure.warnings());
+        int nn = depth.length;
+        if (structure.top() instanceof TopBoundary.FreeSurface) {
+            double bottomOfTop = structure.layerStates().get(0).depthBottom();
+            double holes = 0;
+            for (int i = 0; i < nn && depth[i] <= bottomOfTop; i++) {
+                holes += p[i] * d.box(i);
+            }
+            if (holes > WARN_SURFACE_HOLES_PER_M2) {
+                out.add(new Warning(WarningKind.SURFACE_HOLE_GAS, "a hole gas of "
+                        + Decimals.format(Units.perM2ToPerCm2(holes), "cm^-2") + " gathers in the top layer: the "
+                        + "surface donors given (" + structure.top() + ") cannot balance the polarization charge; "
+                        + "give more surface donors or a deeper donor level if the real surface has no holes"));
+            }
+        }
+        for (int w = 0; w < windows.length; w++) {
+            int a = d.windowStart[w];
+            int b = d.windowEnd[w];
+            // conduction band just outside each edge that is not the surface
+            double outsideBelow = b < nn - 1 ? ec[b] : Double.POSITIVE_INFINITY;
+            double outsideAbove = a > 0 ? d.ec[a - 1] - phi[a] : Double.POSITIVE_INFINITY;
+            double wall = Math.min(outsideBelow, outsideAbove);
+            double bound = 0;
+            int boundCount = 0;
+            for (Subband s : subbands) {
+                if (s.window() == w && s.energyEv() > wall) {
+                    bound += s.sheetDensity();
+                    boundCount++;
+                }
+            }
+            if (bound > WARN_SURFACE_HOLES_PER_M2 && bound > WARN_WINDOW_BOUND_FRACTION * wellSheetDensity[w]) {
+                out.add(new Warning(WarningKind.WINDOW_BOUND_SUBBAND, boundCount + (boundCount == 1 ? " subband" : " subbands")
+                        + " of window " + w + " (" + Decimals.format(Units.mToNm(windows[w][0])) + " to "
+                        + Decimals.format(Units.mToNm(windows[w][1]), "nm") + ") lie above the conduction band " + Decimals.format(wall, "eV")
+                        + " outside its edge and hold " + Decimals.format(Units.perM2ToPerCm2(bound), "cm^-2")
+                        + ": bound only by the window's wall; widen the window"));
+            }
+            double peak = 0;
+            for (int i = a; i <= b; i++) {
+                peak = Math.max(peak, n[i]);
+            }
+            for (int i : new int[] {a - 1, b + 1}) {
+                if (i >= 0 && i < nn && n[i] > WARN_EDGE_DENSITY_FRACTION * peak && n[i] > 0) {
+                    out.add(new Warning(WarningKind.WINDOW_EDGE_IN_ELECTRONS, "the " + (i < a ? "top" : "bottom")
+                            + " edge of window " + w + " (at " + Decimals.format(Units.mToNm(depth[i < a ? a : b]), "nm")
+                            + ") cuts through free electrons: " + Decimals.format(Units.perM3ToPerCm3(n[i]), "cm^-3")
+                            + " just outside against a peak of " + Decimals.format(Units.perM3ToPerCm3(peak), "cm^-3")
+                            + " inside; move the edge where the density is low"));
+                }
+            }
+        }
+        if (subbandLimitReached) {
+            out.add(new Warning(WarningKind.SUBBAND_LIMIT_REACHED,
+                    "a quantum window reached the subband limit; its density is too low"));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * What may make this solution mislead: the structure's own {@link Structure#warnings()}, then a
+     * surface hole gas under a free surface, window-bound subbands, window edges inside free
+     * electrons, and a reached subband limit (thresholds: the {@code WARN_...} constants).
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
     }
 
     private void checkFinite() {
@@ -357,8 +449,8 @@ public final class Solution {
     /**
      * A summary to read in jshell or a notebook: the bias, temperature and mesh; the 2DEG sheet
      * density and the holes; one line for each of the first {@value #SUBBANDS_SHOWN} subbands (in
-     * the order of {@link #subbands()}) and one for the rest together; the convergence record; and a
-     * warning when the subband limit was reached. For example:
+     * the order of {@link #subbands()}) and one for the rest together; the convergence record; and one
+     * line for each of its {@link #warnings()}. For example:
      *
      * <pre>
      * Solution (Schottky gate, barrier 1 eV, bias 0 V; 300 K; 412 nodes over 1825 nm):
@@ -399,9 +491,7 @@ public final class Solution {
                     .append(Decimals.format(rest, "cm^-2")).append(" together\n");
         }
         sb.append("  ").append(record);
-        if (subbandLimitReached) {
-            sb.append("\n  warning: a quantum window reached the subband limit; its density is too low");
-        }
+        sb.append(Warning.lines(warnings));
         return sb.toString();
     }
 }

@@ -10,6 +10,8 @@ import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * The result of a {@link BiasSweep}: per bias point the 2DEG sheet density, the gate charge, all
@@ -39,6 +41,7 @@ public final class BiasSweepResult implements CsvTable {
     private final List<PointFailure> failures;
     private final String[] status;
     private final CapacitanceVoltage cv;
+    private final List<Warning> warnings;
 
     BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, PointFailure.Reason[] reasons) {
         int n = grid.size();
@@ -72,6 +75,24 @@ public final class BiasSweepResult implements CsvTable {
         }
         this.failures = Collections.unmodifiableList(f);
         this.cv = new CapacitanceVoltage(bias, gateCharge);
+        String[] labels = new String[n];
+        for (int i = 0; i < n; i++) {
+            labels[i] = "V_g = " + Decimals.format(bias[i], "V");
+        }
+        this.warnings = Warning.union(structure.warnings().stream()
+                .filter(w -> w.kind() != WarningKind.GATE_BIAS_AT_OR_ABOVE_BARRIER).toList(),
+                PointWarnings.of(solutions, labels));
+    }
+
+    /**
+     * What may make this sweep mislead: the stack's own warnings (except its own gate bias, which is
+     * not one of the points), then each kind of warning that a converged point raised, once, at the
+     * first such point, with the count of the others.
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
     }
 
     /** {@return the structure as given to the sweep (its own bias is not one of the points, unless listed)} */
@@ -162,6 +183,19 @@ public final class BiasSweepResult implements CsvTable {
      *                                   the level is not crossed, or n_s never rises with V_g
      */
     public double thresholdVoltage(ThresholdDefinition definition) {
+        return threshold(definition).voltageV();
+    }
+
+    /**
+     * As {@link #thresholdVoltage(ThresholdDefinition)}, with a warning of kind
+     * {@link WarningKind#THRESHOLD_OUTSIDE_SWEPT_RANGE} when a linear extrapolation meets n_s = 0
+     * outside the swept biases (the tangent was then carried beyond what was computed).
+     *
+     * @param definition the definition (see {@link ThresholdDefinition})
+     * @return V_th with its warnings
+     * @throws InvalidParameterException as {@link #thresholdVoltage(ThresholdDefinition)}
+     */
+    public Threshold threshold(ThresholdDefinition definition) {
         Require.nonNull("threshold definition", definition);
         int n = bias.length;
         // ascending order of bias
@@ -174,9 +208,16 @@ public final class BiasSweepResult implements CsvTable {
             s[k] = sheet[i];
         }
         if (definition instanceof ThresholdDefinition.ConstantDensity c) {
-            return constantDensity(v, s, c.levelPerCm2());
+            return new Threshold(constantDensity(v, s, c.levelPerCm2()), definition, List.of());
         }
-        return linearExtrapolation(v, s);
+        double vth = linearExtrapolation(v, s);
+        if (vth < v[0] || vth > v[n - 1]) {
+            return new Threshold(vth, definition, List.of(new Warning(WarningKind.THRESHOLD_OUTSIDE_SWEPT_RANGE,
+                    "the linear extrapolation meets n_s = 0 at " + Decimals.format(vth, "V") + ", outside the swept "
+                            + "range [" + Decimals.format(v[0]) + ", " + Decimals.format(v[n - 1], "V")
+                            + "]; extend the sweep to confirm")));
+        }
+        return new Threshold(vth, definition, List.of());
     }
 
     private double constantDensity(double[] v, double[] s, double level) {
@@ -254,6 +295,6 @@ public final class BiasSweepResult implements CsvTable {
                 + Decimals.format(bias[bias.length - 1], "V") + ", " + (bias.length - failures.size()) + " converged"
                 + (failures.isEmpty() ? "" : ", " + failures.size() + " failed")
                 + (Double.isNaN(lo) ? "" : "; n_s from " + Decimals.format(lo) + " to " + Decimals.format(hi, "cm^-2"))
-                + "\n" + preview(10);
+                + Warning.lines(warnings) + "\n" + preview(10);
     }
 }
