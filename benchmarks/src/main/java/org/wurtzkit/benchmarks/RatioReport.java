@@ -323,7 +323,7 @@ public final class RatioReport {
         for (int i = 0; i < SweepBenchmark.POINTS; i++) {
             double v = SweepBenchmark.FROM_V + (SweepBenchmark.TO_V - SweepBenchmark.FROM_V) * i
                     / (SweepBenchmark.POINTS - 1);
-            Structure s = ref.withTop(TopBoundary.schottky(Scenarios.GATE_BARRIER_EV, v));
+            Structure s = ref.withTop(TopBoundary.schottky(Scenarios.GATE_BARRIER_EV).atBiasV(v));
             Solution c = solver.solve(s);
             co += c.convergence().iterations();
             cn += c.convergence().newtonIterations();

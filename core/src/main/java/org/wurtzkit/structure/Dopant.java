@@ -64,6 +64,28 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
         return new Dopant(Kind.ACCEPTOR, Units.perCm3ToPerM3(densityPerCm3), ionizationEnergyEv, ACCEPTOR_DEGENERACY);
     }
 
+    /**
+     * The SI twin of {@link #donorsPerCm3(double, double)}.
+     *
+     * @param densityPerM3       donor density (m^-3)
+     * @param ionizationEnergyEv E_c - E_D (eV)
+     * @return the dopant, degeneracy {@link #DONOR_DEGENERACY}
+     */
+    public static Dopant donorsPerM3(double densityPerM3, double ionizationEnergyEv) {
+        return new Dopant(Kind.DONOR, densityPerM3, ionizationEnergyEv, DONOR_DEGENERACY);
+    }
+
+    /**
+     * The SI twin of {@link #acceptorsPerCm3(double, double)}.
+     *
+     * @param densityPerM3       acceptor density (m^-3)
+     * @param ionizationEnergyEv E_A - E_v (eV)
+     * @return the dopant, degeneracy {@link #ACCEPTOR_DEGENERACY}
+     */
+    public static Dopant acceptorsPerM3(double densityPerM3, double ionizationEnergyEv) {
+        return new Dopant(Kind.ACCEPTOR, densityPerM3, ionizationEnergyEv, ACCEPTOR_DEGENERACY);
+    }
+
     /** {@return density (cm^-3)} */
     public double densityPerCm3() {
         return Units.perM3ToPerCm3(densityPerM3);

@@ -35,7 +35,7 @@ import org.wurtzkit.warnings.WarningKind;
  *         .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
  *         .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
  *         .grow(Layer.of("cap", Composition.GAN, 2 * NM))          // last grown = top
- *         .top(TopBoundary.schottky(1.0, 0.0))
+ *         .top(TopBoundary.schottky(1.0).atBiasV(0))
  *         .build();
  * }</pre>
  *
@@ -197,9 +197,19 @@ public final class Structure {
         return b;
     }
 
-    /** @param t temperature (K) @return a copy at that temperature */
+    /** @param temperatureK temperature (K), in (0, 2000] @return a copy at that temperature */
+    public Structure withTemperatureK(double temperatureK) {
+        return toBuilder().temperatureK(temperatureK).build();
+    }
+
+    /**
+     * @param t temperature (K)
+     * @return a copy at that temperature
+     * @deprecated the unit belongs in the name: use {@link #withTemperatureK(double)}
+     */
+    @Deprecated(since = "0.2", forRemoval = true)
     public Structure withTemperature(double t) {
-        return toBuilder().temperature(t).build();
+        return withTemperatureK(t);
     }
 
     /** @param boundary the new top boundary @return a copy with it */
@@ -509,10 +519,20 @@ public final class Structure {
             return this;
         }
 
-        /** @param t temperature in (0, 2000] K (default 300 K) @return this builder */
-        public Builder temperature(double t) {
-            this.temperatureK = BandGap.checkTemperature(t);
+        /** @param temperatureK temperature in (0, 2000] K (default 300 K) @return this builder */
+        public Builder temperatureK(double temperatureK) {
+            this.temperatureK = BandGap.checkTemperature(temperatureK);
             return this;
+        }
+
+        /**
+         * @param t temperature in (0, 2000] K
+         * @return this builder
+         * @deprecated the unit belongs in the name: use {@link #temperatureK(double)}
+         */
+        @Deprecated(since = "0.2", forRemoval = true)
+        public Builder temperature(double t) {
+            return temperatureK(t);
         }
 
         /**

@@ -72,10 +72,10 @@ class StructureWarningsTest {
     @Test
     void aTemperatureOutside20To1000KIsWarned() {
         Structure s = hemt(25, 2000).top(TopBoundary.schottky(1.0)).build();
-        assertEquals(List.of(WarningKind.TEMPERATURE_OUT_OF_RANGE), kinds(s.withTemperature(10)));
-        assertEquals(List.of(WarningKind.TEMPERATURE_OUT_OF_RANGE), kinds(s.withTemperature(1200)));
-        assertEquals(List.of(), kinds(s.withTemperature(20)));
-        assertEquals(List.of(), kinds(s.withTemperature(1000)));
+        assertEquals(List.of(WarningKind.TEMPERATURE_OUT_OF_RANGE), kinds(s.withTemperatureK(10)));
+        assertEquals(List.of(WarningKind.TEMPERATURE_OUT_OF_RANGE), kinds(s.withTemperatureK(1200)));
+        assertEquals(List.of(), kinds(s.withTemperatureK(20)));
+        assertEquals(List.of(), kinds(s.withTemperatureK(1000)));
     }
 
     @Test

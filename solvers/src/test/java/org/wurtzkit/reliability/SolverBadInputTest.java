@@ -54,7 +54,7 @@ class SolverBadInputTest {
 
     private static Structure hemt() {
         return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build();
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build();
     }
 
     private static SolverOptions newtonTolerance(double v) {
@@ -313,7 +313,7 @@ class SolverBadInputTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("uninterpolableGuesses")
     void uninterpolableInitialGuessIsRejectedByName(String label, double[] depth, double[] potential) {
-        Structure s = hemt().withTop(TopBoundary.freeSurface(1.65, 1e13));
+        Structure s = hemt().withTop(TopBoundary.freeSurfacePerCm2(1.65, 1e13));
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
                 () -> new SelfConsistentSolver().solve(s, depth, potential), label);
         assertTrue(e.parameter().contains("initial guess"), e.getMessage());
@@ -322,7 +322,7 @@ class SolverBadInputTest {
     @Test
     void donorAndAcceptorSheetsAtOneDepthAreAStructuralError() {
         Layer cap = Layer.of("cap", Composition.GAN, 10 * NM)
-                .withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02, 5 * NM))
+                .withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02).atOffset(5 * NM))
                 .withDeltaDoping(new DeltaDoping(Dopant.Kind.ACCEPTOR, 1e16, 0.17, 5 * NM));
         Structure s = hemt().toBuilder().grow(cap).build();
         BadInput.checkKind(() -> new SelfConsistentSolver().solve(s), ErrorKind.INVALID_STRUCTURE,
@@ -344,41 +344,40 @@ class SolverBadInputTest {
 
     static Stream<Arguments> extremesAllowed() {
         return Stream.of(
-                Arguments.of("1 K", (Supplier<Structure>) () -> hemt().withTemperature(1)),
-                Arguments.of("2000 K", (Supplier<Structure>) () -> hemt().withTemperature(2000)),
-                Arguments.of("gate -100 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1, -100))),
-                Arguments.of("gate +20 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1, 20))),
-                Arguments.of("barrier 0 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(0, 0))),
-                Arguments.of("barrier 6 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(6, 0))),
+                Arguments.of("1 K", (Supplier<Structure>) () -> hemt().withTemperatureK(1)),
+                Arguments.of("2000 K", (Supplier<Structure>) () -> hemt().withTemperatureK(2000)),
+                Arguments.of("gate -100 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1).atBiasV(-100))),
+                Arguments.of("gate +20 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1).atBiasV(20))),
+                Arguments.of("barrier 0 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(0).atBiasV(0))),
+                Arguments.of("barrier 6 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(6).atBiasV(0))),
                 Arguments.of("surface donors 6 eV deep",
-                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurface(6, 1e13))),
+                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurfacePerCm2(6, 1e13))),
                 Arguments.of("surface donors 1e16 cm^-2",
-                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurface(1.65, 1e16))),
+                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurfacePerCm2(1.65, 1e16))),
                 Arguments.of("bottom E_c - E_F = -1 eV", (Supplier<Structure>) () -> hemt().toBuilder()
                         .bottom(BottomBoundary.fixedFermiLevel(-1)).build()),
                 Arguments.of("bottom E_c - E_F = 7 eV", (Supplier<Structure>) () -> hemt().toBuilder()
                         .bottom(BottomBoundary.fixedFermiLevel(7)).build()),
                 Arguments.of("1 mm buffer", (Supplier<Structure>) () -> Structure.builder(SET)
                         .grow(Layer.of("buffer", Composition.GAN, Layer.MAX_THICKNESS))
-                        .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build()),
+                        .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build()),
                 Arguments.of("1e22 cm^-3 donors", (Supplier<Structure>) () -> hemt().toBuilder()
                         .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDopant(Dopant.donorsPerCm3(1e22, 0.02))).build()),
                 Arguments.of("1e22 cm^-3 acceptors", (Supplier<Structure>) () -> hemt().toBuilder()
                         .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDopant(Dopant.acceptorsPerCm3(1e22, 0.17)))
                         .build()),
                 Arguments.of("1e15 cm^-2 delta sheet", (Supplier<Structure>) () -> hemt().toBuilder()
-                        .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDeltaDoping(DeltaDoping.donorsPerCm2(1e15, 0.02,
-                                2 * NM))).build()),
+                        .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDeltaDoping(DeltaDoping.donorsPerCm2(1e15, 0.02).atOffset(2 * NM))).build()),
                 Arguments.of("AlN 200 nm on GaN", (Supplier<Structure>) () -> Structure.builder(SET)
                         .grow(Layer.of("buffer", Composition.GAN, 1000 * NM)).grow(Layer.of("b", Composition.ALN, 200 * NM))
-                        .top(TopBoundary.schottky(1, 0)).build()),
+                        .top(TopBoundary.schottky(1).atBiasV(0)).build()),
                 Arguments.of("InN 10 nm on GaN", (Supplier<Structure>) () -> Structure.builder(SET)
                         .grow(Layer.of("buffer", Composition.GAN, 1000 * NM)).grow(Layer.of("b", Composition.INN, 10 * NM))
-                        .top(TopBoundary.schottky(1, 0)).build()),
+                        .top(TopBoundary.schottky(1).atBiasV(0)).build()),
                 Arguments.of("1 pm layer", (Supplier<Structure>) () -> hemt().toBuilder()
                         .grow(Layer.of("c", Composition.alGaN(0.5), 1e-12)).build()),
                 Arguments.of("single 0.5 nm layer", (Supplier<Structure>) () -> Structure.builder(SET)
-                        .grow(Layer.of("b", Composition.GAN, 0.5 * NM)).top(TopBoundary.schottky(1, 0)).build()));
+                        .grow(Layer.of("b", Composition.GAN, 0.5 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build()));
     }
 
     /** Every documented end point is either solved (with its invariants) or fails as documented. */

@@ -226,7 +226,7 @@ class SymmetryProperties {
                     .withDopant(Dopant.donorsPerCm3(1e16, 0.02)));
         }
         for (Structure.Builder b : List.of(plain, shifted)) {
-            b.top(TopBoundary.schottky(1.0, bias));
+            b.top(TopBoundary.schottky(1.0).atBiasV(bias));
             if (fixedBottom) {
                 b.bottom(BottomBoundary.fixedFermiLevel(0.4));
             }
@@ -283,13 +283,13 @@ class SymmetryProperties {
             @ForAll @DoubleRange(min = 77, max = 500) double t) {
         WurtziteMaterial gan = unpolarized(Composition.GAN);
         WurtziteMaterial algan = unpolarized(Composition.alGaN(x));
-        Structure s = Structure.builder(SET).temperature(t)
+        Structure s = Structure.builder(SET).temperatureK(t)
                 .grow(Layer.of("outer", gan, 20 * NM))
                 .grow(Layer.of("barrier", algan, barrierNm * NM).withDopant(Dopant.donorsPerCm3(nd, 0.02)))
                 .grow(Layer.of("well", gan, wellNm * NM))
                 .grow(Layer.of("barrier", algan, barrierNm * NM).withDopant(Dopant.donorsPerCm3(nd, 0.02)))
                 .grow(Layer.of("outer", gan, 20 * NM))
-                .top(TopBoundary.schottky(phiB, 0)).bottom(BottomBoundary.fixedFermiLevel(phiB)).build();
+                .top(TopBoundary.schottky(phiB).atBiasV(0)).bottom(BottomBoundary.fixedFermiLevel(phiB)).build();
         double total = s.totalThickness();
         SelfConsistentSolver solver = new SelfConsistentSolver(tight(QuantumRegion.windows(
                 new QuantumRegion.Window(0, total))));
@@ -364,13 +364,13 @@ class SymmetryProperties {
 
     private static Structure mirrorBuild(List<Spec> bottomUp, boolean mirrored, double topEc, double bottomEc,
             double t, ParameterSet set) {
-        Structure.Builder b = Structure.builder(set).temperature(t).onRelaxed(Composition.GAN)
+        Structure.Builder b = Structure.builder(set).temperatureK(t).onRelaxed(Composition.GAN)
                 .polarity(mirrored ? Polarity.N_FACE : Polarity.METAL_FACE);
         for (int i = 0; i < bottomUp.size(); i++) {
             int k = mirrored ? bottomUp.size() - 1 - i : i;
             b.grow(bottomUp.get(k).layer("L" + k, mirrored));
         }
-        return b.top(TopBoundary.schottky(topEc, 0)).bottom(BottomBoundary.fixedFermiLevel(bottomEc)).build();
+        return b.top(TopBoundary.schottky(topEc).atBiasV(0)).bottom(BottomBoundary.fixedFermiLevel(bottomEc)).build();
     }
 
     @Property(tries = 60, edgeCases = EdgeCasesMode.NONE, shrinking = ShrinkingMode.OFF)

@@ -402,6 +402,32 @@ public final class Solution {
         return holeSheet;
     }
 
+    /** {@return all holes of the stack (cm^-2); the twin of {@link #holeSheetDensity()}} */
+    public double holeSheetDensityPerCm2() {
+        return Units.perM2ToPerCm2(holeSheet);
+    }
+
+    /** {@return all electrons of the stack (cm^-2); the twin of {@link #electronSheetDensity()}} */
+    public double electronSheetDensityPerCm2() {
+        return Units.perM2ToPerCm2(electronSheet);
+    }
+
+    /**
+     * The 2DEG sheet density in SI units; the twin of {@link #sheetDensityPerCm2()}.
+     *
+     * @return sheet density (m^-2)
+     */
+    public double sheetDensity() {
+        if (wellSheetDensity.length == 0) {
+            return electronSheet;
+        }
+        double s = 0;
+        for (double v : wellSheetDensity) {
+            s += v;
+        }
+        return s;
+    }
+
     /**
      * The 2DEG sheet density: the subband electrons of all windows, or, for a solve without quantum
      * windows, all electrons of the stack.

@@ -134,6 +134,15 @@ public final class BiasSweepResult implements CsvTable {
         return allElectrons.clone();
     }
 
+    /** {@return all electrons of the stack (cm^-2); the twin of {@link #electronSheetDensity()}} */
+    public double[] electronSheetDensityPerCm2() {
+        double[] out = new double[allElectrons.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = Units.perM2ToPerCm2(allElectrons[i]);
+        }
+        return out;
+    }
+
     /** {@return outer Schroedinger-Poisson iterations per point, -1 for a failed point} */
     public int[] iterations() {
         return iterations.clone();

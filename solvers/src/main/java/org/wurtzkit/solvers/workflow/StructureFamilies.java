@@ -115,7 +115,7 @@ public final class StructureFamilies {
         return b.onInPlaneLattice(template.referenceLatticeA())
                 .polarity(template.polarity())
                 .polarizationModel(template.polarizationModel())
-                .temperature(template.temperatureK())
+                .temperatureK(template.temperatureK())
                 .top(template.top())
                 .bottom(template.bottom())
                 .build();

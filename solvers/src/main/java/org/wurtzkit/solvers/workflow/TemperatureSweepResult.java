@@ -122,6 +122,15 @@ public final class TemperatureSweepResult implements CsvTable {
         return sheet.clone();
     }
 
+    /** {@return 2DEG sheet density (m^-2); the twin of {@link #sheetDensityPerCm2()}} */
+    public double[] sheetDensity() {
+        double[] out = new double[sheet.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = org.wurtzkit.units.Units.perCm2ToPerM2(sheet[i]);
+        }
+        return out;
+    }
+
     /** {@return gate charge (C/m&sup2;), 0 for a free surface} */
     public double[] gateCharge() {
         return gateCharge.clone();

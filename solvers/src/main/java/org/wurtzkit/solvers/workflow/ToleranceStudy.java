@@ -262,7 +262,7 @@ public final class ToleranceStudy {
         }
         return b.polarity(template.polarity())
                 .polarizationModel(template.polarizationModel())
-                .temperature(temperature)
+                .temperatureK(temperature)
                 .top(top)
                 .bottom(template.bottom())
                 .build();

@@ -44,11 +44,11 @@ class SolutionWarningsTest {
     @Test
     void aFreeSurfaceWithoutDonorsWarnsOfAHoleGas() {
         SelfConsistentSolver solver = new SelfConsistentSolver(COARSE);
-        Solution bare = solver.solve(hemt(TopBoundary.freeSurface(1.65, 0)));
+        Solution bare = solver.solve(hemt(TopBoundary.freeSurfacePerCm2(1.65, 0)));
         assertEquals(List.of(WarningKind.SURFACE_HOLE_GAS), kinds(bare), bare.toString());
         assertTrue(bare.holeSheetDensity() > Solution.WARN_SURFACE_HOLES_PER_M2);
         assertTrue(bare.toString().contains("\n  warning: a hole gas of "), bare.toString());
-        Solution pinned = solver.solve(hemt(TopBoundary.freeSurface(1.0, 5e13)));
+        Solution pinned = solver.solve(hemt(TopBoundary.freeSurfacePerCm2(1.0, 5e13)));
         assertEquals(List.of(), kinds(pinned), pinned.toString());
     }
 
@@ -80,7 +80,7 @@ class SolutionWarningsTest {
 
     @Test
     void aStructureWarningIsCarriedByItsSolution() {
-        Solution s = new SelfConsistentSolver(COARSE).solve(hemt(TopBoundary.schottky(1.0)).withTemperature(1100));
+        Solution s = new SelfConsistentSolver(COARSE).solve(hemt(TopBoundary.schottky(1.0)).withTemperatureK(1100));
         assertTrue(kinds(s).contains(WarningKind.TEMPERATURE_OUT_OF_RANGE), s.toString());
     }
 }

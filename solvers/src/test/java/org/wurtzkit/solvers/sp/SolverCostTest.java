@@ -32,7 +32,7 @@ class SolverCostTest {
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
                 .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(1.0, biasV))
+                .top(TopBoundary.schottky(1.0).atBiasV(biasV))
                 .build();
     }
 
