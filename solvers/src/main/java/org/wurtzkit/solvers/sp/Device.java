@@ -164,8 +164,10 @@ final class Device {
                 speciesDensity[li][j] = d.densityPerM3();
                 speciesEnergy[li][j] = d.ionizationEnergyEv();
                 speciesDegeneracy[li][j] = d.degeneracy();
-                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR ? ChargeSpecies.SHALLOW_DONOR
-                        : ChargeSpecies.SHALLOW_ACCEPTOR;
+                boolean full = d.ionization() == Dopant.Ionization.FULL;
+                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR
+                        ? (full ? ChargeSpecies.FULLY_IONIZED_DONOR : ChargeSpecies.SHALLOW_DONOR)
+                        : (full ? ChargeSpecies.FULLY_IONIZED_ACCEPTOR : ChargeSpecies.SHALLOW_ACCEPTOR);
                 j++;
             }
             for (DeepLevel d : l.deepLevels()) {
@@ -274,6 +276,12 @@ final class Device {
                     out.add(new double[] {top, bottom});
                 }
             }
+            return out;
+        }
+        if (region instanceof QuantumRegion.BelowDeepestInterface b) {
+            double[] itf = s.interfaceDepths();
+            double deepest = itf.length == 0 ? 0 : itf[itf.length - 1];
+            out.add(new double[] {0, Math.min(total, deepest + b.depthBelow())});
             return out;
         }
         for (QuantumRegion.Window w : ((QuantumRegion.Windows) region).windows()) {

@@ -11,7 +11,8 @@ import org.wurtzkit.units.Units;
  * over the subbands of the effective-mass Schroedinger equation (wavefunction zero at the window's
  * two ends); outside it, and for holes everywhere, densities are classical (Fermi-Dirac, 3D).
  */
-public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRegion.None, QuantumRegion.Windows {
+public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRegion.BelowDeepestInterface,
+        QuantumRegion.None, QuantumRegion.Windows {
 
     /**
      * The default: a window reaching a given distance above and below every interface of the stack
@@ -32,6 +33,28 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
         public String toString() {
             return "automatic quantum windows, " + Decimals.format(extension * 1e9, "nm")
                     + " on both sides of every interface";
+        }
+    }
+
+    /**
+     * One window from the surface to a given distance below the deepest interface of the stack,
+     * clipped to the stack (for a stack without interfaces: from the surface down to that distance).
+     * Unlike {@link Automatic} it follows the stack: a thicker barrier moves the window's bottom with
+     * the channel, and the window never splits in two however far apart the interfaces are.
+     *
+     * @param depthBelow how far the window reaches below the deepest interface (m), in [1 nm, 10 um]
+     */
+    record BelowDeepestInterface(double depthBelow) implements QuantumRegion {
+        /** Validates. */
+        public BelowDeepestInterface {
+            Require.inRange("quantum window depth below the deepest interface (m)", depthBelow, 1e-9, 1e-5);
+        }
+
+        /** @return e.g. {@code "one quantum window from the surface to 40 nm below the deepest interface"} */
+        @Override
+        public String toString() {
+            return "one quantum window from the surface to " + Decimals.format(depthBelow * 1e9, "nm")
+                    + " below the deepest interface";
         }
     }
 
@@ -102,6 +125,14 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
     /** {@return the default automatic region: 40 nm on both sides of every interface} */
     static QuantumRegion automatic() {
         return new Automatic(40 * Units.NM);
+    }
+
+    /**
+     * @param nm how far the window reaches below the deepest interface (nm), in [1, 10000]
+     * @return one window from the surface to that depth below the deepest interface
+     */
+    static QuantumRegion belowDeepestInterfaceNm(double nm) {
+        return new BelowDeepestInterface(nm * Units.NM);
     }
 
     /** {@return no quantum region} */

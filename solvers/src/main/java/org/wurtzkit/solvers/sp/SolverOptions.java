@@ -17,16 +17,18 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
  * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
+ * @param densityOfStatesMass   which in-plane mass sets each subband's 2D density of states; default
+ *                              {@link DensityOfStatesMass#WAVEFUNCTION_WEIGHTED}
  *
  * <p>Physical model choices (polarization model, band line-up, strain shifts of the band edges)
  * live on the {@link org.wurtzkit.structure.Structure}; these options are numerics only.
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
         double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
-        HoleFermiLevel holeFermiLevel) {
+        HoleFermiLevel holeFermiLevel, DensityOfStatesMass densityOfStatesMass) {
 
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
-            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE);
+            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
 
     /** Validates every field. */
     public SolverOptions {
@@ -40,6 +42,28 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         Require.inRange("maxSubbands", maxSubbands, 1, 2000);
         Require.inRange("subbandCutoffKT", subbandCutoffKT, 1, 200);
         Require.nonNull("hole Fermi level", holeFermiLevel);
+        Require.nonNull("density-of-states mass", densityOfStatesMass);
+    }
+
+    /**
+     * The options with the default {@link DensityOfStatesMass#WAVEFUNCTION_WEIGHTED}.
+     *
+     * @param tolerance           see the class documentation
+     * @param maxIterations       see the class documentation
+     * @param newtonTolerance     see the class documentation
+     * @param maxNewtonIterations see the class documentation
+     * @param maxNewtonStep       see the class documentation
+     * @param mesh                see the class documentation
+     * @param quantumRegion       see the class documentation
+     * @param maxSubbands         see the class documentation
+     * @param subbandCutoffKT     see the class documentation
+     * @param holeFermiLevel      see the class documentation
+     */
+    public SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
+            double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
+            HoleFermiLevel holeFermiLevel) {
+        this(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
     }
 
     /** {@return the defaults listed in the class documentation} */
@@ -50,60 +74,66 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     /** @param v tolerance (V) @return a copy */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v outer iteration budget @return a copy */
     public SolverOptions withMaxIterations(int v) {
         return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v Newton tolerance (V) @return a copy */
     public SolverOptions withNewtonTolerance(double v) {
         return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v Newton step budget per Poisson solve @return a copy */
     public SolverOptions withMaxNewtonIterations(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v largest Newton update (V) @return a copy */
     public SolverOptions withMaxNewtonStep(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v mesh policy @return a copy */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v quantum region @return a copy */
     public SolverOptions withQuantumRegion(QuantumRegion v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v most subbands per window @return a copy */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, v, subbandCutoffKT, holeFermiLevel);
+                quantumRegion, v, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v subband cut-off above E_F in kT @return a copy */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, v, holeFermiLevel);
+                quantumRegion, maxSubbands, v, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v holes' quasi-Fermi level @return a copy */
     public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, v);
+                quantumRegion, maxSubbands, subbandCutoffKT, v, densityOfStatesMass);
+    }
+
+    /** @param v which mass sets the 2D density of states @return a copy */
+    public SolverOptions withDensityOfStatesMass(DensityOfStatesMass v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, v);
     }
 }
