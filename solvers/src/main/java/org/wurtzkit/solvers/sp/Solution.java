@@ -52,6 +52,8 @@ public final class Solution {
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
     private final List<Warning> warnings;
+    private final List<InterfaceEdges> interfaceEdges;
+    private final List<WellMinimum> wellMinima;
 
     /**
      * Holes in the top layer under a free surface above this sheet density (m^-2, 1e10 cm^-2) raise
@@ -172,6 +174,58 @@ public final class Solution {
         subbands = Collections.unmodifiableList(bands);
         checkFinite();
         warnings = collectWarnings(d, phi);
+        interfaceEdges = readInterfaces(d, phi);
+        List<WellMinimum> minima = new ArrayList<>(windows.length);
+        for (int w = 0; w < windows.length; w++) {
+            int best = d.windowStart[w];
+            double lowest = Double.POSITIVE_INFINITY;
+            for (int i = d.windowStart[w]; i <= d.windowEnd[w]; i++) {
+                // both sides of a node: the cells above (i - 1) and below (i)
+                double e = Math.min(i > 0 ? d.ec[i - 1] : d.ec[0], i < nn - 1 ? d.ec[i] : d.ec[nn - 2]) - phi[i];
+                if (e < lowest) {
+                    lowest = e;
+                    best = i;
+                }
+            }
+            minima.add(new WellMinimum(w, depth[best], lowest));
+        }
+        wellMinima = List.copyOf(minima);
+    }
+
+    private List<InterfaceEdges> readInterfaces(Device d, double[] phi) {
+        double[] at = structure.interfaceDepths();
+        List<org.wurtzkit.structure.LayerState> layers = structure.layerStates();
+        List<InterfaceEdges> out = new ArrayList<>(at.length);
+        for (int j = 0; j < at.length; j++) {
+            int i = java.util.Arrays.binarySearch(depth, at[j]);
+            if (i < 0) { // an interface is a mesh node; take the nearest one if round-off moved it
+                int ins = -i - 1;
+                i = ins == 0 ? 0 : ins >= depth.length ? depth.length - 1
+                        : at[j] - depth[ins - 1] <= depth[ins] - at[j] ? ins - 1 : ins;
+            }
+            out.add(new InterfaceEdges(j, depth[i], layers.get(j).layer().name(), layers.get(j + 1).layer().name(),
+                    d.ec[i - 1] - phi[i], d.ec[i] - phi[i], d.ev[i - 1] - phi[i], d.ev[i] - phi[i]));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The band edges on both sides of every internal interface, shallowest first.
+     *
+     * @return one record per interface of {@link Structure#interfaceDepths()}
+     */
+    public List<InterfaceEdges> interfaceEdges() {
+        return interfaceEdges;
+    }
+
+    /**
+     * The lowest conduction-band edge of each quantum window (where its well bottoms out); empty
+     * for a classical solve.
+     *
+     * @return one record per window of {@link #quantumWindows()}
+     */
+    public List<WellMinimum> wellMinima() {
+        return wellMinima;
     }
 
     private List<Warning> collectWarnings(Device d, double[] phi) {
