@@ -75,7 +75,7 @@ public final class Structure {
         this.polarity = b.polarity;
         this.polarizationModel = b.polarizationModel != null ? b.polarizationModel
                 : parameters.recommendedPolarizationModel();
-        this.bandAlignment = b.bandAlignment;
+        this.bandAlignment = b.bandAlignment != null ? b.bandAlignment : BandAlignment.recommendedFor(parameters);
         this.strainShiftsBandEdges = b.strainShiftsBandEdges;
         this.temperatureK = b.temperatureK;
         this.top = b.top;
@@ -437,7 +437,7 @@ public final class Structure {
         private double referenceLatticeA = -1;
         private Polarity polarity = Polarity.METAL_FACE;
         private PolarizationModel polarizationModel;
-        private BandAlignment bandAlignment = BandAlignment.valenceBandTable();
+        private BandAlignment bandAlignment;
         private boolean strainShiftsBandEdges;
         private double temperatureK = 300;
         private TopBoundary top;
@@ -499,8 +499,8 @@ public final class Structure {
 
         /**
          * @param alignment how the band edges of the materials line up; default
-         *                  {@link BandAlignment#valenceBandTable()} (the parameter set's tabulated
-         *                  valence-band maxima)
+         *                  {@link BandAlignment#recommendedFor(ParameterSet)}: the rule the parameter
+         *                  set declares, else its tabulated valence-band maxima
          * @return this builder
          */
         public Builder bandAlignment(BandAlignment alignment) {
