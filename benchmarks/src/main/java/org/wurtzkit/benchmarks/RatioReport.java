@@ -24,7 +24,7 @@ import org.openjdk.jmh.runner.options.OptionsBuilder;
 import org.openjdk.jmh.runner.options.TimeValue;
 import org.openjdk.jmh.runner.options.VerboseMode;
 import org.openjdk.jmh.util.Statistics;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -313,7 +313,7 @@ public final class RatioReport {
         Structure ref = Scenarios.referenceHemt();
         Solution cold = solver.solve(ref);
         Solution restart = solver.solve(ref, cold);
-        Solution classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()))
+        Solution classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumWindows(QuantumWindows.none()))
                 .solve(ref);
         int co = 0;
         int cn = 0;

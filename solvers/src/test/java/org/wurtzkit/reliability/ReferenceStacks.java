@@ -11,7 +11,7 @@ import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarity;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -34,7 +34,7 @@ final class ReferenceStacks {
 
     /** The classical solver used for the "classical" cases. */
     static final SelfConsistentSolver CLASSICAL = new SelfConsistentSolver(SolverOptions.defaults()
-            .withQuantumRegion(QuantumRegion.none()));
+            .withQuantumWindows(QuantumWindows.none()));
 
     /** Fuzz seeds (of {@link Stacks#random(long)}) whose stacks converge. */
     static final long[] FUZZ_SEEDS = {1, 2, 3, 5, 8};

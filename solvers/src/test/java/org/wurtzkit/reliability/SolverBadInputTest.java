@@ -24,7 +24,7 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
 import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
 import org.wurtzkit.solvers.sp.HoleFermiLevel;
 import org.wurtzkit.solvers.sp.NotConvergedException;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
@@ -38,7 +38,7 @@ import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 
 /**
- * Bad-input table of the solvers module (issue #7): solver options, mesh policy, quantum regions
+ * Bad-input table of the solvers module (issue #7): solver options, mesh policy, quantum windows
  * (including windows outside the stack), band alignment, the effective-mass Hamiltonian, and
  * structures that only the solver can judge. Expected ranges are those of each entry point's
  * Javadoc. A second table drives the solver with the extreme values that the documentation allows:
@@ -59,12 +59,12 @@ class SolverBadInputTest {
 
     private static SolverOptions newtonTolerance(double v) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), v, D.maxNewtonIterations(), D.maxNewtonStep(), D.mesh(),
-                D.quantumRegion(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel());
+                D.quantumWindows(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel());
     }
 
     private static SolverOptions nulls(int which) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), D.newtonTolerance(), D.maxNewtonIterations(),
-                D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumRegion(), D.maxSubbands(),
+                D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumWindows(), D.maxSubbands(),
                 D.subbandCutoffKT(), which == 2 ? null : D.holeFermiLevel());
     }
 
@@ -107,11 +107,11 @@ class SolverBadInputTest {
                 row("cut-off +inf", () -> D.withSubbandCutoffKT(INF), cut, INF, "[1, 200]"),
                 row("cut-off 201 kT", () -> D.withSubbandCutoffKT(201), cut, 201.0, "[1, 200]"),
                 row("null mesh policy", () -> D.withMesh(null), "mesh policy", "null", "(non-null)"),
-                row("null quantum region", () -> D.withQuantumRegion(null), "quantum region", "null", "(non-null)"),
+                row("null quantum windows", () -> D.withQuantumWindows(null), "quantum windows", "null", "(non-null)"),
                 row("null hole Fermi level", () -> D.withHoleFermiLevel(null), "hole Fermi level", "null", "(non-null)"),
                 row("null band alignment", () -> Structure.builder(SET).bandAlignment(null), "band alignment", "null", "(non-null)"),
                 row("null mesh policy (constructor)", () -> nulls(0), "mesh policy", "null", "(non-null)"),
-                row("null quantum region (constructor)", () -> nulls(1), "quantum region", "null", "(non-null)"),
+                row("null quantum windows (constructor)", () -> nulls(1), "quantum windows", "null", "(non-null)"),
                 row("null hole Fermi level (constructor)", () -> nulls(2), "hole Fermi level", "null", "(non-null)"),
                 row("conduction-band fraction NaN", () -> BandAlignment.conductionBandFraction(NAN),
                         "conduction-band offset fraction", NAN, "[0, 1]"),
@@ -161,7 +161,7 @@ class SolverBadInputTest {
         BadInput.check(c);
     }
 
-    static Stream<Arguments> quantumRegions() {
+    static Stream<Arguments> quantumWindowsCases() {
         String ext = "quantum window extension around an interface (m)";
         String extr = "[1.0E-9, 1.0E-6]";
         String top = "quantum window top depth (m)";
@@ -170,39 +170,39 @@ class SolverBadInputTest {
         double ten = 10 * NM;
         double twenty = 20 * NM;
         return Stream.of(
-                row("extension NaN", () -> new QuantumRegion.Automatic(NAN), ext, NAN, extr),
-                row("extension zero", () -> new QuantumRegion.Automatic(0), ext, 0.0, extr),
-                row("extension 0.5 nm", () -> new QuantumRegion.Automatic(0.5e-9), ext, 0.5e-9, extr),
-                row("extension 2 um", () -> new QuantumRegion.Automatic(2e-6), ext, 2e-6, extr),
-                row("window top negative", () -> new QuantumRegion.Window(-1e-9, 5e-9), top, -1e-9, "[0, +inf), finite"),
-                row("window top NaN", () -> new QuantumRegion.Window(NAN, 5e-9), top, NAN, "[0, +inf), finite"),
-                row("window bottom NaN", () -> new QuantumRegion.Window(0, NAN), bot, NAN, "(finite)"),
-                row("window bottom +inf", () -> new QuantumRegion.Window(0, INF), bot, INF, "(finite)"),
-                row("window thinner than 1 nm", () -> new QuantumRegion.Window(5e-9, 5.5e-9), bot, 5.5e-9,
+                row("extension NaN", () -> new QuantumWindows.Automatic(NAN), ext, NAN, extr),
+                row("extension zero", () -> new QuantumWindows.Automatic(0), ext, 0.0, extr),
+                row("extension 0.5 nm", () -> new QuantumWindows.Automatic(0.5e-9), ext, 0.5e-9, extr),
+                row("extension 2 um", () -> new QuantumWindows.Automatic(2e-6), ext, 2e-6, extr),
+                row("window top negative", () -> new QuantumWindows.Window(-1e-9, 5e-9), top, -1e-9, "[0, +inf), finite"),
+                row("window top NaN", () -> new QuantumWindows.Window(NAN, 5e-9), top, NAN, "[0, +inf), finite"),
+                row("window bottom NaN", () -> new QuantumWindows.Window(0, NAN), bot, NAN, "(finite)"),
+                row("window bottom +inf", () -> new QuantumWindows.Window(0, INF), bot, INF, "(finite)"),
+                row("window thinner than 1 nm", () -> new QuantumWindows.Window(5e-9, 5.5e-9), bot, 5.5e-9,
                         "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
-                row("window upside down", () -> new QuantumRegion.Window(5e-9, 4e-9), bot, 4e-9,
+                row("window upside down", () -> new QuantumWindows.Window(5e-9, 4e-9), bot, 4e-9,
                         "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
-                row("no windows", () -> QuantumRegion.windows(), "number of quantum windows", "0",
-                        "[1, ...) (use QuantumRegion.none())"),
-                row("overlapping windows", () -> QuantumRegion.windows(QuantumRegion.Window.nm(0, 20),
-                        QuantumRegion.Window.nm(10, 30)), "top of quantum window 1 (m)", ten,
+                row("no windows", () -> QuantumWindows.explicit(), "number of quantum windows", "0",
+                        "[1, ...) (use QuantumWindows.none())"),
+                row("overlapping windows", () -> QuantumWindows.explicit(QuantumWindows.Window.nm(0, 20),
+                        QuantumWindows.Window.nm(10, 30)), "top of quantum window 1 (m)", ten,
                         "[" + twenty + ", ...) (below the previous window, no overlap)"),
-                row("window reaching below the stack", () -> new SelfConsistentSolver(D.withQuantumRegion(
-                        QuantumRegion.windows(QuantumRegion.Window.nm(0, 1100)))).solve(hemt()), bot, 1100 * NM,
+                row("window reaching below the stack", () -> new SelfConsistentSolver(D.withQuantumWindows(
+                        QuantumWindows.explicit(QuantumWindows.Window.nm(0, 1100)))).solve(hemt()), bot, 1100 * NM,
                         "[" + 1e-9 + ", " + total + "] (inside the stack, whose thickness is " + total + " m)"),
-                row("window entirely below the stack", () -> new SelfConsistentSolver(D.withQuantumRegion(
-                        QuantumRegion.windows(QuantumRegion.Window.nm(5000, 5050)))).solve(hemt()), bot, 5050 * NM,
+                row("window entirely below the stack", () -> new SelfConsistentSolver(D.withQuantumWindows(
+                        QuantumWindows.explicit(QuantumWindows.Window.nm(5000, 5050)))).solve(hemt()), bot, 5050 * NM,
                         "[" + (5000 * NM + 1e-9) + ", " + total + "] (inside the stack, whose thickness is " + total
                                 + " m)"),
                 row("window too thin for a coarse mesh", () -> new SelfConsistentSolver(D.withMesh(
-                        new MeshPolicy(1e-6, 2, 1e-5)).withQuantumRegion(QuantumRegion.windows(
-                                QuantumRegion.Window.nm(100, 101.5)))).solve(hemt()), "quantum window 0 node count", "3",
+                        new MeshPolicy(1e-6, 2, 1e-5)).withQuantumWindows(QuantumWindows.explicit(
+                                QuantumWindows.Window.nm(100, 101.5)))).solve(hemt()), "quantum window 0 node count", "3",
                         "[5, ...) (window too thin for the mesh)"));
     }
 
     @ParameterizedTest(name = "{0}")
-    @MethodSource("quantumRegions")
-    void quantumRegionRejects(BadInput.Case c) {
+    @MethodSource("quantumWindowsCases")
+    void quantumWindowsReject(BadInput.Case c) {
         BadInput.check(c);
     }
 

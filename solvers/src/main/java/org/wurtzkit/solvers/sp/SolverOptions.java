@@ -13,7 +13,7 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param maxNewtonIterations   Newton steps allowed per Poisson solve; default 200, in [1, 100000]
  * @param maxNewtonStep         largest change of the potential at any node in one Newton step (V); default 0.5, in [1e-3, 10]
  * @param mesh                  mesh policy; default {@link MeshPolicy#DEFAULT}
- * @param quantumRegion         where electrons are quantum; default {@link QuantumRegion#automatic()}
+ * @param quantumWindows         where electrons are quantum; default {@link QuantumWindows#automatic()}
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
  * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
@@ -24,11 +24,11 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * live on the {@link org.wurtzkit.structure.Structure}; these options are numerics only.
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
-        double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
+        double maxNewtonStep, MeshPolicy mesh, QuantumWindows quantumWindows, int maxSubbands, double subbandCutoffKT,
         HoleFermiLevel holeFermiLevel, DensityOfStatesMass densityOfStatesMass) {
 
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
-            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
+            QuantumWindows.automatic(), 60, 15, HoleFermiLevel.GATE, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
 
     /** Validates every field. */
     public SolverOptions {
@@ -38,7 +38,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         Require.inRange("maxNewtonIterations", maxNewtonIterations, 1, 100000);
         Require.inRange("maxNewtonStep (V)", maxNewtonStep, 1e-3, 10);
         Require.nonNull("mesh policy", mesh);
-        Require.nonNull("quantum region", quantumRegion);
+        Require.nonNull("quantum windows", quantumWindows);
         Require.inRange("maxSubbands", maxSubbands, 1, 2000);
         Require.inRange("subbandCutoffKT", subbandCutoffKT, 1, 200);
         Require.nonNull("hole Fermi level", holeFermiLevel);
@@ -54,15 +54,15 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      * @param maxNewtonIterations see the class documentation
      * @param maxNewtonStep       see the class documentation
      * @param mesh                see the class documentation
-     * @param quantumRegion       see the class documentation
+     * @param quantumWindows       see the class documentation
      * @param maxSubbands         see the class documentation
      * @param subbandCutoffKT     see the class documentation
      * @param holeFermiLevel      see the class documentation
      */
     public SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
-            double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
+            double maxNewtonStep, MeshPolicy mesh, QuantumWindows quantumWindows, int maxSubbands, double subbandCutoffKT,
             HoleFermiLevel holeFermiLevel) {
-        this(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
+        this(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
                 maxSubbands, subbandCutoffKT, holeFermiLevel, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
     }
 
@@ -74,41 +74,41 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     /** @param v tolerance (V) @return a copy */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v outer iteration budget @return a copy */
     public SolverOptions withMaxIterations(int v) {
-        return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
+        return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
                 maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v Newton tolerance (V) @return a copy */
     public SolverOptions withNewtonTolerance(double v) {
-        return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
+        return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
                 maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v Newton step budget per Poisson solve @return a copy */
     public SolverOptions withMaxNewtonIterations(int v) {
-        return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumWindows,
                 maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v largest Newton update (V) @return a copy */
     public SolverOptions withMaxNewtonStep(double v) {
-        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumWindows,
                 maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v mesh policy @return a copy */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
-    /** @param v quantum region @return a copy */
-    public SolverOptions withQuantumRegion(QuantumRegion v) {
+    /** @param v quantum windows @return a copy */
+    public SolverOptions withQuantumWindows(QuantumWindows v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
                 maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
@@ -116,24 +116,24 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     /** @param v most subbands per window @return a copy */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, v, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, v, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v subband cut-off above E_F in kT @return a copy */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, v, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, maxSubbands, v, holeFermiLevel, densityOfStatesMass);
     }
 
     /** @param v holes' quasi-Fermi level @return a copy */
     public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, v, densityOfStatesMass);
+                quantumWindows, maxSubbands, subbandCutoffKT, v, densityOfStatesMass);
     }
 
     /** @param v which mass sets the 2D density of states @return a copy */
     public SolverOptions withDensityOfStatesMass(DensityOfStatesMass v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, v);
+                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, v);
     }
 }

@@ -295,7 +295,7 @@ class HemtPhysicsTest {
     @Test
     void quantumWindowOutsideTheStackIsRejected() {
         SelfConsistentSolver s = new SelfConsistentSolver(SolverOptions.defaults()
-                .withQuantumRegion(QuantumRegion.windows(QuantumRegion.Window.nm(0, 5000))));
+                .withQuantumWindows(QuantumWindows.explicit(QuantumWindows.Window.nm(0, 5000))));
         InvalidParameterException e = assertThrows(InvalidParameterException.class, () -> s.solve(hemt(0.25, 25, 0, GATE)));
         assertTrue(e.getMessage().contains("quantum window bottom depth (m) = 5.0E-6"), e.getMessage());
         assertTrue(e.getMessage().contains("inside the stack"), e.getMessage());
@@ -311,7 +311,7 @@ class HemtPhysicsTest {
         assertThrows(InvalidParameterException.class, () -> d.withMaxNewtonStep(-1));
         assertThrows(InvalidParameterException.class, () -> new MeshPolicy(0.1 * NM, 0.9, 50 * NM));
         assertThrows(InvalidParameterException.class, () -> BandAlignment.conductionBandFraction(1.5));
-        assertThrows(InvalidParameterException.class, () -> QuantumRegion.Window.nm(10, 5));
+        assertThrows(InvalidParameterException.class, () -> QuantumWindows.Window.nm(10, 5));
     }
 
     /** Solution invariants: E_c - E_v equals the local gap; subbands sorted and orthonormal. */

@@ -86,7 +86,7 @@ class ModelChoicesTest {
     void aWindowCanBeSetBelowTheDeepestInterface() {
         Structure s = StandardStacks.hemt(SET, 500, 0.25, 100, 2, TopBoundary.schottky(1.0));
         Solution auto = new SelfConsistentSolver(COARSE).solve(s);
-        Solution below = new SelfConsistentSolver(COARSE.withQuantumRegion(QuantumRegion.belowDeepestInterfaceNm(40)))
+        Solution below = new SelfConsistentSolver(COARSE.withQuantumWindows(QuantumWindows.belowDeepestInterfaceNm(40)))
                 .solve(s);
         assertEquals(2, auto.quantumWindows().size());
         List<DepthRange> w = below.quantumWindows();

@@ -23,7 +23,7 @@ import org.wurtzkit.structure.TopBoundary;
  * iterate (the contract of the solver's public methods; no published source needed).
  */
 class NewtonPoissonTest {
-    private static final SolverOptions CLASSICAL = SolverOptions.defaults().withQuantumRegion(QuantumRegion.none());
+    private static final SolverOptions CLASSICAL = SolverOptions.defaults().withQuantumWindows(QuantumWindows.none());
 
     private static Structure hemt() {
         return Structure.builder(ParameterSets.defaultSet())

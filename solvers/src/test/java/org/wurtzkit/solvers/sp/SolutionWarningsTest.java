@@ -60,14 +60,14 @@ class SolutionWarningsTest {
     @Test
     void aWindowEndingInsideTheTwoDegWarnsOfBoundStatesAndEdgeElectrons() {
         Structure s = hemt(TopBoundary.schottky(1.0));
-        Solution cut = new SelfConsistentSolver(COARSE.withQuantumRegion(
-                QuantumRegion.windows(QuantumRegion.Window.nm(0, 30)))).solve(s);
+        Solution cut = new SelfConsistentSolver(COARSE.withQuantumWindows(
+                QuantumWindows.explicit(QuantumWindows.Window.nm(0, 30)))).solve(s);
         assertEquals(List.of(WarningKind.WINDOW_BOUND_SUBBAND, WarningKind.WINDOW_EDGE_IN_ELECTRONS), kinds(cut),
                 cut.toString());
         assertTrue(cut.warnings().get(1).message().startsWith("the bottom edge of window 0 (at 30 nm)"),
                 cut.warnings().toString());
-        Solution wide = new SelfConsistentSolver(COARSE.withQuantumRegion(
-                QuantumRegion.windows(QuantumRegion.Window.nm(0, 65)))).solve(s);
+        Solution wide = new SelfConsistentSolver(COARSE.withQuantumWindows(
+                QuantumWindows.explicit(QuantumWindows.Window.nm(0, 65)))).solve(s);
         assertEquals(List.of(), kinds(wide), wide.toString());
     }
 

@@ -51,7 +51,7 @@ class SolverCostTest {
      */
     @Test
     void classicalSolveOfTheReferenceHemt() {
-        ConvergenceRecord r = new SelfConsistentSolver(SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()))
+        ConvergenceRecord r = new SelfConsistentSolver(SolverOptions.defaults().withQuantumWindows(QuantumWindows.none()))
                 .solve(referenceHemt(0)).convergence();
         assertTrue(r.converged(), r.message());
         assertEquals(0, r.iterations(), "a classical solve has no outer iteration");
