@@ -62,4 +62,25 @@ class TemplateChoicesKeptTest {
             assertEquals(t.parameters().conductionBandOffsetFraction(), st.parameters().conductionBandOffsetFraction());
         }
     }
+
+    /**
+     * A target reached with a barrier beyond the template's critical-thickness model says so: with
+     * the zinc-blende Matthews-Blakeslee geometry a 25 nm AlGaN barrier of 25 % Al or more is beyond it
+     * (S. R. Lee et al., Appl. Phys. Lett. 85, 6164 (2004), from memory: such barriers in fact grow
+     * coherently), and the default c-plane model accepts it.
+     */
+    @Test
+    void aTargetResultCarriesTheWarningsOfTheStructureFound() {
+        Structure mb = Hemts.standard().toBuilder().criticalThicknessModel(CriticalThickness.MATTHEWS_BLAKESLEE_60)
+                .build();
+        TargetSearch search = new TargetSearch(Hemts.SOLVER, 60);
+        org.junit.jupiter.api.Assertions.assertFalse(mb.warnings().isEmpty(), "25 nm Al0.25 is beyond the 60-degree estimate");
+        TargetResult r = search.sheetDensity(StructureFamilies.alFraction(mb, "barrier"), 0.2, 0.35, 1.2e13, 1e-3);
+        assertEquals(java.util.List.of(org.wurtzkit.warnings.WarningKind.BEYOND_CRITICAL_THICKNESS),
+                r.warnings().stream().map(org.wurtzkit.warnings.Warning::kind).toList(), r.toString());
+        org.junit.jupiter.api.Assertions.assertTrue(r.toString().contains("\n  warning: barrier ("), r.toString());
+        TargetResult ok = search.sheetDensity(StructureFamilies.alFraction(Hemts.standard(), "barrier"), 0.2, 0.35,
+                1.2e13, 1e-3);
+        assertEquals(java.util.List.of(), ok.warnings());
+    }
 }
