@@ -27,7 +27,7 @@ Structure wafer = Structure.builder(set).
         grow(Layer.of("spacer", Composition.ALN, 1 * NM)).
         grow(Layer.of("barrier", Composition.alGaN(0.26), 22 * NM)).
         grow(Layer.of("cap", Composition.GAN, 2 * NM)).
-        top(TopBoundary.schottky(1.0, 0.0)).
+        top(TopBoundary.schottky(1.0)).
         build();
 System.out.println(wafer);
 

@@ -13,7 +13,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Threads;
 import org.openjdk.jmh.annotations.Warmup;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -49,7 +49,7 @@ public class ColdSolveBenchmark {
         public void setUp() {
             structure = Scenarios.referenceHemt();
             solver = new SelfConsistentSolver();
-            classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()));
+            classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumWindows(QuantumWindows.none()));
             converged = solver.solve(structure);
             Checks.converged("cold solve", converged);
             Solution restarted = solver.solve(structure, converged);

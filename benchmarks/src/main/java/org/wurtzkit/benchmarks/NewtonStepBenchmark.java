@@ -15,7 +15,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 import org.wurtzkit.solvers.linalg.Tridiagonal;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -123,7 +123,7 @@ public class NewtonStepBenchmark {
      * @return the solver
      */
     public static SelfConsistentSolver classicalSolver(int n) {
-        SolverOptions base = SolverOptions.defaults().withQuantumRegion(QuantumRegion.none());
+        SolverOptions base = SolverOptions.defaults().withQuantumWindows(QuantumWindows.none());
         int nodes = new SelfConsistentSolver(base).solve(Scenarios.referenceHemt()).nodeCount();
         double factor = Math.max(1.0, (double) n / nodes);
         return new SelfConsistentSolver(base.withMesh(MeshPolicy.DEFAULT.refined(factor)));

@@ -24,7 +24,7 @@ import org.openjdk.jmh.runner.options.OptionsBuilder;
 import org.openjdk.jmh.runner.options.TimeValue;
 import org.openjdk.jmh.runner.options.VerboseMode;
 import org.openjdk.jmh.util.Statistics;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -313,7 +313,7 @@ public final class RatioReport {
         Structure ref = Scenarios.referenceHemt();
         Solution cold = solver.solve(ref);
         Solution restart = solver.solve(ref, cold);
-        Solution classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()))
+        Solution classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumWindows(QuantumWindows.none()))
                 .solve(ref);
         int co = 0;
         int cn = 0;
@@ -323,7 +323,7 @@ public final class RatioReport {
         for (int i = 0; i < SweepBenchmark.POINTS; i++) {
             double v = SweepBenchmark.FROM_V + (SweepBenchmark.TO_V - SweepBenchmark.FROM_V) * i
                     / (SweepBenchmark.POINTS - 1);
-            Structure s = ref.withTop(TopBoundary.schottky(Scenarios.GATE_BARRIER_EV, v));
+            Structure s = ref.withTop(TopBoundary.schottky(Scenarios.GATE_BARRIER_EV).atBiasV(v));
             Solution c = solver.solve(s);
             co += c.convergence().iterations();
             cn += c.convergence().newtonIterations();

@@ -49,7 +49,7 @@ public final class Scenarios {
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(x), barrierNm * NM))
                 .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(GATE_BARRIER_EV, biasV))
+                .top(TopBoundary.schottky(GATE_BARRIER_EV).atBiasV(biasV))
                 .build();
     }
 

@@ -60,7 +60,7 @@ public class SweepBenchmark {
             double[] v = grid.values();
             at = new Structure[POINTS];
             for (int i = 0; i < POINTS; i++) {
-                at[i] = reference.withTop(TopBoundary.schottky(Scenarios.GATE_BARRIER_EV, v[i]));
+                at[i] = reference.withTop(TopBoundary.schottky(Scenarios.GATE_BARRIER_EV).atBiasV(v[i]));
             }
             solver = new SelfConsistentSolver();
             sweep = new BiasSweep(solver);

@@ -10,7 +10,8 @@ import org.wurtzkit.material.WurtziteMaterial;
  * ({@code Structure.Builder.bandAlignment}) beside the polarization model.
  *
  * <ul>
- * <li>{@link ValenceBandTable} (default): each material's valence-band maximum is the tabulated (or
+ * <li>{@link ValenceBandTable} (the default unless the parameter set declares another rule,
+ * see {@link #recommendedFor(ParameterSet)}): each material's valence-band maximum is the tabulated (or
  * Vegard-interpolated) value of its parameter set; E_c = E_v + E_g(T).</li>
  * <li>{@link ConductionBandFraction}: E_c - E_c(GaN) = f (E_g - E_g(GaN)) at the given temperature,
  * the rule used e.g. by O. Ambacher et al., J. Appl. Phys. 87, 334 (2000) with f = 0.7 for AlGaN/GaN
@@ -68,7 +69,21 @@ public sealed interface BandAlignment permits BandAlignment.ValenceBandTable, Ba
         }
     }
 
-    /** {@return the tabulated-valence-band alignment (the default)} */
+    /**
+     * The line-up a parameter set declares ({@link ParameterSet#conductionBandOffsetFraction()}):
+     * the fixed-fraction rule when the set names a fraction, else its tabulated valence-band edges.
+     * The structure builder's default.
+     *
+     * @param set the parameter set
+     * @return its line-up
+     */
+    static BandAlignment recommendedFor(ParameterSet set) {
+        Require.nonNull("parameter set", set);
+        java.util.OptionalDouble f = set.conductionBandOffsetFraction();
+        return f.isPresent() ? new ConductionBandFraction(f.getAsDouble()) : new ValenceBandTable();
+    }
+
+    /** {@return the tabulated-valence-band alignment} */
     static BandAlignment valenceBandTable() {
         return new ValenceBandTable();
     }

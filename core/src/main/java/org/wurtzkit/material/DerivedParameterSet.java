@@ -105,6 +105,12 @@ public final class DerivedParameterSet implements ParameterSet {
         return gapRule;
     }
 
+    /** {@return the base set's line-up rule} */
+    @Override
+    public java.util.OptionalDouble conductionBandOffsetFraction() {
+        return base.conductionBandOffsetFraction();
+    }
+
     @Override
     public List<Source> sources() {
         return sources;

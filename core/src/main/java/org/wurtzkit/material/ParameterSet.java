@@ -1,6 +1,7 @@
 package org.wurtzkit.material;
 
 import java.util.List;
+import java.util.OptionalDouble;
 import org.wurtzkit.material.PolarizationModel;
 
 /**
@@ -43,6 +44,20 @@ public interface ParameterSet {
 
     /** {@return every source cited by the set, without duplicates} */
     List<Source> sources();
+
+    /**
+     * The band line-up rule the set follows, as data: when present, the share f of a gap difference
+     * to GaN that goes to the conduction band (E_c - E_c(GaN) = f (E_g - E_g(GaN)), the rule of the
+     * papers a set may follow); when empty, the set's tabulated valence-band edges, interpolated
+     * linearly in alloys, set the line-up (so all gap bowing goes to the conduction band). A
+     * structure built on the set uses this rule unless it is given another
+     * ({@code org.wurtzkit.bands.BandAlignment.recommendedFor}).
+     *
+     * @return f in [0, 1], or empty for the tabulated valence-band edges (the default)
+     */
+    default OptionalDouble conductionBandOffsetFraction() {
+        return OptionalDouble.empty();
+    }
 
     /**
      * {@return how the gap of an alloy depends on temperature} The default,

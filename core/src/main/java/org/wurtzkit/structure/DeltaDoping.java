@@ -34,14 +34,61 @@ public record DeltaDoping(Dopant.Kind kind, double sheetDensityPerM2, double ion
     }
 
     /**
+     * A donor sheet at the top of its layer; place it with {@link #atOffsetNm(double)} or
+     * {@link #atOffset(double)}: {@code DeltaDoping.donorsPerCm2(5e12, 0.015).atOffsetNm(3)}.
+     *
+     * @param sheetPerCm2        sheet density (cm^-2), in [0, 1e15]
+     * @param ionizationEnergyEv E_c - E_D (eV), in [0, 2]
+     * @return a donor sheet (degeneracy 2) at offset 0
+     */
+    public static DeltaDoping donorsPerCm2(double sheetPerCm2, double ionizationEnergyEv) {
+        return new DeltaDoping(Dopant.Kind.DONOR, Units.perCm2ToPerM2(sheetPerCm2), ionizationEnergyEv, 0);
+    }
+
+    /**
+     * An acceptor sheet at the top of its layer; place it with {@link #atOffsetNm(double)}.
+     *
+     * @param sheetPerCm2        sheet density (cm^-2), in [0, 1e15]
+     * @param ionizationEnergyEv E_A - E_v (eV), in [0, 2]
+     * @return an acceptor sheet (degeneracy 4) at offset 0
+     */
+    public static DeltaDoping acceptorsPerCm2(double sheetPerCm2, double ionizationEnergyEv) {
+        return new DeltaDoping(Dopant.Kind.ACCEPTOR, Units.perCm2ToPerM2(sheetPerCm2), ionizationEnergyEv, 0);
+    }
+
+    /**
      * @param sheetPerCm2         sheet density (cm^-2)
      * @param ionizationEnergyEv  E_c - E_D (eV)
      * @param offsetFromLayerTop  depth below the layer's top (m)
      * @return a donor sheet (degeneracy 2)
+     * @deprecated mixes cm^-2 and metres in one call: use
+     *             {@code donorsPerCm2(sheetPerCm2, ionizationEnergyEv).atOffset(offsetFromLayerTop)}
+     *             or {@code .atOffsetNm(...)}
      */
+    @Deprecated(since = "0.2", forRemoval = true)
     public static DeltaDoping donorsPerCm2(double sheetPerCm2, double ionizationEnergyEv, double offsetFromLayerTop) {
-        return new DeltaDoping(Dopant.Kind.DONOR, Units.perCm2ToPerM2(sheetPerCm2), ionizationEnergyEv,
-                offsetFromLayerTop);
+        return donorsPerCm2(sheetPerCm2, ionizationEnergyEv).atOffset(offsetFromLayerTop);
+    }
+
+    /**
+     * @param offsetFromLayerTop distance below the top of the layer (m), &ge; 0
+     * @return this sheet at that depth in its layer
+     */
+    public DeltaDoping atOffset(double offsetFromLayerTop) {
+        return new DeltaDoping(kind, sheetDensityPerM2, ionizationEnergyEv, offsetFromLayerTop);
+    }
+
+    /**
+     * @param offsetNm distance below the top of the layer (nm), &ge; 0
+     * @return this sheet at that depth in its layer
+     */
+    public DeltaDoping atOffsetNm(double offsetNm) {
+        return atOffset(offsetNm * Units.NM);
+    }
+
+    /** {@return sheet density (cm^-2)} */
+    public double sheetDensityPerCm2() {
+        return Units.perM2ToPerCm2(sheetDensityPerM2);
     }
 
     /** {@return the degeneracy factor: {@link Dopant#DONOR_DEGENERACY} or {@link Dopant#ACCEPTOR_DEGENERACY}} */

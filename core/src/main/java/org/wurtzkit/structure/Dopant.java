@@ -6,15 +6,38 @@ import org.wurtzkit.units.Units;
 
 /**
  * A shallow dopant species in a layer: density, ionization energy (from the conduction band for a
- * donor, from the valence band for an acceptor) and ground-state degeneracy factor. Ionization is
- * computed by the solver from the Fermi level (incomplete ionization).
+ * donor, from the valence band for an acceptor), ground-state degeneracy factor and how its
+ * ionization is computed ({@link Ionization}): by default from the Fermi level (incomplete
+ * ionization), or, as an explicit choice, fully ionized whatever the Fermi level
+ * ({@link #fullyIonized()}).
  *
  * @param kind              donor or acceptor
  * @param densityPerM3      density (m^-3), &ge; 0
  * @param ionizationEnergyEv ionization energy (eV), in [0, 2]
  * @param degeneracy        degeneracy factor g, &gt; 0 (2 for donors, 4 for acceptors is usual)
+ * @param ionization        how the charged fraction is computed; default {@link Ionization#FROM_FERMI_LEVEL}
  */
-public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, double degeneracy) {
+public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, double degeneracy,
+        Ionization ionization) {
+
+    /**
+     * How the charged fraction of a dopant is computed.
+     *
+     * <p>The default is {@link #FROM_FERMI_LEVEL}: a dopant level well below the band edge in kT is
+     * only partly ionized, and the difference is large for the acceptors of GaN: Mg at about
+     * 0.16-0.2 eV above E_v is only a few per cent ionized at 300 K (W. Goetz, N. M. Johnson,
+     * J. Walker, D. P. Bour and R. A. Street, Appl. Phys. Lett. 68, 667 (1996), from memory), so
+     * assuming full ionization would overstate the fixed charge of a p-GaN gate tenfold or more.
+     */
+    public enum Ionization {
+        /** Fermi-Dirac occupancy of a level at the ionization energy with the degeneracy factor g (the default). */
+        FROM_FERMI_LEVEL,
+        /**
+         * Every dopant is charged whatever the Fermi level (the textbook "full ionization"
+         * assumption); the ionization energy and degeneracy are kept but not used.
+         */
+        FULL
+    }
     /** Donor or acceptor. */
     public enum Kind {
         /** Positive when ionized. */
@@ -41,6 +64,24 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
         Require.inRange("dopant density (m^-3)", densityPerM3, 0, MAX_DENSITY_PER_M3);
         Require.inRange("dopant ionization energy (eV)", ionizationEnergyEv, 0, 2);
         Require.positive("dopant degeneracy factor", degeneracy);
+        Require.nonNull("dopant ionization", ionization);
+    }
+
+    /**
+     * A dopant ionized from the Fermi level ({@link Ionization#FROM_FERMI_LEVEL}).
+     *
+     * @param kind               donor or acceptor
+     * @param densityPerM3       density (m^-3)
+     * @param ionizationEnergyEv ionization energy (eV)
+     * @param degeneracy         degeneracy factor g
+     */
+    public Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, double degeneracy) {
+        this(kind, densityPerM3, ionizationEnergyEv, degeneracy, Ionization.FROM_FERMI_LEVEL);
+    }
+
+    /** {@return this dopant, fully ionized whatever the Fermi level ({@link Ionization#FULL})} */
+    public Dopant fullyIonized() {
+        return new Dopant(kind, densityPerM3, ionizationEnergyEv, degeneracy, Ionization.FULL);
     }
 
     /** Donor ground-state degeneracy g_D = 2 (spin; Sze &amp; Ng, Physics of Semiconductor Devices, 3rd ed., 2007, ch. 1). */
@@ -73,6 +114,28 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
         return new Dopant(Kind.ACCEPTOR, Units.perCm3ToPerM3(densityPerCm3), ionizationEnergyEv, ACCEPTOR_DEGENERACY);
     }
 
+    /**
+     * The SI twin of {@link #donorsPerCm3(double, double)}.
+     *
+     * @param densityPerM3       donor density (m^-3)
+     * @param ionizationEnergyEv E_c - E_D (eV)
+     * @return the dopant, degeneracy {@link #DONOR_DEGENERACY}
+     */
+    public static Dopant donorsPerM3(double densityPerM3, double ionizationEnergyEv) {
+        return new Dopant(Kind.DONOR, densityPerM3, ionizationEnergyEv, DONOR_DEGENERACY);
+    }
+
+    /**
+     * The SI twin of {@link #acceptorsPerCm3(double, double)}.
+     *
+     * @param densityPerM3       acceptor density (m^-3)
+     * @param ionizationEnergyEv E_A - E_v (eV)
+     * @return the dopant, degeneracy {@link #ACCEPTOR_DEGENERACY}
+     */
+    public static Dopant acceptorsPerM3(double densityPerM3, double ionizationEnergyEv) {
+        return new Dopant(Kind.ACCEPTOR, densityPerM3, ionizationEnergyEv, ACCEPTOR_DEGENERACY);
+    }
+
     /** {@return density (cm^-3)} */
     public double densityPerCm3() {
         return Units.perM3ToPerCm3(densityPerM3);
@@ -82,6 +145,8 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
     @Override
     public String toString() {
         return (kind == Kind.DONOR ? "donors " : "acceptors ") + Decimals.format(Units.perM3ToPerCm3(densityPerM3), "cm^-3")
-                + ", ionization energy " + Decimals.format(ionizationEnergyEv, "eV") + ", g = " + Decimals.format(degeneracy);
+                + (ionization == Ionization.FULL ? ", fully ionized"
+                        : ", ionization energy " + Decimals.format(ionizationEnergyEv, "eV") + ", g = "
+                                + Decimals.format(degeneracy));
     }
 }

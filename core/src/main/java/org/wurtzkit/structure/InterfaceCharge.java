@@ -18,6 +18,11 @@ public record InterfaceCharge(double depth, String upperLayer, String lowerLayer
         return Units.chargeToPerCm2(sigma);
     }
 
+    /** {@return sigma / e (m^-2), signed; the twin of {@link #sheetDensityPerCm2()}} */
+    public double sheetDensity() {
+        return sigma / org.wurtzkit.units.Constants.ELEMENTARY_CHARGE;
+    }
+
     /** {@return depth (nm)} */
     public double depthNm() {
         return Units.mToNm(depth);

@@ -19,6 +19,8 @@ import org.wurtzkit.strain.BandEdgeShift;
 import org.wurtzkit.strain.CriticalThicknessModel;
 import org.wurtzkit.strain.Strain;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * An immutable c-plane layer stack with everything a solver needs: the parameter set, the layers,
@@ -33,7 +35,7 @@ import org.wurtzkit.units.Decimals;
  *         .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
  *         .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
  *         .grow(Layer.of("cap", Composition.GAN, 2 * NM))          // last grown = top
- *         .top(TopBoundary.schottky(1.0, 0.0))
+ *         .top(TopBoundary.schottky(1.0).atBiasV(0))
  *         .build();
  * }</pre>
  *
@@ -57,6 +59,15 @@ public final class Structure {
     private final TopBoundary top;
     private final BottomBoundary bottom;
     private final double totalThickness;
+    private final CriticalThicknessModel criticalThicknessModel;
+    private final List<Warning> warnings;
+
+    /** Layers thicker than this (m) get a {@link WarningKind#LAYER_THICKER_THAN_10_UM} warning. */
+    public static final double WARN_LAYER_THICKNESS = 10e-6;
+    /** Below this temperature (K) a structure gets a {@link WarningKind#TEMPERATURE_OUT_OF_RANGE} warning. */
+    public static final double WARN_TEMPERATURE_BELOW_K = 20;
+    /** Above this temperature (K) a structure gets a {@link WarningKind#TEMPERATURE_OUT_OF_RANGE} warning. */
+    public static final double WARN_TEMPERATURE_ABOVE_K = 1000;
 
     private Structure(Builder b) {
         this.parameters = b.parameters;
@@ -64,7 +75,7 @@ public final class Structure {
         this.polarity = b.polarity;
         this.polarizationModel = b.polarizationModel != null ? b.polarizationModel
                 : parameters.recommendedPolarizationModel();
-        this.bandAlignment = b.bandAlignment;
+        this.bandAlignment = b.bandAlignment != null ? b.bandAlignment : BandAlignment.recommendedFor(parameters);
         this.strainShiftsBandEdges = b.strainShiftsBandEdges;
         this.temperatureK = b.temperatureK;
         this.top = b.top;
@@ -78,6 +89,54 @@ public final class Structure {
         }
         this.totalThickness = t;
         this.states = resolveStates();
+        this.criticalThicknessModel = b.criticalThicknessModel;
+        this.warnings = collectWarnings();
+    }
+
+    private List<Warning> collectWarnings() {
+        List<Warning> out = new ArrayList<>();
+        for (LayerState s : layersBeyondCriticalThickness(criticalThicknessModel)) {
+            PointState worst = Math.abs(s.top().strain().xx()) >= Math.abs(s.bottom().strain().xx()) ? s.top()
+                    : s.bottom();
+            double hc = criticalThicknessModel.of(worst.material(), worst.strain());
+            out.add(new Warning(WarningKind.BEYOND_CRITICAL_THICKNESS, s.layer().name() + " ("
+                    + Decimals.format(s.layer().thicknessNm(), "nm") + ") is thicker than its critical thickness "
+                    + Decimals.format(hc * 1e9, "nm") + " (an estimate of the structure's critical-thickness model); "
+                    + "it may relax or crack"));
+        }
+        for (Layer l : bottomUp) {
+            if (l.thickness() > WARN_LAYER_THICKNESS) {
+                out.add(new Warning(WarningKind.LAYER_THICKER_THAN_10_UM, l.name() + " is "
+                        + Decimals.format(l.thicknessNm() * 1e-3, "um") + " thick, above 10 um: check the unit"));
+            }
+        }
+        if (temperatureK < WARN_TEMPERATURE_BELOW_K || temperatureK > WARN_TEMPERATURE_ABOVE_K) {
+            out.add(new Warning(WarningKind.TEMPERATURE_OUT_OF_RANGE, "temperature "
+                    + Decimals.format(temperatureK, "K") + " is outside [20 K, 1000 K], where the band-gap "
+                    + "temperature laws and the carrier statistics were checked"));
+        }
+        if (top instanceof TopBoundary.Schottky g && g.biasV() >= g.barrierHeightEv()) {
+            out.add(new Warning(WarningKind.GATE_BIAS_AT_OR_ABOVE_BARRIER, "gate bias " + Decimals.format(g.biasV(), "V")
+                    + " is at or above the barrier height " + Decimals.format(g.barrierHeightEv(), "eV")
+                    + ": the gate conducts forward and an equilibrium solve does not describe it"));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * What may make this stack mislead, in this order: layers beyond their critical thickness
+     * ({@link #criticalThicknessModel()}), layers thicker than 10 um, a temperature outside
+     * [20 K, 1000 K], a gate bias at or above the Schottky barrier height.
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
+    }
+
+    /** {@return the critical-thickness model whose verdicts {@link #warnings()} reports} */
+    public CriticalThicknessModel criticalThicknessModel() {
+        return criticalThicknessModel;
     }
 
     private List<LayerState> resolveStates() {
@@ -134,14 +193,15 @@ public final class Structure {
         b.temperatureK = temperatureK;
         b.top = top;
         b.bottom = bottom;
+        b.criticalThicknessModel = criticalThicknessModel;
         return b;
     }
 
     /**
      * Two structures are equal when everything the builder was given is equal: the same parameter
      * set (by its own {@code equals}, identity for the built-in sets), the same layers, reference
-     * lattice, polarity, polarization model, band line-up, strain-shift switch, temperature and
-     * boundaries. Doubles compare bit for bit ({@link Double#compare}), as in records.
+     * lattice, polarity, polarization model, band line-up, strain-shift switch, temperature,
+     * boundaries and critical-thickness model. Doubles compare bit for bit ({@link Double#compare}), as in records.
      */
     @Override
     public boolean equals(Object o) {
@@ -149,13 +209,24 @@ public final class Structure {
                 && Double.compare(s.referenceLatticeA, referenceLatticeA) == 0 && s.polarity == polarity
                 && s.polarizationModel.equals(polarizationModel) && s.bandAlignment.equals(bandAlignment)
                 && s.strainShiftsBandEdges == strainShiftsBandEdges
-                && Double.compare(s.temperatureK, temperatureK) == 0 && s.top.equals(top) && s.bottom.equals(bottom);
+                && Double.compare(s.temperatureK, temperatureK) == 0 && s.top.equals(top) && s.bottom.equals(bottom)
+                && s.criticalThicknessModel.equals(criticalThicknessModel);
     }
 
     @Override
     public int hashCode() {
         return java.util.Objects.hash(parameters, bottomUp, referenceLatticeA, polarity, polarizationModel,
-                bandAlignment, strainShiftsBandEdges, temperatureK, top, bottom);
+                bandAlignment, strainShiftsBandEdges, temperatureK, top, bottom, criticalThicknessModel);
+    }
+
+    /**
+     * Returns a copy of this structure at another lattice temperature.
+     *
+     * @param temperatureK temperature (K), in (0, 2000]
+     * @return a copy at that temperature
+     */
+    public Structure withTemperatureK(double temperatureK) {
+        return toBuilder().temperatureK(temperatureK).build();
     }
 
     /**
@@ -163,9 +234,11 @@ public final class Structure {
      *
      * @param t temperature (K)
      * @return a copy at that temperature
+     * @deprecated the unit belongs in the name: use {@link #withTemperatureK(double)}
      */
+    @Deprecated(since = "0.2", forRemoval = true)
     public Structure withTemperature(double t) {
-        return toBuilder().temperature(t).build();
+        return withTemperatureK(t);
     }
 
     /**
@@ -358,8 +431,8 @@ public final class Structure {
     /**
      * A summary to read in jshell or a notebook, one line per item, top down: the parameter set,
      * polarity and temperature; the top boundary; every layer with its material, thickness,
-     * relaxation, dopants, deep levels and delta sheets; the bottom boundary; and a warning for
-     * every layer thicker than its Matthews-Blakeslee critical thickness (an estimate). For example:
+     * relaxation, dopants, deep levels and delta sheets; the bottom boundary; and one line for each
+     * of its {@link #warnings()}. For example:
      *
      * <pre>
      * Structure (vurgaftman-meyer-2003, metal-face, 300 K), top down:
@@ -383,11 +456,7 @@ public final class Structure {
             sb.append("  ").append(s.layer()).append('\n');
         }
         sb.append("  bottom: ").append(bottom);
-        for (LayerState s : layersBeyondCriticalThickness()) {
-            sb.append("\n  warning: ").append(s.layer().name()).append(" (")
-                    .append(Decimals.format(s.layer().thicknessNm(), "nm"))
-                    .append(") is thicker than its Matthews-Blakeslee critical thickness (an estimate); it may relax");
-        }
+        sb.append(Warning.lines(warnings));
         return sb.toString();
     }
 
@@ -402,11 +471,12 @@ public final class Structure {
         private double referenceLatticeA = -1;
         private Polarity polarity = Polarity.METAL_FACE;
         private PolarizationModel polarizationModel;
-        private BandAlignment bandAlignment = BandAlignment.valenceBandTable();
+        private BandAlignment bandAlignment;
         private boolean strainShiftsBandEdges;
         private double temperatureK = 300;
         private TopBoundary top;
         private BottomBoundary bottom = new BottomBoundary.ZeroField();
+        private CriticalThicknessModel criticalThicknessModel = CriticalThicknessModel.C_PLANE_WURTZITE;
 
         private Builder(ParameterSet parameters) {
             this.parameters = Require.nonNull("parameter set", parameters);
@@ -468,8 +538,8 @@ public final class Structure {
 
         /**
          * @param alignment how the band edges of the materials line up; default
-         *                  {@link BandAlignment#valenceBandTable()} (the parameter set's tabulated
-         *                  valence-band maxima)
+         *                  {@link BandAlignment#recommendedFor(ParameterSet)}: the rule the parameter
+         *                  set declares, else its tabulated valence-band maxima
          * @return this builder
          */
         public Builder bandAlignment(BandAlignment alignment) {
@@ -491,12 +561,22 @@ public final class Structure {
         /**
          * Sets the lattice temperature.
          *
-         * @param t temperature in (0, 2000] K (default 300 K)
+         * @param temperatureK temperature in (0, 2000] K (default 300 K)
          * @return this builder
          */
-        public Builder temperature(double t) {
-            this.temperatureK = BandGap.checkTemperature(t);
+        public Builder temperatureK(double temperatureK) {
+            this.temperatureK = BandGap.checkTemperature(temperatureK);
             return this;
+        }
+
+        /**
+         * @param t temperature in (0, 2000] K
+         * @return this builder
+         * @deprecated the unit belongs in the name: use {@link #temperatureK(double)}
+         */
+        @Deprecated(since = "0.2", forRemoval = true)
+        public Builder temperature(double t) {
+            return temperatureK(t);
         }
 
         /**
@@ -514,6 +594,19 @@ public final class Structure {
                                 + boundary);
             }
             this.top = boundary;
+            return this;
+        }
+
+        /**
+         * Sets the critical-thickness model of the structure's warnings.
+         *
+         * @param model the critical-thickness model whose verdicts the structure's warnings report;
+         *              default {@link CriticalThicknessModel#C_PLANE_WURTZITE} (channel cracking under
+         *              tension, pyramidal slip under compression)
+         * @return this builder
+         */
+        public Builder criticalThicknessModel(CriticalThicknessModel model) {
+            this.criticalThicknessModel = Require.nonNull("critical-thickness model", model);
             return this;
         }
 

@@ -39,7 +39,9 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
          *
          * @param v bias (V)
          * @return a copy at that bias
+         * @deprecated the unit belongs in the name: use {@link #atBiasV(double)}
          */
+        @Deprecated(since = "0.2", forRemoval = true)
         public Schottky withBias(double v) {
             return new Schottky(barrierHeightEv, v);
         }
@@ -96,7 +98,7 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
     /**
      * A Schottky gate at 0 V; give it a bias with {@link Schottky#atBiasV(double)}:
      * {@code TopBoundary.schottky(1.0).atBiasV(-2)}. Prefer this form to
-     * {@link #schottky(double, double)}, whose two numbers can be swapped unnoticed.
+     * the deprecated {@code schottky(barrier, bias)}, whose two numbers can be swapped unnoticed.
      *
      * @param barrierHeightEv phi_B (eV), in [0, 6]
      * @return the gate at zero bias
@@ -109,18 +111,42 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
      * @param barrierHeightEv phi_B (eV)
      * @param biasV           gate bias (V)
      * @return a Schottky gate
-     * @see #schottky(double)
+     * @deprecated two numbers of the same size are easily swapped, and nothing would notice: use
+     *             {@code schottky(barrierHeightEv).atBiasV(biasV)}
      */
+    @Deprecated(since = "0.2", forRemoval = true)
     static Schottky schottky(double barrierHeightEv, double biasV) {
         return new Schottky(barrierHeightEv, biasV);
+    }
+
+    /**
+     * @param donorEnergyBelowEcEv E_c - E_D (eV), in [0, 6]
+     * @param densityPerCm2        surface donor density (cm^-2), in [0, 1e16]
+     * @return a free surface with donor states
+     */
+    static FreeSurface freeSurfacePerCm2(double donorEnergyBelowEcEv, double densityPerCm2) {
+        return new FreeSurface(donorEnergyBelowEcEv, Units.perCm2ToPerM2(densityPerCm2));
     }
 
     /**
      * @param donorEnergyBelowEcEv E_c - E_D (eV)
      * @param densityPerCm2        surface donor density (cm^-2)
      * @return a free surface with donor states
+     * @deprecated the density's unit belongs in the name: use {@link #freeSurfacePerCm2(double, double)}
      */
+    @Deprecated(since = "0.2", forRemoval = true)
     static FreeSurface freeSurface(double donorEnergyBelowEcEv, double densityPerCm2) {
-        return new FreeSurface(donorEnergyBelowEcEv, Units.perCm2ToPerM2(densityPerCm2));
+        return freeSurfacePerCm2(donorEnergyBelowEcEv, densityPerCm2);
+    }
+
+    /**
+     * The SI twin of {@link #freeSurfacePerCm2(double, double)}.
+     *
+     * @param donorEnergyBelowEcEv E_c - E_D (eV)
+     * @param densityPerM2         surface donor density (m^-2)
+     * @return a free surface with donor states
+     */
+    static FreeSurface freeSurfacePerM2(double donorEnergyBelowEcEv, double densityPerM2) {
+        return new FreeSurface(donorEnergyBelowEcEv, densityPerM2);
     }
 }

@@ -23,7 +23,7 @@ class BandAlignmentTest {
         return Structure.builder(A00TestSet.INSTANCE)
                 .grow(Layer.of("channel", Composition.GAN, 1000 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.3), 20 * NM))
-                .top(TopBoundary.schottky(1.0, 0));
+                .top(TopBoundary.schottky(1.0).atBiasV(0));
     }
 
     /**

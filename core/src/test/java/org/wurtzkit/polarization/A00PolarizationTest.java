@@ -28,7 +28,7 @@ class A00PolarizationTest {
                 .grow(Layer.of("buffer", Composition.GAN, 1000 * Units.NM))
                 .grow(Layer.of("barrier", Composition.alGaN(x), 20 * Units.NM))
                 .polarizationModel(model)
-                .top(TopBoundary.schottky(1, 0))
+                .top(TopBoundary.schottky(1).atBiasV(0))
                 .build();
     }
 

@@ -49,7 +49,7 @@ class PolarizationProperties {
 
     private static Structure build(List<Layer> layers, Polarity polarity, PolarizationModel model) {
         Structure.Builder b = Structure.builder(A00TestSet.INSTANCE).polarity(polarity).polarizationModel(model)
-                .top(TopBoundary.schottky(1, 0));
+                .top(TopBoundary.schottky(1).atBiasV(0));
         layers.forEach(b::grow);
         return b.build();
     }
@@ -87,7 +87,7 @@ class PolarizationProperties {
     @Property(tries = 200)
     void layerOnItsOwnLatticeHasNoStrainAndNoPiezoelectricPolarization(@ForAll("compositions") Composition c) {
         Structure s = Structure.builder(A00TestSet.INSTANCE).onRelaxed(c).grow(Layer.of("L", c, 10 * Units.NM))
-                .top(TopBoundary.schottky(1, 0)).polarizationModel(PolarizationModel.NONLINEAR).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).polarizationModel(PolarizationModel.NONLINEAR).build();
         LayerState st = s.layerStates().get(0);
         assertEquals(0.0, st.top().strain().xx(), 0.0);
         assertEquals(0.0, st.top().strain().zz(), 0.0);
@@ -106,7 +106,7 @@ class PolarizationProperties {
     private static double sigma(double x, PolarizationModel model) {
         return Structure.builder(A00TestSet.INSTANCE).polarizationModel(model)
                 .grow(Layer.of("GaN", Composition.GAN, 100 * Units.NM))
-                .grow(Layer.of("AlGaN", Composition.alGaN(x), 10 * Units.NM)).top(TopBoundary.schottky(1, 0)).build()
+                .grow(Layer.of("AlGaN", Composition.alGaN(x), 10 * Units.NM)).top(TopBoundary.schottky(1).atBiasV(0)).build()
                 .interfaceCharges().get(0).sigma();
     }
 }

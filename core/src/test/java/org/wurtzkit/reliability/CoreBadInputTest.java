@@ -142,14 +142,14 @@ class CoreBadInputTest {
                 row("band gap at NaN", () -> GAN.bandGap().atTemperature(NAN), t, NAN, r),
                 row("band gap at +inf", () -> GAN.bandGap().atTemperature(INF), t, INF, r),
                 row("conduction edge at 2000.5 K", () -> GAN.conductionBandEdgeEv(2000.5), t, 2000.5, r),
-                row("structure at 0 K", () -> oneLayer().temperature(0), t, 0.0, r),
-                row("structure at -0.0 K", () -> oneLayer().temperature(-0.0), t, -0.0, r),
-                row("structure at NaN", () -> oneLayer().temperature(NAN), t, NAN, r),
-                row("structure at +inf", () -> oneLayer().temperature(INF), t, INF, r),
-                row("structure at -inf", () -> oneLayer().temperature(-INF), t, -INF, r),
-                row("structure at 1e6 K", () -> oneLayer().temperature(1e6), t, 1e6, r),
-                row("withTemperature(NaN)", () -> oneLayer().top(TopBoundary.schottky(1, 0)).build()
-                        .withTemperature(NAN), t, NAN, r));
+                row("structure at 0 K", () -> oneLayer().temperatureK(0), t, 0.0, r),
+                row("structure at -0.0 K", () -> oneLayer().temperatureK(-0.0), t, -0.0, r),
+                row("structure at NaN", () -> oneLayer().temperatureK(NAN), t, NAN, r),
+                row("structure at +inf", () -> oneLayer().temperatureK(INF), t, INF, r),
+                row("structure at -inf", () -> oneLayer().temperatureK(-INF), t, -INF, r),
+                row("structure at 1e6 K", () -> oneLayer().temperatureK(1e6), t, 1e6, r),
+                row("withTemperatureK(NaN)", () -> oneLayer().top(TopBoundary.schottky(1).atBiasV(0)).build()
+                        .withTemperatureK(NAN), t, NAN, r));
     }
 
     @ParameterizedTest(name = "{0}")
@@ -322,7 +322,7 @@ class CoreBadInputTest {
                 row("null composition", () -> Layer.of("b", (Composition) null, 10 * NM), "layer composition", "null",
                         "(non-null)"),
                 row("null name", () -> Layer.of(null, Composition.GAN, 10 * NM), "layer name", "null", "(non-null)"),
-                row("delta sheet below its layer", () -> ok.withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02, 11 * NM)),
+                row("delta sheet below its layer", () -> ok.withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02).atOffset(11 * NM)),
                         "delta sheet offset in layer \"b\" (m)", 11 * NM, "[0, " + 10 * NM + "] (the layer's thickness)"));
     }
 
@@ -360,14 +360,14 @@ class CoreBadInputTest {
                 row("deep level energy negative", () -> DeepLevel.acceptorLikePerCm3(1e17, -0.1), dle, -0.1, "[0, 7]"),
                 row("deep level energy above 7 eV", () -> DeepLevel.acceptorLikePerCm3(1e17, 7.5), dle, 7.5, "[0, 7]"),
                 row("deep level energy +inf", () -> DeepLevel.donorLikePerCm3(1e17, INF), dle, INF, "[0, 7]"),
-                row("delta sheet NaN", () -> DeltaDoping.donorsPerCm2(NAN, 0.02, 0), ds, NAN, "[0, 1.0E19]"),
-                row("delta sheet negative", () -> DeltaDoping.donorsPerCm2(-1e12, 0.02, 0), ds,
+                row("delta sheet NaN", () -> DeltaDoping.donorsPerCm2(NAN, 0.02).atOffset(0), ds, NAN, "[0, 1.0E19]"),
+                row("delta sheet negative", () -> DeltaDoping.donorsPerCm2(-1e12, 0.02).atOffset(0), ds,
                         Units.perCm2ToPerM2(-1e12), "[0, 1.0E19]"),
-                row("delta sheet energy above 2", () -> DeltaDoping.donorsPerCm2(1e12, 3, 0),
+                row("delta sheet energy above 2", () -> DeltaDoping.donorsPerCm2(1e12, 3).atOffset(0),
                         "delta doping ionization energy (eV)", 3.0, "[0, 2]"),
-                row("delta sheet offset negative", () -> DeltaDoping.donorsPerCm2(1e12, 0.02, -1e-9),
+                row("delta sheet offset negative", () -> DeltaDoping.donorsPerCm2(1e12, 0.02).atOffset(-1e-9),
                         "delta sheet offset from layer top (m)", -1e-9, "[0, +inf), finite"),
-                row("delta sheet offset NaN", () -> DeltaDoping.donorsPerCm2(1e12, 0.02, NAN),
+                row("delta sheet offset NaN", () -> DeltaDoping.donorsPerCm2(1e12, 0.02).atOffset(NAN),
                         "delta sheet offset from layer top (m)", NAN, "[0, +inf), finite"));
     }
 
@@ -389,22 +389,22 @@ class CoreBadInputTest {
         String lat = "in-plane reference lattice constant (m)";
         String latr = "[2.5E-10, 4.0E-10]";
         return Stream.of(
-                row("barrier NaN", () -> TopBoundary.schottky(NAN, 0), phi, NAN, "[0, 6]"),
-                row("barrier negative", () -> TopBoundary.schottky(-0.1, 0), phi, -0.1, "[0, 6]"),
-                row("barrier above 6 eV", () -> TopBoundary.schottky(6.5, 0), phi, 6.5, "[0, 6]"),
-                row("barrier +inf", () -> TopBoundary.schottky(INF, 0), phi, INF, "[0, 6]"),
-                row("bias NaN", () -> TopBoundary.schottky(1, NAN), v, NAN, vr),
-                row("bias +inf", () -> TopBoundary.schottky(1, INF), v, INF, vr),
-                row("bias -inf", () -> TopBoundary.schottky(1, -INF), v, -INF, vr),
-                row("bias above 20 V", () -> TopBoundary.schottky(1, 21), v, 21.0, vr),
-                row("bias below -100 V", () -> TopBoundary.schottky(1, -150), v, -150.0, vr),
-                row("withBias(NaN)", () -> TopBoundary.schottky(1, 0).withBias(NAN), v, NAN, vr),
-                row("surface donor energy NaN", () -> TopBoundary.freeSurface(NAN, 1e13), ed, NAN, "[0, 6]"),
-                row("surface donor energy negative", () -> TopBoundary.freeSurface(-1, 1e13), ed, -1.0, "[0, 6]"),
-                row("surface donor density NaN", () -> TopBoundary.freeSurface(1.65, NAN), ns, NAN, "[0, 1.0E20]"),
-                row("surface donor density negative", () -> TopBoundary.freeSurface(1.65, -1e13), ns,
+                row("barrier NaN", () -> TopBoundary.schottky(NAN).atBiasV(0), phi, NAN, "[0, 6]"),
+                row("barrier negative", () -> TopBoundary.schottky(-0.1).atBiasV(0), phi, -0.1, "[0, 6]"),
+                row("barrier above 6 eV", () -> TopBoundary.schottky(6.5).atBiasV(0), phi, 6.5, "[0, 6]"),
+                row("barrier +inf", () -> TopBoundary.schottky(INF).atBiasV(0), phi, INF, "[0, 6]"),
+                row("bias NaN", () -> TopBoundary.schottky(1).atBiasV(NAN), v, NAN, vr),
+                row("bias +inf", () -> TopBoundary.schottky(1).atBiasV(INF), v, INF, vr),
+                row("bias -inf", () -> TopBoundary.schottky(1).atBiasV(-INF), v, -INF, vr),
+                row("bias above 20 V", () -> TopBoundary.schottky(1).atBiasV(21), v, 21.0, vr),
+                row("bias below -100 V", () -> TopBoundary.schottky(1).atBiasV(-150), v, -150.0, vr),
+                row("withBias(NaN)", () -> TopBoundary.schottky(1).atBiasV(0).atBiasV(NAN), v, NAN, vr),
+                row("surface donor energy NaN", () -> TopBoundary.freeSurfacePerCm2(NAN, 1e13), ed, NAN, "[0, 6]"),
+                row("surface donor energy negative", () -> TopBoundary.freeSurfacePerCm2(-1, 1e13), ed, -1.0, "[0, 6]"),
+                row("surface donor density NaN", () -> TopBoundary.freeSurfacePerCm2(1.65, NAN), ns, NAN, "[0, 1.0E20]"),
+                row("surface donor density negative", () -> TopBoundary.freeSurfacePerCm2(1.65, -1e13), ns,
                         Units.perCm2ToPerM2(-1e13), "[0, 1.0E20]"),
-                row("surface donor density +inf", () -> TopBoundary.freeSurface(1.65, INF), ns, INF, "[0, 1.0E20]"),
+                row("surface donor density +inf", () -> TopBoundary.freeSurfacePerCm2(1.65, INF), ns, INF, "[0, 1.0E20]"),
                 row("bottom E_c - E_F NaN", () -> BottomBoundary.fixedFermiLevel(NAN), fb, NAN, "[-1, 7]"),
                 row("bottom E_c - E_F below -1", () -> BottomBoundary.fixedFermiLevel(-1.5), fb, -1.5, "[-1, 7]"),
                 row("bottom E_c - E_F +inf", () -> BottomBoundary.fixedFermiLevel(INF), fb, INF, "[-1, 7]"),
@@ -417,11 +417,11 @@ class CoreBadInputTest {
                 row("null top boundary", () -> oneLayer().top(null), "top boundary", "null", "(non-null)"),
                 row("null bottom boundary", () -> oneLayer().bottom(null), "bottom boundary", "null", "(non-null)"),
                 row("null polarity", () -> oneLayer().polarity(null), "polarity", "null", "(non-null)"),
-                row("depth below the stack", () -> oneLayer().top(TopBoundary.schottky(1, 0)).build()
+                row("depth below the stack", () -> oneLayer().top(TopBoundary.schottky(1).atBiasV(0)).build()
                         .pointAt(100 * NM + 1e-12), "depth (m)", 100 * NM + 1e-12, "[0, " + 100 * NM + "]"),
-                row("negative depth", () -> oneLayer().top(TopBoundary.schottky(1, 0)).build().pointAt(-1e-10),
+                row("negative depth", () -> oneLayer().top(TopBoundary.schottky(1).atBiasV(0)).build().pointAt(-1e-10),
                         "depth (m)", -1e-10, "[0, " + 100 * NM + "]"),
-                row("NaN depth", () -> oneLayer().top(TopBoundary.schottky(1, 0)).build().layerIndexAt(NAN),
+                row("NaN depth", () -> oneLayer().top(TopBoundary.schottky(1).atBiasV(0)).build().layerIndexAt(NAN),
                         "depth (m)", NAN, "[0, " + 100 * NM + "]"));
     }
 
@@ -433,16 +433,16 @@ class CoreBadInputTest {
 
     @Test
     void emptyStackIsRejected() {
-        BadInput.checkKind(() -> Structure.builder(SET).top(TopBoundary.schottky(1, 0)).build(),
+        BadInput.checkKind(() -> Structure.builder(SET).top(TopBoundary.schottky(1).atBiasV(0)).build(),
                 ErrorKind.INVALID_STRUCTURE, "number of layers = 0", "[1, ...]");
     }
 
     @Test
     void twoTopContactsAreRejected() {
-        Structure.Builder b = oneLayer().top(TopBoundary.schottky(1, 0));
-        BadInput.checkKind(() -> b.top(TopBoundary.freeSurface(1.65, 1e13)), ErrorKind.INVALID_STRUCTURE,
+        Structure.Builder b = oneLayer().top(TopBoundary.schottky(1).atBiasV(0));
+        BadInput.checkKind(() -> b.top(TopBoundary.freeSurfacePerCm2(1.65, 1e13)), ErrorKind.INVALID_STRUCTURE,
                 "already set", "one top boundary");
-        BadInput.checkKind(() -> b.top(TopBoundary.schottky(1, 0)), ErrorKind.INVALID_STRUCTURE, "already set");
+        BadInput.checkKind(() -> b.top(TopBoundary.schottky(1).atBiasV(0)), ErrorKind.INVALID_STRUCTURE, "already set");
         // the first contact stays in force: no half-applied state
         Structure s = b.build();
         assertTrue(s.top() instanceof TopBoundary.Schottky, s.top().toString());
@@ -478,12 +478,12 @@ class CoreBadInputTest {
                 Arguments.of("x = 1", (Executable) () -> Composition.alGaN(1)),
                 Arguments.of("y = 1", (Executable) () -> Composition.inGaN(1)),
                 Arguments.of("x + y = 1", (Executable) () -> Composition.alInGaN(0.5, 0.5)),
-                Arguments.of("T = 2000 K", (Executable) () -> oneLayer().temperature(2000)),
+                Arguments.of("T = 2000 K", (Executable) () -> oneLayer().temperatureK(2000)),
                 Arguments.of("T = 1e-3 K", (Executable) () -> GAN.bandGap().atTemperature(1e-3)),
                 Arguments.of("t = 1 mm", (Executable) () -> Layer.of("b", Composition.GAN, Layer.MAX_THICKNESS)),
                 Arguments.of("r = 0 and 1", (Executable) () -> ok.withRelaxation(0).withRelaxation(1)),
-                Arguments.of("phi_B = 0, V = -100", (Executable) () -> TopBoundary.schottky(0, -100)),
-                Arguments.of("phi_B = 6, V = 20", (Executable) () -> TopBoundary.schottky(6, 20)),
+                Arguments.of("phi_B = 0, V = -100", (Executable) () -> TopBoundary.schottky(0).atBiasV(-100)),
+                Arguments.of("phi_B = 6, V = 20", (Executable) () -> TopBoundary.schottky(6).atBiasV(20)),
                 Arguments.of("E_c - E_F = -1 and 7", (Executable) () -> {
                     BottomBoundary.fixedFermiLevel(-1);
                     BottomBoundary.fixedFermiLevel(7);
@@ -493,9 +493,9 @@ class CoreBadInputTest {
                         .onInPlaneLattice(4.0e-10)),
                 Arguments.of("MB lambda 0", (Executable) () -> new CriticalThickness(90, 0)),
                 Arguments.of("delta sheet at the layer bottom",
-                        (Executable) () -> ok.withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02, 10 * NM))),
+                        (Executable) () -> ok.withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02).atOffset(10 * NM))),
                 Arguments.of("depth 0 and total", (Executable) () -> {
-                    Structure s = oneLayer().top(TopBoundary.schottky(1, 0)).build();
+                    Structure s = oneLayer().top(TopBoundary.schottky(1).atBiasV(0)).build();
                     s.pointAt(0);
                     s.pointAt(s.totalThickness());
                 }),

@@ -26,7 +26,7 @@ class StructureTest {
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM).withDopant(Dopant.donorsPerCm3(1e18, 0.03)))
                 .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(1.0, 0))
+                .top(TopBoundary.schottky(1.0).atBiasV(0))
                 .build();
     }
 
@@ -80,7 +80,7 @@ class StructureTest {
                 .grow(Layer.of("buffer", Composition.GAN, 100 * NM))
                 .grow(Layer.of("relaxed AlN", Composition.ALN, 100 * NM).withRelaxation(1))
                 .grow(Layer.of("GaN on AlN", Composition.GAN, 10 * NM))
-                .top(TopBoundary.freeSurface(1.65, 1e14)).build();
+                .top(TopBoundary.freeSurfacePerCm2(1.65, 1e14)).build();
         double aAlN = A00TestSet.INSTANCE.material(Composition.ALN).latticeA();
         assertEquals(0.0, s.layerStates().get(1).top().strain().xx(), 1e-15);
         assertEquals(aAlN, s.layerStates().get(0).top().inPlaneLatticeA(), 1e-22);
@@ -92,7 +92,7 @@ class StructureTest {
         Structure s = Structure.builder(A00TestSet.INSTANCE)
                 .grow(Layer.of("buffer", Composition.GAN, 100 * NM))
                 .grow(Layer.graded("grade", Composition.GAN, Composition.alGaN(0.4), 20 * NM))
-                .top(TopBoundary.schottky(1, 0)).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).build();
         assertEquals(0.2, s.pointAt(10 * NM).material().composition().aluminium(), 1e-12);
         assertEquals(0.4, s.layerStates().get(0).top().material().composition().aluminium(), 1e-12);
         // the graded layer holds the bound charge, the interface to the buffer none
@@ -103,15 +103,15 @@ class StructureTest {
     @Test
     void emptyStackIsRejected() {
         WurtzkitException e = assertThrows(WurtzkitException.class,
-                () -> Structure.builder(A00TestSet.INSTANCE).top(TopBoundary.schottky(1, 0)).build());
+                () -> Structure.builder(A00TestSet.INSTANCE).top(TopBoundary.schottky(1).atBiasV(0)).build());
         assertEquals(ErrorKind.INVALID_STRUCTURE, e.kind());
         assertTrue(e.getMessage().contains("number of layers = 0"), e.getMessage());
     }
 
     @Test
     void twoTopContactsAreRejected() {
-        Structure.Builder b = Structure.builder(A00TestSet.INSTANCE).top(TopBoundary.schottky(1, 0));
-        WurtzkitException e = assertThrows(WurtzkitException.class, () -> b.top(TopBoundary.freeSurface(1.6, 1e13)));
+        Structure.Builder b = Structure.builder(A00TestSet.INSTANCE).top(TopBoundary.schottky(1).atBiasV(0));
+        WurtzkitException e = assertThrows(WurtzkitException.class, () -> b.top(TopBoundary.freeSurfacePerCm2(1.6, 1e13)));
         assertEquals(ErrorKind.INVALID_STRUCTURE, e.kind());
     }
 
@@ -135,22 +135,22 @@ class StructureTest {
     @ValueSource(doubles = {0, -10, Double.NaN, 5000})
     void badTemperatureIsRejected(double t) {
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
-                () -> Structure.builder(A00TestSet.INSTANCE).temperature(t));
+                () -> Structure.builder(A00TestSet.INSTANCE).temperatureK(t));
         assertTrue(e.getMessage().contains("temperature (K) = " + t) && e.getMessage().contains("(0, 2000]"),
                 e.getMessage());
     }
 
     @Test
     void badBoundaryAndDopingValuesAreRejected() {
-        assertThrows(InvalidParameterException.class, () -> TopBoundary.schottky(-0.1, 0));
-        assertThrows(InvalidParameterException.class, () -> TopBoundary.schottky(1, Double.NaN));
-        assertThrows(InvalidParameterException.class, () -> TopBoundary.freeSurface(-1, 1e13));
+        assertThrows(InvalidParameterException.class, () -> TopBoundary.schottky(-0.1).atBiasV(0));
+        assertThrows(InvalidParameterException.class, () -> TopBoundary.schottky(1).atBiasV(Double.NaN));
+        assertThrows(InvalidParameterException.class, () -> TopBoundary.freeSurfacePerCm2(-1, 1e13));
         assertThrows(InvalidParameterException.class, () -> BottomBoundary.fixedFermiLevel(99));
         assertThrows(InvalidParameterException.class, () -> Dopant.donorsPerCm3(-1, 0.03));
         assertThrows(InvalidParameterException.class, () -> Dopant.donorsPerCm3(1e18, Double.NaN));
         assertThrows(InvalidParameterException.class, () -> DeepLevel.acceptorLikePerCm3(1e17, -0.5));
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
-                () -> Layer.of("b", Composition.GAN, 5 * NM).withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.03, 6 * NM)));
+                () -> Layer.of("b", Composition.GAN, 5 * NM).withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.03).atOffset(6 * NM)));
         assertTrue(e.getMessage().contains("delta sheet offset in layer \"b\""), e.getMessage());
         assertThrows(InvalidParameterException.class, () -> Layer.of("b", Composition.GAN, NM).withRelaxation(-0.1));
         assertThrows(InvalidParameterException.class,
@@ -161,10 +161,10 @@ class StructureTest {
     @Test
     void withersReturnModifiedCopies() {
         Structure s = hemt();
-        Structure hot = s.withTemperature(450);
+        Structure hot = s.withTemperatureK(450);
         assertEquals(450.0, hot.temperatureK());
         assertEquals(300.0, s.temperatureK());
-        Structure biased = s.withTop(((TopBoundary.Schottky) s.top()).withBias(-2));
+        Structure biased = s.withTop(((TopBoundary.Schottky) s.top()).atBiasV(-2));
         assertEquals(-2.0, ((TopBoundary.Schottky) biased.top()).biasV());
     }
 }

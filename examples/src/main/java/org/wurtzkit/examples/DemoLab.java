@@ -71,6 +71,6 @@ public final class DemoLab {
         if (capNm > 0) {
             b.grow(Layer.of("cap", Composition.GAN, capNm * NM));
         }
-        return b.top(TopBoundary.schottky(GATE_BARRIER_EV, biasV)).build();
+        return b.top(TopBoundary.schottky(GATE_BARRIER_EV).atBiasV(biasV)).build();
     }
 }

@@ -37,10 +37,10 @@ class ConvergenceReproducersTest {
     }
 
     private static Structure hallSample(double temperature, double surfaceDonorEv, double surfaceDonorsPerCm2) {
-        return Structure.builder(ParameterSets.defaultSet()).temperature(temperature)
+        return Structure.builder(ParameterSets.defaultSet()).temperatureK(temperature)
                 .grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
-                .top(TopBoundary.freeSurface(surfaceDonorEv, surfaceDonorsPerCm2)).build();
+                .top(TopBoundary.freeSurfacePerCm2(surfaceDonorEv, surfaceDonorsPerCm2)).build();
     }
 
     /**
@@ -70,9 +70,9 @@ class ConvergenceReproducersTest {
     @ParameterizedTest(name = "{0} K, E_D = {1} eV")
     @CsvSource({"113.7, 0.611", "100, 1.0", "200, 1.65", "250, 1.65"})
     void undopedGaNWithAFreeSurfaceConverges(double t, double ed) {
-        Structure s = Structure.builder(ParameterSets.defaultSet()).temperature(t)
+        Structure s = Structure.builder(ParameterSets.defaultSet()).temperatureK(t)
                 .grow(Layer.of("buffer", Composition.GAN, 1115 * NM))
-                .top(TopBoundary.freeSurface(ed, 4.213e13)).build();
+                .top(TopBoundary.freeSurfacePerCm2(ed, 4.213e13)).build();
         Solution sol = solveChecked(s);
         double[] ec = sol.conductionBand();
         for (double e : ec) {
@@ -91,14 +91,14 @@ class ConvergenceReproducersTest {
     @Test
     void coupledWellsUnderAGradedCapConverge() {
         Structure s = Structure.builder(ParameterSets.named("ambacher-2002"))
-                .polarity(Polarity.METAL_FACE).temperature(478.8)
+                .polarity(Polarity.METAL_FACE).temperatureK(478.8)
                 .grow(Layer.of("buffer", Composition.GAN, 505.4 * NM))
                 .grow(Layer.of("L1", Composition.alGaN(0.2663), 2.56 * NM))
                 .grow(Layer.of("L2", Composition.alGaN(0.3257), 5.313 * NM))
                 .grow(Layer.of("L4", Composition.inGaN(0.04944), 3.974 * NM))
                 .grow(Layer.of("L5", Composition.alGaN(1.0), 1.357 * NM))
                 .grow(Layer.graded("L7", Composition.alGaN(0.03969), Composition.alGaN(0.3258), 71.23 * NM))
-                .top(TopBoundary.schottky(1.208, -0.2702))
+                .top(TopBoundary.schottky(1.208).atBiasV(-0.2702))
                 .bottom(BottomBoundary.zeroField())
                 .build();
         solveChecked(s);
@@ -113,13 +113,13 @@ class ConvergenceReproducersTest {
     @Test
     void doubleChannelUnderForwardBiasConverges() {
         Structure s = Structure.builder(ParameterSets.named("ambacher-2002"))
-                .polarity(Polarity.METAL_FACE).temperature(193.2)
+                .polarity(Polarity.METAL_FACE).temperatureK(193.2)
                 .grow(Layer.of("buffer", Composition.GAN, 794.4 * NM))
                 .grow(Layer.of("L1", Composition.alGaN(0.6556), 2.408 * NM))
                 .grow(Layer.of("L2", Composition.GAN, 16.63 * NM))
                 .grow(Layer.of("L3", Composition.alGaN(0.1605), 13.94 * NM))
                 .grow(Layer.of("L4", Composition.alGaN(0.6761), 8.419 * NM))
-                .top(TopBoundary.schottky(0.5086, 0.8136))
+                .top(TopBoundary.schottky(0.5086).atBiasV(0.8136))
                 .bottom(BottomBoundary.zeroField())
                 .build();
         solveChecked(s);

@@ -11,7 +11,7 @@ import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarity;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -34,7 +34,7 @@ final class ReferenceStacks {
 
     /** The classical solver used for the "classical" cases. */
     static final SelfConsistentSolver CLASSICAL = new SelfConsistentSolver(SolverOptions.defaults()
-            .withQuantumRegion(QuantumRegion.none()));
+            .withQuantumWindows(QuantumWindows.none()));
 
     /** Fuzz seeds (of {@link Stacks#random(long)}) whose stacks converge. */
     static final long[] FUZZ_SEEDS = {1, 2, 3, 5, 8};
@@ -54,22 +54,22 @@ final class ReferenceStacks {
         Map<String, Structure> m = new LinkedHashMap<>();
         for (double v : new double[] {-5, 0, 1}) {
             m.put("hemt " + v + " V", Structure.builder(set).grow(buffer).grow(barrier).grow(cap)
-                    .top(TopBoundary.schottky(1.0, v)).build());
+                    .top(TopBoundary.schottky(1.0).atBiasV(v)).build());
         }
         m.put("N-face", Structure.builder(set).polarity(Polarity.N_FACE).grow(buffer)
                 .grow(Layer.of("barrier", Composition.alGaN(0.3), 25 * NM)).grow(Layer.of("channel", Composition.GAN, 15 * NM))
-                .top(TopBoundary.schottky(0.9, 0)).build());
+                .top(TopBoundary.schottky(0.9).atBiasV(0)).build());
         m.put("free surface", Structure.builder(set).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM)).grow(barrier)
-                .top(TopBoundary.freeSurface(1.65, 1e14)).build());
+                .top(TopBoundary.freeSurfacePerCm2(1.65, 1e14)).build());
         Layer custom = Layer.of("custom barrier", variant, 20 * NM).withDopant(Dopant.donorsPerCm3(1e18, 0.02));
-        m.put("custom material", Structure.builder(set).grow(buffer).grow(custom).top(TopBoundary.schottky(1.1, 0))
+        m.put("custom material", Structure.builder(set).grow(buffer).grow(custom).top(TopBoundary.schottky(1.1).atBiasV(0))
                 .build());
-        m.put("custom material, 450 K, fixed bottom", Structure.builder(set).temperature(450).grow(buffer).grow(custom)
-                .grow(cap).top(TopBoundary.schottky(1.1, -1)).bottom(BottomBoundary.fixedFermiLevel(1.5)).build());
+        m.put("custom material, 450 K, fixed bottom", Structure.builder(set).temperatureK(450).grow(buffer).grow(custom)
+                .grow(cap).top(TopBoundary.schottky(1.1).atBiasV(-1)).bottom(BottomBoundary.fixedFermiLevel(1.5)).build());
         m.put("ambacher-2002 InAlN", Structure.builder(ParameterSets.named("ambacher-2002")).grow(buffer)
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM)).grow(Layer.of("barrier", Composition.inAlN(0.17), 10 * NM))
-                .top(TopBoundary.schottky(1.2, 0)).build());
+                .top(TopBoundary.schottky(1.2).atBiasV(0)).build());
         for (long seed : FUZZ_SEEDS) {
             m.put("fuzz seed " + seed, Stacks.random(seed).build());
         }

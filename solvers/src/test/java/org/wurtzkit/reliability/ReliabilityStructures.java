@@ -19,6 +19,6 @@ final class ReliabilityStructures {
      */
     static Structure forSet(ParameterSet set) {
         return Structure.builder(set).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build();
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build();
     }
 }

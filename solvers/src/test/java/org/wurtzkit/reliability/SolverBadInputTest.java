@@ -24,7 +24,7 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
 import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
 import org.wurtzkit.solvers.sp.HoleFermiLevel;
 import org.wurtzkit.solvers.sp.NotConvergedException;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
@@ -38,7 +38,7 @@ import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 
 /**
- * Bad-input table of the solvers module (issue #7): solver options, mesh policy, quantum regions
+ * Bad-input table of the solvers module (issue #7): solver options, mesh policy, quantum windows
  * (including windows outside the stack), band alignment, the effective-mass Hamiltonian, and
  * structures that only the solver can judge. Expected ranges are those of each entry point's
  * Javadoc. A second table drives the solver with the extreme values that the documentation allows:
@@ -54,17 +54,17 @@ class SolverBadInputTest {
 
     private static Structure hemt() {
         return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build();
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build();
     }
 
     private static SolverOptions newtonTolerance(double v) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), v, D.maxNewtonIterations(), D.maxNewtonStep(), D.mesh(),
-                D.quantumRegion(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel());
+                D.quantumWindows(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel());
     }
 
     private static SolverOptions nulls(int which) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), D.newtonTolerance(), D.maxNewtonIterations(),
-                D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumRegion(), D.maxSubbands(),
+                D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumWindows(), D.maxSubbands(),
                 D.subbandCutoffKT(), which == 2 ? null : D.holeFermiLevel());
     }
 
@@ -107,11 +107,11 @@ class SolverBadInputTest {
                 row("cut-off +inf", () -> D.withSubbandCutoffKT(INF), cut, INF, "[1, 200]"),
                 row("cut-off 201 kT", () -> D.withSubbandCutoffKT(201), cut, 201.0, "[1, 200]"),
                 row("null mesh policy", () -> D.withMesh(null), "mesh policy", "null", "(non-null)"),
-                row("null quantum region", () -> D.withQuantumRegion(null), "quantum region", "null", "(non-null)"),
+                row("null quantum windows", () -> D.withQuantumWindows(null), "quantum windows", "null", "(non-null)"),
                 row("null hole Fermi level", () -> D.withHoleFermiLevel(null), "hole Fermi level", "null", "(non-null)"),
                 row("null band alignment", () -> Structure.builder(SET).bandAlignment(null), "band alignment", "null", "(non-null)"),
                 row("null mesh policy (constructor)", () -> nulls(0), "mesh policy", "null", "(non-null)"),
-                row("null quantum region (constructor)", () -> nulls(1), "quantum region", "null", "(non-null)"),
+                row("null quantum windows (constructor)", () -> nulls(1), "quantum windows", "null", "(non-null)"),
                 row("null hole Fermi level (constructor)", () -> nulls(2), "hole Fermi level", "null", "(non-null)"),
                 row("conduction-band fraction NaN", () -> BandAlignment.conductionBandFraction(NAN),
                         "conduction-band offset fraction", NAN, "[0, 1]"),
@@ -142,11 +142,10 @@ class SolverBadInputTest {
                 row("spacing +inf", () -> new MeshPolicy(INF, 1.06, 5e-8), h0, INF, h0r),
                 row("spacing below 1 pm", () -> new MeshPolicy(1e-13, 1.06, 5e-8), h0, 1e-13, h0r),
                 row("spacing above 1 um", () -> new MeshPolicy(2e-6, 1.06, 5e-6), h0, 2e-6, h0r),
-                row("growth ratio 1", () -> new MeshPolicy(1e-10, 1, 5e-8), g, 1.0, "(1, 2]"),
-                row("growth ratio below 1", () -> new MeshPolicy(1e-10, 0.9, 5e-8), g, 0.9, "(1, 2]"),
-                row("growth ratio above 2", () -> new MeshPolicy(1e-10, 2.5, 5e-8), g, 2.5, "(1, 2]"),
-                row("growth ratio NaN", () -> new MeshPolicy(1e-10, NAN, 5e-8), g, NAN, "(1, 2]"),
-                row("growth ratio +inf", () -> new MeshPolicy(1e-10, INF, 5e-8), g, INF, "(1, 2]"),
+                row("growth ratio below 1", () -> new MeshPolicy(1e-10, 0.9, 5e-8), g, 0.9, "[1, 2] (1 for a uniform mesh)"),
+                row("growth ratio above 2", () -> new MeshPolicy(1e-10, 2.5, 5e-8), g, 2.5, "[1, 2] (1 for a uniform mesh)"),
+                row("growth ratio NaN", () -> new MeshPolicy(1e-10, NAN, 5e-8), g, NAN, "[1, 2] (1 for a uniform mesh)"),
+                row("growth ratio +inf", () -> new MeshPolicy(1e-10, INF, 5e-8), g, INF, "[1, 2] (1 for a uniform mesh)"),
                 row("max spacing below the interface spacing", () -> new MeshPolicy(1e-10, 1.06, 5e-11), hm, 5e-11,
                         "[1.0E-10, 1.0E-5]"),
                 row("max spacing NaN", () -> new MeshPolicy(1e-10, 1.06, NAN), hm, NAN, "[1.0E-10, 1.0E-5]"),
@@ -162,7 +161,7 @@ class SolverBadInputTest {
         BadInput.check(c);
     }
 
-    static Stream<Arguments> quantumRegions() {
+    static Stream<Arguments> quantumWindowsCases() {
         String ext = "quantum window extension around an interface (m)";
         String extr = "[1.0E-9, 1.0E-6]";
         String top = "quantum window top depth (m)";
@@ -171,39 +170,39 @@ class SolverBadInputTest {
         double ten = 10 * NM;
         double twenty = 20 * NM;
         return Stream.of(
-                row("extension NaN", () -> new QuantumRegion.Automatic(NAN), ext, NAN, extr),
-                row("extension zero", () -> new QuantumRegion.Automatic(0), ext, 0.0, extr),
-                row("extension 0.5 nm", () -> new QuantumRegion.Automatic(0.5e-9), ext, 0.5e-9, extr),
-                row("extension 2 um", () -> new QuantumRegion.Automatic(2e-6), ext, 2e-6, extr),
-                row("window top negative", () -> new QuantumRegion.Window(-1e-9, 5e-9), top, -1e-9, "[0, +inf), finite"),
-                row("window top NaN", () -> new QuantumRegion.Window(NAN, 5e-9), top, NAN, "[0, +inf), finite"),
-                row("window bottom NaN", () -> new QuantumRegion.Window(0, NAN), bot, NAN, "(finite)"),
-                row("window bottom +inf", () -> new QuantumRegion.Window(0, INF), bot, INF, "(finite)"),
-                row("window thinner than 1 nm", () -> new QuantumRegion.Window(5e-9, 5.5e-9), bot, 5.5e-9,
+                row("extension NaN", () -> new QuantumWindows.Automatic(NAN), ext, NAN, extr),
+                row("extension zero", () -> new QuantumWindows.Automatic(0), ext, 0.0, extr),
+                row("extension 0.5 nm", () -> new QuantumWindows.Automatic(0.5e-9), ext, 0.5e-9, extr),
+                row("extension 2 um", () -> new QuantumWindows.Automatic(2e-6), ext, 2e-6, extr),
+                row("window top negative", () -> new QuantumWindows.Window(-1e-9, 5e-9), top, -1e-9, "[0, +inf), finite"),
+                row("window top NaN", () -> new QuantumWindows.Window(NAN, 5e-9), top, NAN, "[0, +inf), finite"),
+                row("window bottom NaN", () -> new QuantumWindows.Window(0, NAN), bot, NAN, "(finite)"),
+                row("window bottom +inf", () -> new QuantumWindows.Window(0, INF), bot, INF, "(finite)"),
+                row("window thinner than 1 nm", () -> new QuantumWindows.Window(5e-9, 5.5e-9), bot, 5.5e-9,
                         "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
-                row("window upside down", () -> new QuantumRegion.Window(5e-9, 4e-9), bot, 4e-9,
+                row("window upside down", () -> new QuantumWindows.Window(5e-9, 4e-9), bot, 4e-9,
                         "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
-                row("no windows", () -> QuantumRegion.windows(), "number of quantum windows", "0",
-                        "[1, ...) (use QuantumRegion.none())"),
-                row("overlapping windows", () -> QuantumRegion.windows(QuantumRegion.Window.nm(0, 20),
-                        QuantumRegion.Window.nm(10, 30)), "top of quantum window 1 (m)", ten,
+                row("no windows", () -> QuantumWindows.explicit(), "number of quantum windows", "0",
+                        "[1, ...) (use QuantumWindows.none())"),
+                row("overlapping windows", () -> QuantumWindows.explicit(QuantumWindows.Window.nm(0, 20),
+                        QuantumWindows.Window.nm(10, 30)), "top of quantum window 1 (m)", ten,
                         "[" + twenty + ", ...) (below the previous window, no overlap)"),
-                row("window reaching below the stack", () -> new SelfConsistentSolver(D.withQuantumRegion(
-                        QuantumRegion.windows(QuantumRegion.Window.nm(0, 1100)))).solve(hemt()), bot, 1100 * NM,
+                row("window reaching below the stack", () -> new SelfConsistentSolver(D.withQuantumWindows(
+                        QuantumWindows.explicit(QuantumWindows.Window.nm(0, 1100)))).solve(hemt()), bot, 1100 * NM,
                         "[" + 1e-9 + ", " + total + "] (inside the stack, whose thickness is " + total + " m)"),
-                row("window entirely below the stack", () -> new SelfConsistentSolver(D.withQuantumRegion(
-                        QuantumRegion.windows(QuantumRegion.Window.nm(5000, 5050)))).solve(hemt()), bot, 5050 * NM,
+                row("window entirely below the stack", () -> new SelfConsistentSolver(D.withQuantumWindows(
+                        QuantumWindows.explicit(QuantumWindows.Window.nm(5000, 5050)))).solve(hemt()), bot, 5050 * NM,
                         "[" + (5000 * NM + 1e-9) + ", " + total + "] (inside the stack, whose thickness is " + total
                                 + " m)"),
                 row("window too thin for a coarse mesh", () -> new SelfConsistentSolver(D.withMesh(
-                        new MeshPolicy(1e-6, 2, 1e-5)).withQuantumRegion(QuantumRegion.windows(
-                                QuantumRegion.Window.nm(100, 101.5)))).solve(hemt()), "quantum window 0 node count", "3",
+                        new MeshPolicy(1e-6, 2, 1e-5)).withQuantumWindows(QuantumWindows.explicit(
+                                QuantumWindows.Window.nm(100, 101.5)))).solve(hemt()), "quantum window 0 node count", "3",
                         "[5, ...) (window too thin for the mesh)"));
     }
 
     @ParameterizedTest(name = "{0}")
-    @MethodSource("quantumRegions")
-    void quantumRegionRejects(BadInput.Case c) {
+    @MethodSource("quantumWindowsCases")
+    void quantumWindowsReject(BadInput.Case c) {
         BadInput.check(c);
     }
 
@@ -313,7 +312,7 @@ class SolverBadInputTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("uninterpolableGuesses")
     void uninterpolableInitialGuessIsRejectedByName(String label, double[] depth, double[] potential) {
-        Structure s = hemt().withTop(TopBoundary.freeSurface(1.65, 1e13));
+        Structure s = hemt().withTop(TopBoundary.freeSurfacePerCm2(1.65, 1e13));
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
                 () -> new SelfConsistentSolver().solve(s, depth, potential), label);
         assertTrue(e.parameter().contains("initial guess"), e.getMessage());
@@ -322,7 +321,7 @@ class SolverBadInputTest {
     @Test
     void donorAndAcceptorSheetsAtOneDepthAreAStructuralError() {
         Layer cap = Layer.of("cap", Composition.GAN, 10 * NM)
-                .withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02, 5 * NM))
+                .withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02).atOffset(5 * NM))
                 .withDeltaDoping(new DeltaDoping(Dopant.Kind.ACCEPTOR, 1e16, 0.17, 5 * NM));
         Structure s = hemt().toBuilder().grow(cap).build();
         BadInput.checkKind(() -> new SelfConsistentSolver().solve(s), ErrorKind.INVALID_STRUCTURE,
@@ -344,41 +343,40 @@ class SolverBadInputTest {
 
     static Stream<Arguments> extremesAllowed() {
         return Stream.of(
-                Arguments.of("1 K", (Supplier<Structure>) () -> hemt().withTemperature(1)),
-                Arguments.of("2000 K", (Supplier<Structure>) () -> hemt().withTemperature(2000)),
-                Arguments.of("gate -100 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1, -100))),
-                Arguments.of("gate +20 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1, 20))),
-                Arguments.of("barrier 0 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(0, 0))),
-                Arguments.of("barrier 6 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(6, 0))),
+                Arguments.of("1 K", (Supplier<Structure>) () -> hemt().withTemperatureK(1)),
+                Arguments.of("2000 K", (Supplier<Structure>) () -> hemt().withTemperatureK(2000)),
+                Arguments.of("gate -100 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1).atBiasV(-100))),
+                Arguments.of("gate +20 V", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(1).atBiasV(20))),
+                Arguments.of("barrier 0 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(0).atBiasV(0))),
+                Arguments.of("barrier 6 eV", (Supplier<Structure>) () -> hemt().withTop(TopBoundary.schottky(6).atBiasV(0))),
                 Arguments.of("surface donors 6 eV deep",
-                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurface(6, 1e13))),
+                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurfacePerCm2(6, 1e13))),
                 Arguments.of("surface donors 1e16 cm^-2",
-                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurface(1.65, 1e16))),
+                        (Supplier<Structure>) () -> hemt().withTop(TopBoundary.freeSurfacePerCm2(1.65, 1e16))),
                 Arguments.of("bottom E_c - E_F = -1 eV", (Supplier<Structure>) () -> hemt().toBuilder()
                         .bottom(BottomBoundary.fixedFermiLevel(-1)).build()),
                 Arguments.of("bottom E_c - E_F = 7 eV", (Supplier<Structure>) () -> hemt().toBuilder()
                         .bottom(BottomBoundary.fixedFermiLevel(7)).build()),
                 Arguments.of("1 mm buffer", (Supplier<Structure>) () -> Structure.builder(SET)
                         .grow(Layer.of("buffer", Composition.GAN, Layer.MAX_THICKNESS))
-                        .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build()),
+                        .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build()),
                 Arguments.of("1e22 cm^-3 donors", (Supplier<Structure>) () -> hemt().toBuilder()
                         .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDopant(Dopant.donorsPerCm3(1e22, 0.02))).build()),
                 Arguments.of("1e22 cm^-3 acceptors", (Supplier<Structure>) () -> hemt().toBuilder()
                         .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDopant(Dopant.acceptorsPerCm3(1e22, 0.17)))
                         .build()),
                 Arguments.of("1e15 cm^-2 delta sheet", (Supplier<Structure>) () -> hemt().toBuilder()
-                        .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDeltaDoping(DeltaDoping.donorsPerCm2(1e15, 0.02,
-                                2 * NM))).build()),
+                        .grow(Layer.of("cap", Composition.GAN, 5 * NM).withDeltaDoping(DeltaDoping.donorsPerCm2(1e15, 0.02).atOffset(2 * NM))).build()),
                 Arguments.of("AlN 200 nm on GaN", (Supplier<Structure>) () -> Structure.builder(SET)
                         .grow(Layer.of("buffer", Composition.GAN, 1000 * NM)).grow(Layer.of("b", Composition.ALN, 200 * NM))
-                        .top(TopBoundary.schottky(1, 0)).build()),
+                        .top(TopBoundary.schottky(1).atBiasV(0)).build()),
                 Arguments.of("InN 10 nm on GaN", (Supplier<Structure>) () -> Structure.builder(SET)
                         .grow(Layer.of("buffer", Composition.GAN, 1000 * NM)).grow(Layer.of("b", Composition.INN, 10 * NM))
-                        .top(TopBoundary.schottky(1, 0)).build()),
+                        .top(TopBoundary.schottky(1).atBiasV(0)).build()),
                 Arguments.of("1 pm layer", (Supplier<Structure>) () -> hemt().toBuilder()
                         .grow(Layer.of("c", Composition.alGaN(0.5), 1e-12)).build()),
                 Arguments.of("single 0.5 nm layer", (Supplier<Structure>) () -> Structure.builder(SET)
-                        .grow(Layer.of("b", Composition.GAN, 0.5 * NM)).top(TopBoundary.schottky(1, 0)).build()));
+                        .grow(Layer.of("b", Composition.GAN, 0.5 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build()));
     }
 
     /** Every documented end point is either solved (with its invariants) or fails as documented. */

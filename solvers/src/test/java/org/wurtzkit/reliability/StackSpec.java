@@ -64,7 +64,7 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
                         : DeepLevel.donorLikePerCm3(deepDensity, deepEnergy));
             }
             if (deltaDonors > 0) {
-                l = l.withDeltaDoping(DeltaDoping.donorsPerCm2(deltaDonors, 0.02, 0.5 * thicknessNm * NM));
+                l = l.withDeltaDoping(DeltaDoping.donorsPerCm2(deltaDonors, 0.02).atOffset(0.5 * thicknessNm * NM));
             }
             return l;
         }
@@ -88,7 +88,7 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
                         .append(num(deepDensity)).append(", ").append(num(deepEnergy)).append("))");
             }
             if (deltaDonors > 0) {
-                sb.append(".withDeltaDoping(DeltaDoping.donorsPerCm2(").append(num(deltaDonors)).append(", 0.02, ")
+                sb.append(".withDeltaDoping(DeltaDoping.donorsPerCm2(").append(num(deltaDonors)).append(", 0.02).atOffset(")
                         .append(num(0.5 * thicknessNm)).append(" * NM))");
             }
             return sb.toString();
@@ -100,11 +100,11 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
     }
 
     TopBoundary topBoundary() {
-        return schottky ? TopBoundary.schottky(top1, top2) : TopBoundary.freeSurface(top1, top2);
+        return schottky ? TopBoundary.schottky(top1).atBiasV(top2) : TopBoundary.freeSurfacePerCm2(top1, top2);
     }
 
     Structure build() {
-        Structure.Builder b = Structure.builder(parameterSet()).polarity(polarity).temperature(temperature);
+        Structure.Builder b = Structure.builder(parameterSet()).polarity(polarity).temperatureK(temperature);
         for (LayerSpec l : layers) {
             b.grow(l.build());
         }
@@ -124,13 +124,14 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
     /** @return Java code that builds the same structure */
     String toJava() {
         StringBuilder sb = new StringBuilder("Structure s = Structure.builder(ParameterSets.named(\"" + setName + "\"))");
-        sb.append("\n        .polarity(Polarity.").append(polarity).append(").temperature(").append(num(temperature))
+        sb.append("\n        .polarity(Polarity.").append(polarity).append(").temperatureK(").append(num(temperature))
                 .append(")");
         for (LayerSpec l : layers) {
             sb.append("\n        .grow(").append(l.toJava()).append(")");
         }
-        sb.append("\n        .top(TopBoundary.").append(schottky ? "schottky(" : "freeSurface(").append(num(top1)).append(", ")
-                .append(num(top2)).append("))");
+        sb.append("\n        .top(TopBoundary.").append(schottky
+                ? "schottky(" + num(top1) + ").atBiasV(" + num(top2) + "))"
+                : "freeSurfacePerCm2(" + num(top1) + ", " + num(top2) + "))");
         sb.append("\n        .bottom(BottomBoundary.")
                 .append(bottomFixed ? "fixedFermiLevel(" + num(bottomEc) + ")" : "zeroField()").append(")");
         sb.append("\n        .build();\nnew SelfConsistentSolver().solve(s);");

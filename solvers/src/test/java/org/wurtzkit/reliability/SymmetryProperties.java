@@ -23,7 +23,7 @@ import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarity;
 import org.wurtzkit.solvers.schrodinger.BoundStates;
 import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -196,10 +196,10 @@ class SymmetryProperties {
      * related by a symmetry agree far below the tolerances used in the comparisons. (SolverOptions has
      * no withNewtonTolerance, hence the canonical constructor.)
      */
-    static SolverOptions tight(QuantumRegion region) {
+    static SolverOptions tight(QuantumWindows windows) {
         SolverOptions d = SolverOptions.defaults();
         return new SolverOptions(1e-10, d.maxIterations(), 1e-12, d.maxNewtonIterations(), d.maxNewtonStep(), d.mesh(),
-                region, d.maxSubbands(), d.subbandCutoffKT(), d.holeFermiLevel());
+                windows, d.maxSubbands(), d.subbandCutoffKT(), d.holeFermiLevel());
     }
 
     private static WurtziteMaterial shiftedEdges(Composition c, double shiftEv) {
@@ -226,12 +226,12 @@ class SymmetryProperties {
                     .withDopant(Dopant.donorsPerCm3(1e16, 0.02)));
         }
         for (Structure.Builder b : List.of(plain, shifted)) {
-            b.top(TopBoundary.schottky(1.0, bias));
+            b.top(TopBoundary.schottky(1.0).atBiasV(bias));
             if (fixedBottom) {
                 b.bottom(BottomBoundary.fixedFermiLevel(0.4));
             }
         }
-        SelfConsistentSolver solver = new SelfConsistentSolver(tight(QuantumRegion.automatic()));
+        SelfConsistentSolver solver = new SelfConsistentSolver(tight(QuantumWindows.automatic()));
         Solution a = solver.solve(plain.build());
         Solution b = solver.solve(shifted.build());
         double[] pa = a.potential();
@@ -283,16 +283,16 @@ class SymmetryProperties {
             @ForAll @DoubleRange(min = 77, max = 500) double t) {
         WurtziteMaterial gan = unpolarized(Composition.GAN);
         WurtziteMaterial algan = unpolarized(Composition.alGaN(x));
-        Structure s = Structure.builder(SET).temperature(t)
+        Structure s = Structure.builder(SET).temperatureK(t)
                 .grow(Layer.of("outer", gan, 20 * NM))
                 .grow(Layer.of("barrier", algan, barrierNm * NM).withDopant(Dopant.donorsPerCm3(nd, 0.02)))
                 .grow(Layer.of("well", gan, wellNm * NM))
                 .grow(Layer.of("barrier", algan, barrierNm * NM).withDopant(Dopant.donorsPerCm3(nd, 0.02)))
                 .grow(Layer.of("outer", gan, 20 * NM))
-                .top(TopBoundary.schottky(phiB, 0)).bottom(BottomBoundary.fixedFermiLevel(phiB)).build();
+                .top(TopBoundary.schottky(phiB).atBiasV(0)).bottom(BottomBoundary.fixedFermiLevel(phiB)).build();
         double total = s.totalThickness();
-        SelfConsistentSolver solver = new SelfConsistentSolver(tight(QuantumRegion.windows(
-                new QuantumRegion.Window(0, total))));
+        SelfConsistentSolver solver = new SelfConsistentSolver(tight(QuantumWindows.explicit(
+                new QuantumWindows.Window(0, total))));
         Solution sol = solver.solve(s);
         double[] z = sol.depth();
         double[] n = sol.electronDensity();
@@ -364,13 +364,13 @@ class SymmetryProperties {
 
     private static Structure mirrorBuild(List<Spec> bottomUp, boolean mirrored, double topEc, double bottomEc,
             double t, ParameterSet set) {
-        Structure.Builder b = Structure.builder(set).temperature(t).onRelaxed(Composition.GAN)
+        Structure.Builder b = Structure.builder(set).temperatureK(t).onRelaxed(Composition.GAN)
                 .polarity(mirrored ? Polarity.N_FACE : Polarity.METAL_FACE);
         for (int i = 0; i < bottomUp.size(); i++) {
             int k = mirrored ? bottomUp.size() - 1 - i : i;
             b.grow(bottomUp.get(k).layer("L" + k, mirrored));
         }
-        return b.top(TopBoundary.schottky(topEc, 0)).bottom(BottomBoundary.fixedFermiLevel(bottomEc)).build();
+        return b.top(TopBoundary.schottky(topEc).atBiasV(0)).bottom(BottomBoundary.fixedFermiLevel(bottomEc)).build();
     }
 
     @Property(tries = 60, edgeCases = EdgeCasesMode.NONE, shrinking = ShrinkingMode.OFF)
@@ -384,10 +384,10 @@ class SymmetryProperties {
         double total = s.totalThickness();
         assertEquals(total, m.totalThickness(), 1e-12 * total);
         // each window is its own stack's full depth (the two sums of the thicknesses may differ in the last bit)
-        Solution a = new SelfConsistentSolver(tight(quantum ? QuantumRegion.windows(new QuantumRegion.Window(0, total))
-                : QuantumRegion.none())).solve(s);
-        Solution b = new SelfConsistentSolver(tight(quantum ? QuantumRegion.windows(new QuantumRegion.Window(0,
-                m.totalThickness())) : QuantumRegion.none())).solve(m);
+        Solution a = new SelfConsistentSolver(tight(quantum ? QuantumWindows.explicit(new QuantumWindows.Window(0, total))
+                : QuantumWindows.none())).solve(s);
+        Solution b = new SelfConsistentSolver(tight(quantum ? QuantumWindows.explicit(new QuantumWindows.Window(0,
+                m.totalThickness())) : QuantumWindows.none())).solve(m);
         double[] za = a.depth();
         double[] zb = b.depth();
         int n = za.length;

@@ -53,7 +53,7 @@ class WorkflowBadInputTest {
 
     static Structure hemt() {
         return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build();
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build();
     }
 
     static Stream<Arguments> biasGrids() {
@@ -85,7 +85,7 @@ class WorkflowBadInputTest {
     static Stream<Arguments> sweeps() {
         BiasSweep sweep = new BiasSweep();
         TemperatureSweep tSweep = new TemperatureSweep();
-        Structure free = hemt().withTop(TopBoundary.freeSurface(1.65, 1e13));
+        Structure free = hemt().withTop(TopBoundary.freeSurfacePerCm2(1.65, 1e13));
         String t = "(0, 2000]";
         return Stream.of(
                 row("bias sweep without a gate", () -> sweep.run(free, -1, 0), "top boundary", String.valueOf(free.top()),
@@ -122,7 +122,7 @@ class WorkflowBadInputTest {
         ThresholdExtraction ex = new ThresholdExtraction(BiasGrid.linear(-6, 0, 7), ThresholdDefinition.constantDensity(1e11));
         String th = "thickness of layer \"barrier\" (nm)";
         Structure graded = Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.graded("g", Composition.GAN, Composition.alGaN(0.3), 20 * NM)).top(TopBoundary.schottky(1, 0))
+                .grow(Layer.graded("g", Composition.GAN, Composition.alGaN(0.3), 20 * NM)).top(TopBoundary.schottky(1).atBiasV(0))
                 .build();
         return Stream.of(
                 row("too few evaluations", () -> new TargetSearch(new SelfConsistentSolver(), 2),

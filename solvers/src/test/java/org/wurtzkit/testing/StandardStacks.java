@@ -57,6 +57,6 @@ public final class StandardStacks {
      * @return the built stack
      */
     public static Structure gatedHemt(ParameterSet set, double x, double barrierNm, double capNm, double phiB) {
-        return hemt(set, 500, x, barrierNm, capNm, TopBoundary.schottky(phiB, 0));
+        return hemt(set, 500, x, barrierNm, capNm, TopBoundary.schottky(phiB).atBiasV(0));
     }
 }

@@ -31,10 +31,12 @@ public final class FileParameterSet implements ParameterSet {
     private final AlloyScattering alloyScattering;
     private final List<Source> sources;
     private final Map<String, String> notes;
+    private final java.util.OptionalDouble conductionBandOffsetFraction;
 
     FileParameterSet(String name, String description, String fileName, PolarizationModel model,
             Map<Binary, WurtziteMaterial> binaries, AlloyBowing bowing, AlloyScattering alloyScattering, List<Source> sources,
-            Map<String, String> notes) {
+            Map<String, String> notes, java.util.OptionalDouble conductionBandOffsetFraction) {
+        this.conductionBandOffsetFraction = conductionBandOffsetFraction;
         this.name = name;
         this.description = description;
         this.fileName = fileName;
@@ -69,6 +71,12 @@ public final class FileParameterSet implements ParameterSet {
     @Override
     public AlloyBowing bowing() {
         return bowing;
+    }
+
+    /** {@return the file's optional {@code conductionBandOffsetFraction}} */
+    @Override
+    public java.util.OptionalDouble conductionBandOffsetFraction() {
+        return conductionBandOffsetFraction;
     }
 
     @Override

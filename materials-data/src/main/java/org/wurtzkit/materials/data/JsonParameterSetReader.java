@@ -41,6 +41,8 @@ import org.wurtzkit.material.PolarizationModel;
  *   "name": "lab-2025",                              // unique set name
  *   "description": "One sentence saying what the set follows.",
  *   "recommendedPolarizationModel": "LINEAR",        // or "NONLINEAR"
+ *   "conductionBandOffsetFraction": { "value": 0.7, "source": "A00" },  // optional line-up rule:
+ *                                                    // dE_c = f dE_g to GaN; absent: tabulated E_v
  *   "sources": {                                     // the bibliography: key -> citation (+ note)
  *     "VM03": { "citation": "I. Vurgaftman and J. R. Meyer, J. Appl. Phys. 94, 3675 (2003)",
  *               "note": "how the values were taken" },
@@ -110,7 +112,7 @@ public final class JsonParameterSetReader {
     private static final JsonFactory FACTORY = JsonFactory.builder().build();
 
     private static final String[] ROOT_KEYS = {"formatVersion", "name", "description",
-        "recommendedPolarizationModel", "sources", "binaries", "alloyScattering", "bowing"};
+        "recommendedPolarizationModel", "conductionBandOffsetFraction", "sources", "binaries", "alloyScattering", "bowing"};
     private static final String[] SOURCE_KEYS = {"citation", "note"};
     private static final String[] ENTRY_KEYS = {"value", "source", "note", "rule", "unit"};
     private static final String[] BOWING_KINDS = {"gap", "polarization"};
@@ -264,6 +266,16 @@ public final class JsonParameterSetReader {
 
             AlloyBowing bowing = readBowing(required(root, "", "bowing"));
             AlloyScattering alloyScattering = readAlloyScattering(required(root, "", "alloyScattering"));
+            java.util.OptionalDouble lineUp = java.util.OptionalDouble.empty();
+            JsonTree.Member lineUpMember = root.get("conductionBandOffsetFraction");
+            if (lineUpMember != null) {
+                Entry e = entry(lineUpMember, "conductionBandOffsetFraction", "1");
+                if (!(e.fileValue() >= 0 && e.fileValue() <= 1)) {
+                    throw fail("conductionBandOffsetFraction", e.line(), "value " + e.fileValue()
+                            + " is outside the allowed range [0, 1]");
+                }
+                lineUp = java.util.OptionalDouble.of(e.fileValue());
+            }
 
             for (Map.Entry<String, Source> s : sources.entrySet()) {
                 if (!usedSources.contains(s.getKey())) {
@@ -272,7 +284,7 @@ public final class JsonParameterSetReader {
                 }
             }
             return new FileParameterSet(name, description, fileName, model, materials, bowing, alloyScattering,
-                    new ArrayList<>(sources.values()), notes);
+                    new ArrayList<>(sources.values()), notes, lineUp);
         }
 
         private void readSources(JsonTree.Obj obj) {

@@ -114,7 +114,7 @@ class CriticalThicknessDefaultSetTest {
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.26), 22 * NM))
                 .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(1.0, 0.0))
+                .top(TopBoundary.schottky(1.0).atBiasV(0.0))
                 .build();
         assertEquals(List.of(), wafer.layersBeyondCriticalThickness());
         assertEquals(List.of("barrier"), wafer.layersBeyondCriticalThickness(CriticalThickness.MATTHEWS_BLAKESLEE_60)

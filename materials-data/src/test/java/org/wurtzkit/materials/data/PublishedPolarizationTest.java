@@ -35,7 +35,7 @@ class PublishedPolarizationTest {
         return Structure.builder(set).polarizationModel(model)
                 .grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
                 .grow(Layer.of("barrier", barrier, 20 * NM))
-                .top(TopBoundary.schottky(1, 0)).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).build();
     }
 
     /** Computed: Al0.3Ga0.7N on GaN with VM03, eps_xx = 7.30e-3 and eps_zz = -3.98e-3. */

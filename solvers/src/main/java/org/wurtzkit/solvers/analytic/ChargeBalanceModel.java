@@ -268,8 +268,8 @@ public final class ChargeBalanceModel {
         Structure s = Structure.builder(set)
                 .grow(Layer.of("channel", Composition.GAN, 1000 * Units.NM))
                 .grow(Layer.of("barrier", Composition.alGaN(x), barrierThickness))
-                .top(TopBoundary.schottky(schottkyBarrierEv, 0))
-                .temperature(temperatureK)
+                .top(TopBoundary.schottky(schottkyBarrierEv).atBiasV(0))
+                .temperatureK(temperatureK)
                 .build();
         return fromStructure(s);
     }

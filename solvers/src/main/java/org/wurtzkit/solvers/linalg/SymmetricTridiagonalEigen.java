@@ -91,6 +91,8 @@ public final class SymmetricTridiagonalEigen {
     private double scale;
     private double pivmin;
     private double tnorm;
+    /** True when the prepared matrix is all zeros: every eigenvalue is exactly 0. */
+    private boolean zeroMatrix;
     private double gl;
     private double gu;
     private double lastPivotMagnitude;
@@ -388,6 +390,7 @@ public final class SymmetricTridiagonalEigen {
             hi = Math.max(hi, d[i] + r);
         }
         double norm = Math.max(Math.abs(lo), Math.abs(hi));
+        zeroMatrix = norm == 0.0;
         tnorm = norm > 0.0 ? norm : 1.0;
         // Widen the Gershgorin interval (as dstebz does) and verify the counts at its ends.
         double widen = 2.0 * EPS * tnorm * n + 2.0 * pivmin;
@@ -440,9 +443,13 @@ public final class SymmetricTridiagonalEigen {
      * eigenvalues are bisected to full precision.
      */
     private void bisect(int n, int m, double hiInit, boolean vectorsFollow) {
-        if (n == 1) {
-            scaledValues[0] = d[0]; // exact
-            coarse[0] = false;
+        if (n == 1 || zeroMatrix) {
+            // exact: a 1 x 1 matrix is its eigenvalue; an all-zero matrix has only the eigenvalue 0,
+            // which bisection to the fallback norm 1 would place only within 1e-16 of it
+            for (int t = 0; t < m; t++) {
+                scaledValues[t] = n == 1 ? d[0] : 0.0;
+                coarse[t] = false;
+            }
             return;
         }
         for (int t = 0; t < m; t++) {

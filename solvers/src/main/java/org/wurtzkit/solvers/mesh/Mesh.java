@@ -62,7 +62,8 @@ public final class Mesh {
                         Double.toString(breakpoints[s + 1]), "(" + a + ", ...) (strictly increasing)");
             }
             double total = 2 * phiHalf(len / 2, h0, c, hMax);
-            int cells = Math.max(2, (int) Math.ceil(total));
+            // uniform: len / h0 may land a round-off above an integer, which is not one more cell
+            int cells = Math.max(2, (int) Math.ceil(c == 0 ? total * (1 - 1e-12) : total));
             for (int k = 1; k <= cells; k++) {
                 double pos = k == cells ? breakpoints[s + 1] : a + inverse(total * k / cells, total, len, h0, c, hMax);
                 if (n == buf.length) {
@@ -76,6 +77,9 @@ public final class Mesh {
 
     // Phi(s) = integral_0^s dt / h(t) with h(t) = min(h0 + c t, hMax), for s within one half segment.
     private static double phiHalf(double s, double h0, double c, double hMax) {
+        if (c == 0) { // uniform: h = h0 (hMax >= h0 is never reached below it)
+            return s / Math.min(h0, hMax);
+        }
         double sStar = (hMax - h0) / c;
         if (s <= sStar) {
             return Math.log1p(c * s / h0) / c;
@@ -84,6 +88,9 @@ public final class Mesh {
     }
 
     private static double phiHalfInverse(double phi, double h0, double c, double hMax) {
+        if (c == 0) {
+            return phi * Math.min(h0, hMax);
+        }
         double sStar = (hMax - h0) / c;
         double phiStar = Math.log1p(c * sStar / h0) / c;
         if (phi <= phiStar) {

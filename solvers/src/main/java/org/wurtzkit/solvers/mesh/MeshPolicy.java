@@ -15,8 +15,13 @@ import org.wurtzkit.units.Units;
  * within 5 nm of the interface and mesh a 2 um buffer with a few hundred nodes. Halving every
  * spacing ({@link #refined(double)} with 2) is the mesh-convergence check.
  *
+ * <p>A growth ratio of exactly 1 gives a uniform mesh ({@link #uniform(double)}): every cell as
+ * close to h0 as the layer thicknesses allow (each layer is cut into equal cells of at most h0).
+ * It needs many more nodes for the same accuracy near the interfaces, and is there for
+ * comparisons with uniform-mesh results and for checks against analytic solutions.
+ *
  * @param interfaceSpacing spacing h0 at layer boundaries (m), in [1e-12, 1e-6]
- * @param growthRatio      g, in (1, 2]
+ * @param growthRatio      g, in [1, 2] (1: uniform)
  * @param maxSpacing       h_max (m), &ge; interfaceSpacing and &le; 1e-5
  */
 public record MeshPolicy(double interfaceSpacing, double growthRatio, double maxSpacing) {
@@ -35,10 +40,26 @@ public record MeshPolicy(double interfaceSpacing, double growthRatio, double max
      */
     public MeshPolicy {
         Require.inRange("mesh interface spacing (m)", interfaceSpacing, 1e-12, 1e-6);
-        if (!(growthRatio > 1 && growthRatio <= 2)) {
-            throw new InvalidParameterException("mesh growth ratio", Double.toString(growthRatio), "(1, 2]");
+        if (!(growthRatio >= 1 && growthRatio <= 2)) {
+            throw new InvalidParameterException("mesh growth ratio", Double.toString(growthRatio),
+                    "[1, 2] (1 for a uniform mesh)");
         }
         Require.inRange("mesh maximum spacing (m)", maxSpacing, interfaceSpacing, 1e-5);
+    }
+
+    /**
+     * A uniform mesh: growth ratio 1, every spacing at most h (each layer cut into equal cells).
+     *
+     * @param spacing the spacing h (m), in [1e-12, 1e-6]
+     * @return the policy
+     */
+    public static MeshPolicy uniform(double spacing) {
+        return new MeshPolicy(spacing, 1, spacing);
+    }
+
+    /** {@return true for a uniform mesh (growth ratio 1)} */
+    public boolean isUniform() {
+        return growthRatio == 1;
     }
 
     /**
@@ -54,6 +75,9 @@ public record MeshPolicy(double interfaceSpacing, double growthRatio, double max
     /** @return e.g. {@code "mesh 0.1 nm at interfaces, growing by 1.1 to at most 50 nm"} */
     @Override
     public String toString() {
+        if (isUniform()) {
+            return "uniform mesh, " + Decimals.format(interfaceSpacing * 1e9, "nm");
+        }
         return "mesh " + Decimals.format(interfaceSpacing * 1e9, "nm") + " at interfaces, growing by "
                 + Decimals.format(growthRatio) + " to at most " + Decimals.format(maxSpacing * 1e9, "nm");
     }

@@ -140,6 +140,8 @@ final class ChargeModel {
                     acceptors += dens[j] * Ionization.acceptorLikeTrapChargedFraction(x, g);
                     dAcceptors += dens[j] * Ionization.acceptorLikeTrapChargedFractionDerivative(x, g) * invVt;
                 }
+                case FULLY_IONIZED_DONOR -> donors += dens[j]; // no dependence on the potential
+                case FULLY_IONIZED_ACCEPTOR -> acceptors += dens[j];
             }
         }
         out.n = n;

@@ -13,5 +13,9 @@ enum ChargeSpecies {
     /** Donor-like deep level at E_T = E_c - e; positive when empty. */
     DONOR_LIKE_TRAP,
     /** Acceptor-like deep level at E_T = E_c - e; negative when filled. */
-    ACCEPTOR_LIKE_TRAP
+    ACCEPTOR_LIKE_TRAP,
+    /** Donor charged whatever the Fermi level ({@link org.wurtzkit.structure.Dopant.Ionization#FULL}). */
+    FULLY_IONIZED_DONOR,
+    /** Acceptor charged whatever the Fermi level ({@link org.wurtzkit.structure.Dopant.Ionization#FULL}). */
+    FULLY_IONIZED_ACCEPTOR
 }

@@ -85,7 +85,7 @@ final class Device {
         this.vt = Constants.thermalVoltage(s.temperatureK());
         this.kT = Constants.BOLTZMANN * s.temperatureK();
 
-        List<double[]> windows = resolveWindows(s, o.quantumRegion());
+        List<double[]> windows = resolveWindows(s, o.quantumWindows());
         TreeSet<Double> breaks = new TreeSet<>();
         breaks.add(0.0);
         breaks.add(s.totalThickness());
@@ -164,8 +164,10 @@ final class Device {
                 speciesDensity[li][j] = d.densityPerM3();
                 speciesEnergy[li][j] = d.ionizationEnergyEv();
                 speciesDegeneracy[li][j] = d.degeneracy();
-                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR ? ChargeSpecies.SHALLOW_DONOR
-                        : ChargeSpecies.SHALLOW_ACCEPTOR;
+                boolean full = d.ionization() == Dopant.Ionization.FULL;
+                speciesKind[li][j] = d.kind() == Dopant.Kind.DONOR
+                        ? (full ? ChargeSpecies.FULLY_IONIZED_DONOR : ChargeSpecies.SHALLOW_DONOR)
+                        : (full ? ChargeSpecies.FULLY_IONIZED_ACCEPTOR : ChargeSpecies.SHALLOW_ACCEPTOR);
                 j++;
             }
             for (DeepLevel d : l.deepLevels()) {
@@ -256,13 +258,13 @@ final class Device {
         return java.util.Arrays.copyOf(tmp, k);
     }
 
-    private static List<double[]> resolveWindows(Structure s, QuantumRegion region) {
+    private static List<double[]> resolveWindows(Structure s, QuantumWindows choice) {
         List<double[]> out = new ArrayList<>();
         double total = s.totalThickness();
-        if (region instanceof QuantumRegion.None) {
+        if (choice instanceof QuantumWindows.None) {
             return out;
         }
-        if (region instanceof QuantumRegion.Automatic a) {
+        if (choice instanceof QuantumWindows.Automatic a) {
             // one window around every interface, overlapping ones merged
             double ext = a.extension();
             for (double itf : s.interfaceDepths()) {
@@ -276,7 +278,13 @@ final class Device {
             }
             return out;
         }
-        for (QuantumRegion.Window w : ((QuantumRegion.Windows) region).windows()) {
+        if (choice instanceof QuantumWindows.BelowDeepestInterface b) {
+            double[] itf = s.interfaceDepths();
+            double deepest = itf.length == 0 ? 0 : itf[itf.length - 1];
+            out.add(new double[] {0, Math.min(total, deepest + b.depthBelow())});
+            return out;
+        }
+        for (QuantumWindows.Window w : ((QuantumWindows.Explicit) choice).windows()) {
             if (w.depthBottom() > total * (1 + 1e-12)) {
                 throw new InvalidParameterException("quantum window bottom depth (m)", Double.toString(w.depthBottom()),
                         "[" + (w.depthTop() + 1e-9) + ", " + total + "] (inside the stack, whose thickness is " + total

@@ -76,12 +76,29 @@ final class QuantumStates {
             if (found == kMax && kMax < hamiltonians[w].maxStates()) {
                 limitReached |= energy[w][kMax - 1] < bound;
             }
+            double channelMass = 0;
+            if (d.options.densityOfStatesMass() == DensityOfStatesMass.CHANNEL) {
+                int lowest = 0;
+                for (int j = 1; j < v.length; j++) {
+                    if (v[j] < v[lowest]) {
+                        lowest = j;
+                    }
+                }
+                // the material of the cell beside the lowest node with the lower band edge
+                int node = a + lowest;
+                int cell = node == 0 ? 0 : node == d.n - 1 ? d.n - 2 : d.ec[node - 1] < d.ec[node] ? node - 1 : node;
+                channelMass = d.massXY[cell];
+            }
             for (int k = 0; k < found; k++) {
                 double mxy = 0;
-                double[] weight = massWeight[w];
-                for (int j = 0; j < v.length; j++) {
-                    double p = psi[w][k][j];
-                    mxy += p * p * weight[j];
+                if (channelMass > 0) {
+                    mxy = channelMass;
+                } else {
+                    double[] weight = massWeight[w];
+                    for (int j = 0; j < v.length; j++) {
+                        double p = psi[w][k][j];
+                        mxy += p * p * weight[j];
+                    }
                 }
                 // normalised on the window's box widths; the end boxes are half-boxes but psi = 0 there
                 massXY[w][k] = mxy;

@@ -11,7 +11,10 @@ import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Units;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * A converged band diagram. Immutable: every array accessor returns a copy. No field holds NaN.
@@ -53,6 +56,26 @@ public final class Solution {
     private final ConvergenceRecord record;
     private final SolverOptions options;
     private final boolean coldStart;
+    private final List<Warning> warnings;
+    private final List<InterfaceEdges> interfaceEdges;
+    private final List<WellMinimum> wellMinima;
+
+    /**
+     * Holes in the top layer under a free surface above this sheet density (m^-2, 1e10 cm^-2) raise
+     * {@link WarningKind#SURFACE_HOLE_GAS}.
+     */
+    public static final double WARN_SURFACE_HOLES_PER_M2 = 1e14;
+    /**
+     * Window-bound subbands (above the band edge outside an edge of their window) raise
+     * {@link WarningKind#WINDOW_BOUND_SUBBAND} when they hold more than this fraction of their
+     * window's electrons and more than {@link #WARN_SURFACE_HOLES_PER_M2} (1e10 cm^-2).
+     */
+    public static final double WARN_WINDOW_BOUND_FRACTION = 0.01;
+    /**
+     * A window edge raises {@link WarningKind#WINDOW_EDGE_IN_ELECTRONS} when the classical electron
+     * density just outside it exceeds this fraction of the peak density inside the window.
+     */
+    public static final double WARN_EDGE_DENSITY_FRACTION = 0.01;
 
     /**
      * Copies out what one solve computed: the potential and subbands are read, never kept; the
@@ -157,6 +180,129 @@ public final class Solution {
         }
         subbands = Collections.unmodifiableList(bands);
         checkFinite();
+        warnings = collectWarnings(d, phi);
+        interfaceEdges = readInterfaces(d, phi);
+        List<WellMinimum> minima = new ArrayList<>(windows.length);
+        for (int w = 0; w < windows.length; w++) {
+            int best = d.windowStart[w];
+            double lowest = Double.POSITIVE_INFINITY;
+            for (int i = d.windowStart[w]; i <= d.windowEnd[w]; i++) {
+                // both sides of a node: the cells above (i - 1) and below (i)
+                double e = Math.min(i > 0 ? d.ec[i - 1] : d.ec[0], i < nn - 1 ? d.ec[i] : d.ec[nn - 2]) - phi[i];
+                if (e < lowest) {
+                    lowest = e;
+                    best = i;
+                }
+            }
+            minima.add(new WellMinimum(w, depth[best], lowest));
+        }
+        wellMinima = List.copyOf(minima);
+    }
+
+    private List<InterfaceEdges> readInterfaces(Device d, double[] phi) {
+        double[] at = structure.interfaceDepths();
+        List<org.wurtzkit.structure.LayerState> layers = structure.layerStates();
+        List<InterfaceEdges> out = new ArrayList<>(at.length);
+        for (int j = 0; j < at.length; j++) {
+            int i = java.util.Arrays.binarySearch(depth, at[j]);
+            if (i < 0) { // an interface is a mesh node; take the nearest one if round-off moved it
+                int ins = -i - 1;
+                i = ins == 0 ? 0 : ins >= depth.length ? depth.length - 1
+                        : at[j] - depth[ins - 1] <= depth[ins] - at[j] ? ins - 1 : ins;
+            }
+            out.add(new InterfaceEdges(j, depth[i], layers.get(j).layer().name(), layers.get(j + 1).layer().name(),
+                    d.ec[i - 1] - phi[i], d.ec[i] - phi[i], d.ev[i - 1] - phi[i], d.ev[i] - phi[i]));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The band edges on both sides of every internal interface, shallowest first.
+     *
+     * @return one record per interface of {@link Structure#interfaceDepths()}
+     */
+    public List<InterfaceEdges> interfaceEdges() {
+        return interfaceEdges;
+    }
+
+    /**
+     * The lowest conduction-band edge of each quantum window (where its well bottoms out); empty
+     * for a classical solve.
+     *
+     * @return one record per window of {@link #quantumWindows()}
+     */
+    public List<WellMinimum> wellMinima() {
+        return wellMinima;
+    }
+
+    private List<Warning> collectWarnings(Device d, double[] phi) {
+        List<Warning> out = new ArrayList<>(structure.warnings());
+        int nn = depth.length;
+        if (structure.top() instanceof TopBoundary.FreeSurface) {
+            double bottomOfTop = structure.layerStates().get(0).depthBottom();
+            double holes = 0;
+            for (int i = 0; i < nn && depth[i] <= bottomOfTop; i++) {
+                holes += p[i] * d.box(i);
+            }
+            if (holes > WARN_SURFACE_HOLES_PER_M2) {
+                out.add(new Warning(WarningKind.SURFACE_HOLE_GAS, "a hole gas of "
+                        + Decimals.format(Units.perM2ToPerCm2(holes), "cm^-2") + " gathers in the top layer: the "
+                        + "surface donors given (" + structure.top() + ") cannot balance the polarization charge; "
+                        + "give more surface donors or a deeper donor level if the real surface has no holes"));
+            }
+        }
+        for (int w = 0; w < windows.length; w++) {
+            int a = d.windowStart[w];
+            int b = d.windowEnd[w];
+            // conduction band just outside each edge that is not the surface
+            double outsideBelow = b < nn - 1 ? ec[b] : Double.POSITIVE_INFINITY;
+            double outsideAbove = a > 0 ? d.ec[a - 1] - phi[a] : Double.POSITIVE_INFINITY;
+            double wall = Math.min(outsideBelow, outsideAbove);
+            double bound = 0;
+            int boundCount = 0;
+            for (Subband s : subbands) {
+                if (s.window() == w && s.energyEv() > wall) {
+                    bound += s.sheetDensity();
+                    boundCount++;
+                }
+            }
+            if (bound > WARN_SURFACE_HOLES_PER_M2 && bound > WARN_WINDOW_BOUND_FRACTION * wellSheetDensity[w]) {
+                out.add(new Warning(WarningKind.WINDOW_BOUND_SUBBAND, boundCount + (boundCount == 1 ? " subband" : " subbands")
+                        + " of window " + w + " (" + Decimals.format(Units.mToNm(windows[w][0])) + " to "
+                        + Decimals.format(Units.mToNm(windows[w][1]), "nm") + ") lie above the conduction band " + Decimals.format(wall, "eV")
+                        + " outside its edge and hold " + Decimals.format(Units.perM2ToPerCm2(bound), "cm^-2")
+                        + ": bound only by the window's wall; widen the window"));
+            }
+            double peak = 0;
+            for (int i = a; i <= b; i++) {
+                peak = Math.max(peak, n[i]);
+            }
+            for (int i : new int[] {a - 1, b + 1}) {
+                if (i >= 0 && i < nn && n[i] > WARN_EDGE_DENSITY_FRACTION * peak && n[i] > 0) {
+                    out.add(new Warning(WarningKind.WINDOW_EDGE_IN_ELECTRONS, "the " + (i < a ? "top" : "bottom")
+                            + " edge of window " + w + " (at " + Decimals.format(Units.mToNm(depth[i < a ? a : b]), "nm")
+                            + ") cuts through free electrons: " + Decimals.format(Units.perM3ToPerCm3(n[i]), "cm^-3")
+                            + " just outside against a peak of " + Decimals.format(Units.perM3ToPerCm3(peak), "cm^-3")
+                            + " inside; move the edge where the density is low"));
+                }
+            }
+        }
+        if (subbandLimitReached) {
+            out.add(new Warning(WarningKind.SUBBAND_LIMIT_REACHED,
+                    "a quantum window reached the subband limit; its density is too low"));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * What may make this solution mislead: the structure's own {@link Structure#warnings()}, then a
+     * surface hole gas under a free surface, window-bound subbands, window edges inside free
+     * electrons, and a reached subband limit (thresholds: the {@code WARN_...} constants).
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
     }
 
     private void checkFinite() {
@@ -317,6 +463,32 @@ public final class Solution {
         return holeSheet;
     }
 
+    /** {@return all holes of the stack (cm^-2); the twin of {@link #holeSheetDensity()}} */
+    public double holeSheetDensityPerCm2() {
+        return Units.perM2ToPerCm2(holeSheet);
+    }
+
+    /** {@return all electrons of the stack (cm^-2); the twin of {@link #electronSheetDensity()}} */
+    public double electronSheetDensityPerCm2() {
+        return Units.perM2ToPerCm2(electronSheet);
+    }
+
+    /**
+     * The 2DEG sheet density in SI units; the twin of {@link #sheetDensityPerCm2()}.
+     *
+     * @return sheet density (m^-2)
+     */
+    public double sheetDensity() {
+        if (wellSheetDensity.length == 0) {
+            return electronSheet;
+        }
+        double s = 0;
+        for (double v : wellSheetDensity) {
+            s += v;
+        }
+        return s;
+    }
+
     /**
      * The 2DEG sheet density: the subband electrons of all windows, or, for a solve without quantum
      * windows, all electrons of the stack.
@@ -382,20 +554,17 @@ public final class Solution {
         Map<String, String> run = new LinkedHashMap<>();
         run.put("computation", "single solve");
         run.put("start", coldStart ? "cold" : "from a neighbouring solution");
-        return ResultProvenance.of(structure, options.settings(), run, warnings());
+        return ResultProvenance.of(structure, options.settings(), run, provenanceWarnings());
     }
 
     /**
-     * {@return the warnings of this solution: the subband limit, layers beyond their critical
-     * thickness, and a warm start that a cold re-solve reproduces only within the tolerance}
+     * The warnings a provenance record carries: every typed {@link #warnings()} as text, and a warm
+     * start that a cold re-solve reproduces only within the tolerance.
      */
-    List<String> warnings() {
+    private List<String> provenanceWarnings() {
         List<String> w = new ArrayList<>();
-        if (subbandLimitReached) {
-            w.add("a quantum window reached the subband limit; its density is too low");
-        }
-        for (org.wurtzkit.structure.LayerState s : structure.layersBeyondCriticalThickness()) {
-            w.add(s.layer().name() + " is thicker than its critical thickness (an estimate); it may relax");
+        for (Warning x : warnings) {
+            w.add(x.toString());
         }
         if (!coldStart) {
             w.add("started from a neighbouring solution: a cold re-solve agrees within the tolerance "
@@ -412,8 +581,8 @@ public final class Solution {
     /**
      * A summary to read in jshell or a notebook: the bias, temperature and mesh; the 2DEG sheet
      * density and the holes; one line for each of the first {@value #SUBBANDS_SHOWN} subbands (in
-     * the order of {@link #subbands()}) and one for the rest together; the convergence record; and a
-     * warning when the subband limit was reached. For example:
+     * the order of {@link #subbands()}) and one for the rest together; the convergence record; and one
+     * line for each of its {@link #warnings()}. For example:
      *
      * <pre>
      * Solution (Schottky gate, barrier 1 eV, bias 0 V; 300 K; 412 nodes over 1825 nm):
@@ -454,9 +623,7 @@ public final class Solution {
                     .append(Decimals.format(rest, "cm^-2")).append(" together\n");
         }
         sb.append("  ").append(record);
-        if (subbandLimitReached) {
-            sb.append("\n  warning: a quantum window reached the subband limit; its density is too low");
-        }
+        sb.append(Warning.lines(warnings));
         return sb.toString();
     }
 }

@@ -23,17 +23,19 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param maxNewtonIterations   Newton steps allowed per Poisson solve; default 200, in [1, 100000]
  * @param maxNewtonStep         largest change of the potential at any node in one Newton step (V); default 0.5, in [1e-3, 10]
  * @param mesh                  mesh policy; default {@link MeshPolicy#DEFAULT}
- * @param quantumRegion         where electrons are quantum; default {@link QuantumRegion#automatic()}
+ * @param quantumWindows         where electrons are quantum; default {@link QuantumWindows#automatic()}
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
  * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
+ * @param densityOfStatesMass   which in-plane mass sets each subband's 2D density of states; default
+ *                              {@link DensityOfStatesMass#WAVEFUNCTION_WEIGHTED}
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
-        double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
-        HoleFermiLevel holeFermiLevel) {
+        double maxNewtonStep, MeshPolicy mesh, QuantumWindows quantumWindows, int maxSubbands, double subbandCutoffKT,
+        HoleFermiLevel holeFermiLevel, DensityOfStatesMass densityOfStatesMass) {
 
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
-            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE);
+            QuantumWindows.automatic(), 60, 15, HoleFermiLevel.GATE, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
 
     /**
      * Creates the settings and validates every field against the range given in the class
@@ -45,10 +47,11 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      * @param maxNewtonIterations Newton steps allowed per Poisson solve, in [1, 100000]
      * @param maxNewtonStep       largest change of the potential at any node in one Newton step (V), in [1e-3, 10]
      * @param mesh                mesh policy, not null
-     * @param quantumRegion       where electrons are quantum, not null
+     * @param quantumWindows      where electrons are quantum, not null
      * @param maxSubbands         most subbands kept per window, in [1, 2000]
      * @param subbandCutoffKT     subbands are kept up to E_F + this many kT, in [1, 200]
      * @param holeFermiLevel      holes' quasi-Fermi level, not null
+     * @param densityOfStatesMass which in-plane mass sets each subband's 2D density of states, not null
      * @throws org.wurtzkit.errors.InvalidParameterException if a value is outside its range or null
      */
     public SolverOptions {
@@ -58,10 +61,32 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         Require.inRange("maxNewtonIterations", maxNewtonIterations, 1, 100000);
         Require.inRange("maxNewtonStep (V)", maxNewtonStep, 1e-3, 10);
         Require.nonNull("mesh policy", mesh);
-        Require.nonNull("quantum region", quantumRegion);
+        Require.nonNull("quantum windows", quantumWindows);
         Require.inRange("maxSubbands", maxSubbands, 1, 2000);
         Require.inRange("subbandCutoffKT", subbandCutoffKT, 1, 200);
         Require.nonNull("hole Fermi level", holeFermiLevel);
+        Require.nonNull("density-of-states mass", densityOfStatesMass);
+    }
+
+    /**
+     * The options with the default {@link DensityOfStatesMass#WAVEFUNCTION_WEIGHTED}.
+     *
+     * @param tolerance           see the class documentation
+     * @param maxIterations       see the class documentation
+     * @param newtonTolerance     see the class documentation
+     * @param maxNewtonIterations see the class documentation
+     * @param maxNewtonStep       see the class documentation
+     * @param mesh                see the class documentation
+     * @param quantumWindows       see the class documentation
+     * @param maxSubbands         see the class documentation
+     * @param subbandCutoffKT     see the class documentation
+     * @param holeFermiLevel      see the class documentation
+     */
+    public SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
+            double maxNewtonStep, MeshPolicy mesh, QuantumWindows quantumWindows, int maxSubbands, double subbandCutoffKT,
+            HoleFermiLevel holeFermiLevel) {
+        this(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
     }
 
     /** {@return the defaults listed in the class documentation} */
@@ -78,7 +103,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
+                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -89,8 +114,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
      */
     public SolverOptions withMaxIterations(int v) {
-        return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+        return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -101,8 +126,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
      */
     public SolverOptions withNewtonTolerance(double v) {
-        return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+        return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -113,8 +138,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
      */
     public SolverOptions withMaxNewtonIterations(int v) {
-        return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumWindows,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -125,8 +150,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
      */
     public SolverOptions withMaxNewtonStep(double v) {
-        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumWindows,
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -138,19 +163,19 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
+                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
-     * Returns a copy with another value of the quantum region; every other setting is kept.
+     * Returns a copy with other quantum windows; every other setting is kept.
      *
      * @param v where electrons are quantum, not null
-     * @return a copy with {@code quantumRegion} set to {@code v}
-     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     * @return a copy with {@code quantumWindows} set to {@code v}
+     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is null
      */
-    public SolverOptions withQuantumRegion(QuantumRegion v) {
+    public SolverOptions withQuantumWindows(QuantumWindows v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -162,7 +187,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, v, subbandCutoffKT, holeFermiLevel);
+                quantumWindows, v, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -174,7 +199,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, v, holeFermiLevel);
+                quantumWindows, maxSubbands, v, holeFermiLevel, densityOfStatesMass);
     }
 
     /**
@@ -186,7 +211,13 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, v);
+                quantumWindows, maxSubbands, subbandCutoffKT, v, densityOfStatesMass);
+    }
+
+    /** @param v which mass sets the 2D density of states @return a copy */
+    public SolverOptions withDensityOfStatesMass(DensityOfStatesMass v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, v);
     }
     /**
      * Every option as ordered name/value text, for the provenance of a result: numbers written with
@@ -207,21 +238,22 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         m.put("mesh.interfaceSpacing", Double.toString(mesh.interfaceSpacing()));
         m.put("mesh.growthRatio", Double.toString(mesh.growthRatio()));
         m.put("mesh.maxSpacing", Double.toString(mesh.maxSpacing()));
-        m.put("quantumRegion", quantumRegionText(quantumRegion));
+        m.put("quantumWindows", quantumWindowsText(quantumWindows));
         m.put("maxSubbands", Integer.toString(maxSubbands));
         m.put("subbandCutoffKT", Double.toString(subbandCutoffKT));
         m.put("holeFermiLevel", holeFermiLevel.name());
+        m.put("densityOfStatesMass", densityOfStatesMass.name());
         return Collections.unmodifiableMap(m);
     }
 
-    private static String quantumRegionText(QuantumRegion q) {
-        if (q instanceof QuantumRegion.Automatic a) {
+    private static String quantumWindowsText(QuantumWindows q) {
+        if (q instanceof QuantumWindows.Automatic a) {
             return "automatic " + Double.toString(a.extension());
         }
-        if (q instanceof QuantumRegion.Windows w) {
+        if (q instanceof QuantumWindows.Explicit w) {
             StringBuilder sb = new StringBuilder("windows");
             for (int i = 0; i < w.windows().size(); i++) {
-                QuantumRegion.Window x = w.windows().get(i);
+                QuantumWindows.Window x = w.windows().get(i);
                 sb.append(i == 0 ? " " : ", ").append(Double.toString(x.depthTop())).append(' ')
                         .append(Double.toString(x.depthBottom()));
             }
@@ -250,8 +282,9 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
                 real(settings, "maxNewtonStep"),
                 new MeshPolicy(real(settings, "mesh.interfaceSpacing"), real(settings, "mesh.growthRatio"),
                         real(settings, "mesh.maxSpacing")),
-                quantumRegion(text(settings, "quantumRegion")), integer(settings, "maxSubbands"),
-                real(settings, "subbandCutoffKT"), holeFermiLevel(text(settings, "holeFermiLevel")));
+                quantumWindows(text(settings, "quantumWindows")), integer(settings, "maxSubbands"),
+                real(settings, "subbandCutoffKT"), holeFermiLevel(text(settings, "holeFermiLevel")),
+                densityOfStatesMass(text(settings, "densityOfStatesMass")));
     }
 
     private static String text(Map<String, String> m, String key) {
@@ -291,29 +324,39 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
                 "one of " + java.util.Arrays.toString(HoleFermiLevel.values()));
     }
 
-    private static QuantumRegion quantumRegion(String v) {
+    private static DensityOfStatesMass densityOfStatesMass(String v) {
+        for (DensityOfStatesMass m : DensityOfStatesMass.values()) {
+            if (m.name().equals(v)) {
+                return m;
+            }
+        }
+        throw new InvalidParameterException("solver setting \"densityOfStatesMass\"", v,
+                "one of " + java.util.Arrays.toString(DensityOfStatesMass.values()));
+    }
+
+    private static QuantumWindows quantumWindows(String v) {
         String allowed = "\"none\", \"automatic <extension m>\" or \"windows <top m> <bottom m>, ...\"";
         try {
             if ("none".equals(v)) {
-                return QuantumRegion.none();
+                return QuantumWindows.none();
             }
             if (v.startsWith("automatic ")) {
-                return new QuantumRegion.Automatic(Double.parseDouble(v.substring("automatic ".length()).trim()));
+                return new QuantumWindows.Automatic(Double.parseDouble(v.substring("automatic ".length()).trim()));
             }
             if (v.startsWith("windows ")) {
-                List<QuantumRegion.Window> ws = new ArrayList<>();
+                List<QuantumWindows.Window> ws = new ArrayList<>();
                 for (String part : v.substring("windows ".length()).split(",")) {
                     String[] tb = part.trim().split(" ");
                     if (tb.length != 2) {
-                        throw new InvalidParameterException("solver setting \"quantumRegion\"", v, allowed);
+                        throw new InvalidParameterException("solver setting \"quantumWindows\"", v, allowed);
                     }
-                    ws.add(new QuantumRegion.Window(Double.parseDouble(tb[0]), Double.parseDouble(tb[1])));
+                    ws.add(new QuantumWindows.Window(Double.parseDouble(tb[0]), Double.parseDouble(tb[1])));
                 }
-                return new QuantumRegion.Windows(ws);
+                return new QuantumWindows.Explicit(ws);
             }
         } catch (NumberFormatException e) {
-            throw new InvalidParameterException("solver setting \"quantumRegion\"", v, allowed);
+            throw new InvalidParameterException("solver setting \"quantumWindows\"", v, allowed);
         }
-        throw new InvalidParameterException("solver setting \"quantumRegion\"", v, allowed);
+        throw new InvalidParameterException("solver setting \"quantumWindows\"", v, allowed);
     }
 }

@@ -19,7 +19,7 @@
  * iterate.</li>
  * <li><b>Outer loop</b> (A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81,
  * 7880 (1997)): {@code QuantumStates} solves the BenDaniel-Duke equation in every quantum window
- * ({@link org.wurtzkit.solvers.sp.QuantumRegion}) for the lowest subbands, O(N k); then Newton-Poisson
+ * ({@link org.wurtzkit.solvers.sp.QuantumWindows}) for the lowest subbands, O(N k); then Newton-Poisson
  * runs with the predictor density g<sub>k</sub> ln(1 + e<sup>eta</sup>) |psi<sub>k</sub>|<sup>2</sup>,
  * whose one home is {@code SubbandDensity}; repeat until max |delta phi| is below the tolerance. An
  * eigen-solver failure inside the loop ends the solve as a {@code NotConvergedException} with the

@@ -63,7 +63,7 @@ public final class BiasSweep {
         int n = grid.size();
         Structure[] at = new Structure[n];
         for (int i = 0; i < n; i++) {
-            at[i] = structure.withTop(gate.withBias(grid.get(i)));
+            at[i] = structure.withTop(gate.atBiasV(grid.get(i)));
         }
         Solution[] solutions = new Solution[n];
         PointFailure.Reason[] failures = new PointFailure.Reason[n];

@@ -14,6 +14,8 @@ import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * The result of a {@link BiasSweep}: per bias point the 2DEG sheet density, the gate charge, all
@@ -44,6 +46,7 @@ public final class BiasSweepResult implements CsvTable {
     private final String[] status;
     private final CapacitanceVoltage cv;
     private final SolverOptions options;
+    private final List<Warning> warnings;
 
     BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, PointFailure.Reason[] reasons,
             SolverOptions options) {
@@ -79,6 +82,24 @@ public final class BiasSweepResult implements CsvTable {
         }
         this.failures = Collections.unmodifiableList(f);
         this.cv = new CapacitanceVoltage(bias, gateCharge, this::provenance);
+        String[] labels = new String[n];
+        for (int i = 0; i < n; i++) {
+            labels[i] = "V_g = " + Decimals.format(bias[i], "V");
+        }
+        this.warnings = Warning.union(structure.warnings().stream()
+                .filter(w -> w.kind() != WarningKind.GATE_BIAS_AT_OR_ABOVE_BARRIER).toList(),
+                PointWarnings.of(solutions, labels));
+    }
+
+    /**
+     * What may make this sweep mislead: the stack's own warnings (except its own gate bias, which is
+     * not one of the points), then each kind of warning that a converged point raised, once, at the
+     * first such point, with the count of the others.
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
     }
 
     /** {@return the structure as given to the sweep (its own bias is not one of the points, unless listed)} */
@@ -118,6 +139,15 @@ public final class BiasSweepResult implements CsvTable {
     /** {@return all electrons of the stack (m^-2)} */
     public double[] electronSheetDensity() {
         return allElectrons.clone();
+    }
+
+    /** {@return all electrons of the stack (cm^-2); the twin of {@link #electronSheetDensity()}} */
+    public double[] electronSheetDensityPerCm2() {
+        double[] out = new double[allElectrons.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = Units.perM2ToPerCm2(allElectrons[i]);
+        }
+        return out;
     }
 
     /** {@return outer Schroedinger-Poisson iterations per point, -1 for a failed point} */
@@ -169,6 +199,19 @@ public final class BiasSweepResult implements CsvTable {
      *                                   the level is not crossed, or n_s never rises with V_g
      */
     public double thresholdVoltage(ThresholdDefinition definition) {
+        return threshold(definition).voltageV();
+    }
+
+    /**
+     * As {@link #thresholdVoltage(ThresholdDefinition)}, with a warning of kind
+     * {@link WarningKind#THRESHOLD_OUTSIDE_SWEPT_RANGE} when a linear extrapolation meets n_s = 0
+     * outside the swept biases (the tangent was then carried beyond what was computed).
+     *
+     * @param definition the definition (see {@link ThresholdDefinition})
+     * @return V_th with its warnings
+     * @throws InvalidParameterException as {@link #thresholdVoltage(ThresholdDefinition)}
+     */
+    public Threshold threshold(ThresholdDefinition definition) {
         Require.nonNull("threshold definition", definition);
         int n = bias.length;
         // ascending order of bias
@@ -181,9 +224,16 @@ public final class BiasSweepResult implements CsvTable {
             s[k] = sheet[i];
         }
         if (definition instanceof ThresholdDefinition.ConstantDensity c) {
-            return constantDensity(v, s, c.levelPerCm2());
+            return new Threshold(constantDensity(v, s, c.levelPerCm2()), definition, List.of());
         }
-        return linearExtrapolation(v, s);
+        double vth = linearExtrapolation(v, s);
+        if (vth < v[0] || vth > v[n - 1]) {
+            return new Threshold(vth, definition, List.of(new Warning(WarningKind.THRESHOLD_OUTSIDE_SWEPT_RANGE,
+                    "the linear extrapolation meets n_s = 0 at " + Decimals.format(vth, "V") + ", outside the swept "
+                            + "range [" + Decimals.format(v[0]) + ", " + Decimals.format(v[n - 1], "V")
+                            + "]; extend the sweep to confirm")));
+        }
+        return new Threshold(vth, definition, List.of());
     }
 
     private double constantDensity(double[] v, double[] s, double level) {
@@ -289,6 +339,6 @@ public final class BiasSweepResult implements CsvTable {
                 + Decimals.format(bias[bias.length - 1], "V") + ", " + (bias.length - failures.size()) + " converged"
                 + (failures.isEmpty() ? "" : ", " + failures.size() + " failed")
                 + (Double.isNaN(lo) ? "" : "; n_s from " + Decimals.format(lo) + " to " + Decimals.format(hi, "cm^-2"))
-                + "\n" + preview(10);
+                + Warning.lines(warnings) + "\n" + preview(10);
     }
 }

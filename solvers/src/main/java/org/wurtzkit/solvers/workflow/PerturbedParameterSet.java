@@ -81,6 +81,16 @@ final class PerturbedParameterSet implements ParameterSet {
     }
 
     @Override
+    public java.util.OptionalDouble conductionBandOffsetFraction() {
+        return base.conductionBandOffsetFraction();
+    }
+
+    @Override
+    public org.wurtzkit.material.AlloyGapTemperatureRule alloyGapTemperatureRule() {
+        return base.alloyGapTemperatureRule();
+    }
+
+    @Override
     public List<Source> sources() {
         List<Source> s = new ArrayList<>(base.sources());
         s.add(SOURCE);

@@ -115,7 +115,10 @@ public final class StructureFamilies {
         return b.onInPlaneLattice(template.referenceLatticeA())
                 .polarity(template.polarity())
                 .polarizationModel(template.polarizationModel())
-                .temperature(template.temperatureK())
+                .bandAlignment(template.bandAlignment())
+                .strainShiftsBandEdges(template.strainShiftsBandEdges())
+                .criticalThicknessModel(template.criticalThicknessModel())
+                .temperatureK(template.temperatureK())
                 .top(template.top())
                 .bottom(template.bottom())
                 .build();

@@ -72,6 +72,14 @@ public final class TargetResult implements CsvTable {
         return structure;
     }
 
+    /**
+     * {@return the warnings of the structure found ({@link Structure#warnings()}), e.g. a barrier
+     * grown beyond its critical thickness to reach the target}
+     */
+    public List<org.wurtzkit.warnings.Warning> warnings() {
+        return structure.warnings();
+    }
+
     /** {@return number of evaluations (each one a full solve or bias sweep)} */
     public int evaluations() {
         return evaluatedParameters.length;
@@ -114,6 +122,7 @@ public final class TargetResult implements CsvTable {
                 + Decimals.format(tolerance, quantity.unit()) + "): " + parameter.name() + " = "
                 + Decimals.format(value, parameter.unit())
                 + " gives " + Decimals.format(achieved, quantity.unit()) + " after " + evaluatedParameters.length
-                + (evaluatedParameters.length == 1 ? " evaluation" : " evaluations") + "\n" + preview(10);
+                + (evaluatedParameters.length == 1 ? " evaluation" : " evaluations")
+                + org.wurtzkit.warnings.Warning.lines(warnings()) + "\n" + preview(10);
     }
 }

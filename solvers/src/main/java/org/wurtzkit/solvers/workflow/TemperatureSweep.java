@@ -12,7 +12,7 @@ import org.wurtzkit.structure.Structure;
  * temperature is solved cold, each further one starts from the previous solution; a failed
  * continued solve is retried cold, and a point that fails both ways is recorded, not dropped.
  *
- * <p>Each point is the structure at that temperature ({@link Structure#withTemperature(double)}):
+ * <p>Each point is the structure at that temperature ({@link Structure#withTemperatureK(double)}):
  * the band gaps follow each material's Varshni law ({@link BandGap}) and the band edges, Fermi
  * statistics and subband occupations are evaluated at that temperature by the solver; the
  * polarization and the lattice are those of the structure (no thermal expansion).
@@ -64,7 +64,7 @@ public final class TemperatureSweep {
         }
         Structure[] at = new Structure[t.length];
         for (int i = 0; i < t.length; i++) {
-            at[i] = structure.withTemperature(t[i]);
+            at[i] = structure.withTemperatureK(t[i]);
         }
         Solution[] solutions = new Solution[t.length];
         PointFailure.Reason[] failures = new PointFailure.Reason[t.length];

@@ -12,6 +12,7 @@ import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.solvers.sp.Subband;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * The result of a {@link TemperatureSweep}: per temperature the 2DEG sheet density, the gate
@@ -41,6 +42,7 @@ public final class TemperatureSweepResult implements CsvTable {
     private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
     private final SolverOptions options;
+    private final List<Warning> warnings;
 
     TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, PointFailure.Reason[] reasons,
             SolverOptions options) {
@@ -82,6 +84,21 @@ public final class TemperatureSweepResult implements CsvTable {
             status[i] = bands.isEmpty() ? "ok (no subbands)" : "ok";
         }
         this.failures = Collections.unmodifiableList(f);
+        String[] labels = new String[n];
+        for (int i = 0; i < n; i++) {
+            labels[i] = "T = " + Decimals.format(temperature[i], "K");
+        }
+        this.warnings = PointWarnings.of(solutions, labels);
+    }
+
+    /**
+     * What may make this sweep mislead: each kind of warning that a converged point raised (its
+     * structure's or its solution's), once, at the first such point, with the count of the others.
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
     }
 
     private static double lowest(List<Subband> bands) {
@@ -110,6 +127,15 @@ public final class TemperatureSweepResult implements CsvTable {
     /** {@return 2DEG sheet density (cm^-2)} */
     public double[] sheetDensityPerCm2() {
         return sheet.clone();
+    }
+
+    /** {@return 2DEG sheet density (m^-2); the twin of {@link #sheetDensityPerCm2()}} */
+    public double[] sheetDensity() {
+        double[] out = new double[sheet.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = org.wurtzkit.units.Units.perCm2ToPerM2(sheet[i]);
+        }
+        return out;
     }
 
     /** {@return gate charge (C/m&sup2;), 0 for a free surface} */
@@ -216,6 +242,7 @@ public final class TemperatureSweepResult implements CsvTable {
         return "Temperature sweep: " + temperature.length + " temperatures from " + Decimals.format(temperature[0], "K")
                 + " to " + Decimals.format(temperature[temperature.length - 1], "K") + ", "
                 + (temperature.length - failures.size()) + " converged"
-                + (failures.isEmpty() ? "" : ", " + failures.size() + " failed") + "\n" + preview(10);
+                + (failures.isEmpty() ? "" : ", " + failures.size() + " failed") + Warning.lines(warnings) + "\n"
+                + preview(10);
     }
 }

@@ -37,12 +37,25 @@ public record ThresholdExtraction(BiasGrid grid, ThresholdDefinition definition)
      * @throws WurtzkitException of kind NOT_CONVERGED if a bias point failed
      */
     public double thresholdVoltage(Structure structure, BiasSweep sweep) {
+        return threshold(structure, sweep).voltageV();
+    }
+
+    /**
+     * As {@link #thresholdVoltage(Structure, BiasSweep)}, with the threshold's warnings (see
+     * {@link BiasSweepResult#threshold(ThresholdDefinition)}).
+     *
+     * @param structure the stack (Schottky gate)
+     * @param sweep     the sweep runner
+     * @return V_th with its warnings
+     * @throws WurtzkitException of kind NOT_CONVERGED if a bias point failed
+     */
+    public Threshold threshold(Structure structure, BiasSweep sweep) {
         BiasSweepResult r = Require.nonNull("bias sweep", sweep).run(structure, grid);
         if (!r.failures().isEmpty()) {
             throw new WurtzkitException(ErrorKind.NOT_CONVERGED, "threshold extraction needs every bias point; "
                     + r.failures().size() + " of " + r.size() + " failed, first: " + r.failures().get(0));
         }
-        return r.thresholdVoltage(definition);
+        return r.threshold(definition);
     }
 
     /** @return e.g. {@code "threshold at n_s = 1e11 cm^-2, over 41 gate biases from 0 V to -8 V"} */

@@ -3,6 +3,7 @@ package org.wurtzkit.solvers.workflow;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
+import org.wurtzkit.bands.BandAlignment;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
@@ -227,7 +228,8 @@ public final class ToleranceStudy {
                     List<Dopant> dopants = new ArrayList<>();
                     for (Dopant d : l.dopants()) {
                         dopants.add(d.kind() == Dopant.Kind.DONOR
-                                ? new Dopant(Dopant.Kind.DONOR, v * 1e6, d.ionizationEnergyEv(), d.degeneracy())
+                                ? new Dopant(Dopant.Kind.DONOR, v * 1e6, d.ionizationEnergyEv(), d.degeneracy(),
+                                        d.ionization())
                                 : d);
                     }
                     layers.set(li, new Layer(l.name(), l.material(), l.thickness(), dopants, l.deepLevels(),
@@ -246,7 +248,11 @@ public final class ToleranceStudy {
             }
         }
         ParameterSet base = template.parameters();
-        if (!Double.isNaN(bandOffset)) {
+        BandAlignment alignment = template.bandAlignment();
+        if (!Double.isNaN(bandOffset) && alignment instanceof BandAlignment.ConductionBandFraction) {
+            // the template lines up by a fraction: vary that fraction itself
+            alignment = BandAlignment.conductionBandFraction(bandOffset);
+        } else if (!Double.isNaN(bandOffset)) {
             overrides = overrides == null ? emptyOverrides() : overrides;
             double evGaN = value(base, overrides, Binary.GAN, MaterialParameter.VALENCE_BAND_EDGE);
             double gapGaN = value(base, overrides, Binary.GAN, MaterialParameter.BAND_GAP_0K);
@@ -262,7 +268,10 @@ public final class ToleranceStudy {
         }
         return b.polarity(template.polarity())
                 .polarizationModel(template.polarizationModel())
-                .temperature(temperature)
+                .bandAlignment(alignment)
+                .strainShiftsBandEdges(template.strainShiftsBandEdges())
+                .criticalThicknessModel(template.criticalThicknessModel())
+                .temperatureK(temperature)
                 .top(top)
                 .bottom(template.bottom())
                 .build();

@@ -34,7 +34,7 @@ class ChargeBalanceModelTest {
         if (capNm > 0) {
             b.grow(Layer.of("cap", Composition.GAN, capNm * NM));
         }
-        return b.top(TopBoundary.schottky(phiB, 0)).build();
+        return b.top(TopBoundary.schottky(phiB).atBiasV(0)).build();
     }
 
     /**
@@ -91,7 +91,7 @@ class ChargeBalanceModelTest {
         ParameterSet set = ParameterSets.defaultSet();
         ChargeBalanceModel m = ChargeBalanceModel.alGaNOnGaN(set, 0.25, 25 * NM, 1.0, 300);
         Structure s = Structure.builder(set).grow(Layer.of("channel", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1.0, 0)).build();
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1.0).atBiasV(0)).build();
         assertEquals(s.interfaceCharges().get(0).sigma(), m.layers().get(0).chargeBelow(), 1e-15);
         double dEc = set.material(Composition.alGaN(0.25)).conductionBandEdgeEv(300)
                 - set.material(Composition.GAN).conductionBandEdgeEv(300);
@@ -109,7 +109,7 @@ class ChargeBalanceModelTest {
     /** The gate bias of a Schottky top enters as E_c(0) = phi_B - V: bias V equals barrier phi_B - V. */
     @Test
     void gateBiasShiftsLikeTheBarrier() {
-        Structure biased = a00Hemt(0.25, 25, 0, 1.0).withTop(TopBoundary.schottky(1.0, -1.5));
+        Structure biased = a00Hemt(0.25, 25, 0, 1.0).withTop(TopBoundary.schottky(1.0).atBiasV(-1.5));
         Structure lowered = a00Hemt(0.25, 25, 0, 2.5);
         ChargeBalanceModel a = ChargeBalanceModel.fromStructure(a00Lineup(biased));
         ChargeBalanceModel b = ChargeBalanceModel.fromStructure(a00Lineup(lowered));
@@ -121,25 +121,25 @@ class ChargeBalanceModelTest {
     void structuresTheModelCannotHoldAreRejected() {
         ParameterSet set = A00TestSet.INSTANCE;
         Structure free = Structure.builder(set).grow(Layer.of("channel", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.freeSurface(1.65, 1e14))
+                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.freeSurfacePerCm2(1.65, 1e14))
                 .build();
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
                 () -> ChargeBalanceModel.fromStructure(free));
         assertTrue(e.getMessage().contains("top boundary"), e.getMessage());
 
         Structure single = Structure.builder(set).grow(Layer.of("channel", Composition.GAN, 1000 * NM))
-                .top(TopBoundary.schottky(1, 0)).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).build();
         assertThrows(InvalidParameterException.class, () -> ChargeBalanceModel.fromStructure(single));
 
         Structure doped = Structure.builder(set).grow(Layer.of("channel", Composition.GAN, 1000 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM).withDopant(Dopant.donorsPerCm3(1e18, 0.03)))
-                .top(TopBoundary.schottky(1, 0)).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).build();
         e = assertThrows(InvalidParameterException.class, () -> ChargeBalanceModel.fromStructure(doped));
         assertTrue(e.getMessage().contains("barrier"), e.getMessage());
 
         Structure graded = Structure.builder(set).grow(Layer.of("channel", Composition.GAN, 1000 * NM))
                 .grow(Layer.graded("barrier", Composition.alGaN(0.05), Composition.alGaN(0.3), 25 * NM))
-                .top(TopBoundary.schottky(1, 0)).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).build();
         assertThrows(InvalidParameterException.class, () -> ChargeBalanceModel.fromStructure(graded));
 
         assertThrows(InvalidParameterException.class, () -> ChargeBalanceModel.builder().schottkyBarrierEv(1)

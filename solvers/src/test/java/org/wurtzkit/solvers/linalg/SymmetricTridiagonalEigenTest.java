@@ -46,6 +46,20 @@ class SymmetricTridiagonalEigenTest {
         assertEquals(2, SymmetricTridiagonalEigen.countBelow(m[0], m[1], 1e-300));
     }
 
+    @Example
+    void anAllZeroMatrixHasExactlyZeroEigenvalues() {
+        // the sample that failed a CI-like run: REPEATED_TINY_OFF, n = 2, sample seed -1082 gives an
+        // all-zero matrix, whose only eigenvalue is 0 (exact, no source needed); bisection against the
+        // fallback norm 1 used to return -1.1e-16, which the relative check against the dense
+        // reference (norm 0) cannot accept
+        double[][] m = TestMatrices.make(TestMatrices.Kind.REPEATED_TINY_OFF, 2, -1082L);
+        assertEquals(0.0, Math.abs(m[0][0]) + Math.abs(m[0][1]) + Math.abs(m[1][0]), "all-zero matrix");
+        EigenPairs p = new SymmetricTridiagonalEigen().lowest(m[0], m[1], 2);
+        assertEquals(0.0, p.value(0), 0.0);
+        assertEquals(0.0, p.value(1), 0.0);
+        lowestEigenpairsAgreeWithDenseReference(TestMatrices.Kind.REPEATED_TINY_OFF, 2, 1, -1082L);
+    }
+
     @Property(tries = 60)
     void sturmCountMatchesDenseCount(@ForAll TestMatrices.Kind kind,
                                      @ForAll @IntRange(min = 1, max = 300) int n,

@@ -31,7 +31,7 @@ class AlnBarrierTest {
         Structure s = Structure.builder(VM03)
                 .grow(Layer.of("buffer", Composition.GAN, 1800 * NM))
                 .grow(Layer.of("barrier", Composition.ALN, thicknessNm * NM).withRelaxation(relaxation))
-                .top(TopBoundary.schottky(barrierEv, 0))
+                .top(TopBoundary.schottky(barrierEv).atBiasV(0))
                 .build();
         return new SelfConsistentSolver().solve(s).sheetDensityPerCm2();
     }

@@ -24,7 +24,7 @@ class BandDiagramTest {
         return Structure.builder(SET)
                 .grow(Layer.of("channel", Composition.GAN, 500 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 20 * NM))
-                .top(TopBoundary.schottky(1.0, 0))
+                .top(TopBoundary.schottky(1.0).atBiasV(0))
                 .bandAlignment(alignment)
                 .build();
     }

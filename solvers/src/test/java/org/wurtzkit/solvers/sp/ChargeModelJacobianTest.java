@@ -32,9 +32,9 @@ class ChargeModelJacobianTest {
                         .withDopant(Dopant.acceptorsPerCm3(1e17, 0.17)))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 20 * NM)
                         .withDopant(Dopant.donorsPerCm3(5e18, 0.03))
-                        .withDeltaDoping(DeltaDoping.donorsPerCm2(2e12, 0.02, 5 * NM))
+                        .withDeltaDoping(DeltaDoping.donorsPerCm2(2e12, 0.02).atOffset(5 * NM))
                         .withDeltaDoping(new DeltaDoping(Dopant.Kind.ACCEPTOR, 1e16, 0.17, 12 * NM)))
-                .top(TopBoundary.freeSurface(1.6, 5e13))
+                .top(TopBoundary.freeSurfacePerCm2(1.6, 5e13))
                 .build();
     }
 

@@ -40,7 +40,7 @@ class HemtPhysicsTest {
         return SOLVER.solve(s).sheetDensityPerCm2();
     }
 
-    private static final TopBoundary GATE = TopBoundary.schottky(1.0, 0);
+    private static final TopBoundary GATE = TopBoundary.schottky(1.0).atBiasV(0);
 
     /** Sheet density rises with x and with barrier thickness, with a falling increment (common practice, no source). */
     @Property(tries = 12)
@@ -70,7 +70,7 @@ class HemtPhysicsTest {
     void surfaceDonorsGiveCriticalBarrierThickness() {
         double x = 0.34;
         double ed = 1.65;
-        TopBoundary surface = TopBoundary.freeSurface(ed, 1e14);
+        TopBoundary surface = TopBoundary.freeSurfacePerCm2(ed, 1e14);
         Structure probe = hemt(x, 10, 0, surface);
         double sigma = probe.interfaceCharges().get(0).sigma();
         double eps = probe.layerStates().get(0).top().material().permittivityStatic() * Constants.VACUUM_PERMITTIVITY;
@@ -161,7 +161,7 @@ class HemtPhysicsTest {
     void convergesAcrossTemperatureAndBias() {
         for (double t : new double[] {77, 150, 300, 450, 600}) {
             for (double v : new double[] {-10, -6, -4, -2, 0, 1, 2}) {
-                Structure s = hemt(0.25, 25, 2, TopBoundary.schottky(1.0, v)).withTemperature(t);
+                Structure s = hemt(0.25, 25, 2, TopBoundary.schottky(1.0).atBiasV(v)).withTemperatureK(t);
                 Solution sol = SOLVER.solve(s);
                 assertTrue(sol.convergence().converged());
                 assertTrue(sol.chargeNeutralityResidual() < 1e-6, t + " K, " + v + " V: residual "
@@ -169,7 +169,7 @@ class HemtPhysicsTest {
             }
         }
         // deep pinch-off empties the channel
-        assertTrue(ns(hemt(0.25, 25, 2, TopBoundary.schottky(1.0, -10))) < 1e10);
+        assertTrue(ns(hemt(0.25, 25, 2, TopBoundary.schottky(1.0).atBiasV(-10))) < 1e10);
     }
 
     /** A budget too small to converge gives the documented exception with its record, never NaN. */
@@ -203,9 +203,9 @@ class HemtPhysicsTest {
     /** The sweep predictor: extrapolating two solutions lands closer to the next one than either. */
     @Test
     void extrapolatedGuessIsCloserThanThePreviousSolution() {
-        Solution a = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, 0.0)));
-        Solution b = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, -0.5)));
-        Solution c = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, -1.0)));
+        Solution a = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0).atBiasV(0.0)));
+        Solution b = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0).atBiasV(-0.5)));
+        Solution c = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0).atBiasV(-1.0)));
         double[] guess = PotentialPredictor.extrapolate(a, b, 1.0);
         double[] pb = b.potential();
         double[] pc = c.potential();
@@ -238,7 +238,7 @@ class HemtPhysicsTest {
         double[] v = {0.0, -0.25, -0.5, -0.75};
         Solution[] s = new Solution[v.length];
         for (int i = 0; i < v.length; i++) {
-            s[i] = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0, v[i])));
+            s[i] = SOLVER.solve(hemt(0.25, 25, 0, TopBoundary.schottky(1.0).atBiasV(v[i])));
         }
         Solution[] three = {s[0], s[1], s[2]};
         double[] p3 = {v[0], v[1], v[2]};
@@ -295,7 +295,7 @@ class HemtPhysicsTest {
     @Test
     void quantumWindowOutsideTheStackIsRejected() {
         SelfConsistentSolver s = new SelfConsistentSolver(SolverOptions.defaults()
-                .withQuantumRegion(QuantumRegion.windows(QuantumRegion.Window.nm(0, 5000))));
+                .withQuantumWindows(QuantumWindows.explicit(QuantumWindows.Window.nm(0, 5000))));
         InvalidParameterException e = assertThrows(InvalidParameterException.class, () -> s.solve(hemt(0.25, 25, 0, GATE)));
         assertTrue(e.getMessage().contains("quantum window bottom depth (m) = 5.0E-6"), e.getMessage());
         assertTrue(e.getMessage().contains("inside the stack"), e.getMessage());
@@ -311,7 +311,7 @@ class HemtPhysicsTest {
         assertThrows(InvalidParameterException.class, () -> d.withMaxNewtonStep(-1));
         assertThrows(InvalidParameterException.class, () -> new MeshPolicy(0.1 * NM, 0.9, 50 * NM));
         assertThrows(InvalidParameterException.class, () -> BandAlignment.conductionBandFraction(1.5));
-        assertThrows(InvalidParameterException.class, () -> QuantumRegion.Window.nm(10, 5));
+        assertThrows(InvalidParameterException.class, () -> QuantumWindows.Window.nm(10, 5));
     }
 
     /** Solution invariants: E_c - E_v equals the local gap; subbands sorted and orthonormal. */

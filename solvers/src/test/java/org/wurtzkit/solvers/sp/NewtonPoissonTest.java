@@ -23,7 +23,7 @@ import org.wurtzkit.structure.TopBoundary;
  * iterate (the contract of the solver's public methods; no published source needed).
  */
 class NewtonPoissonTest {
-    private static final SolverOptions CLASSICAL = SolverOptions.defaults().withQuantumRegion(QuantumRegion.none());
+    private static final SolverOptions CLASSICAL = SolverOptions.defaults().withQuantumWindows(QuantumWindows.none());
 
     private static Structure hemt() {
         return Structure.builder(ParameterSets.defaultSet())
@@ -31,7 +31,7 @@ class NewtonPoissonTest {
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
                 .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(1.0, 0))
+                .top(TopBoundary.schottky(1.0).atBiasV(0))
                 .build();
     }
 

@@ -37,8 +37,8 @@ class PoissonAnalyticTest {
         double sheetPerCm2 = 5e11;
         Structure s = Structure.builder(SET)
                 .grow(Layer.of("GaN", Composition.GAN, 200 * NM)
-                        .withDeltaDoping(DeltaDoping.donorsPerCm2(sheetPerCm2, 0.0, 80 * NM)))
-                .top(TopBoundary.schottky(2.0, 0))
+                        .withDeltaDoping(DeltaDoping.donorsPerCm2(sheetPerCm2, 0.0).atOffset(80 * NM)))
+                .top(TopBoundary.schottky(2.0).atBiasV(0))
                 .bottom(BottomBoundary.fixedFermiLevel(2.0))
                 .build();
         Solution sol = new SelfConsistentSolver().solve(s);
@@ -72,7 +72,7 @@ class PoissonAnalyticTest {
         double len = 100 * NM;
         Structure s = Structure.builder(SET)
                 .grow(Layer.of("GaN", Composition.GAN, len).withDopant(Dopant.donorsPerCm3(nd, 0.0)))
-                .top(TopBoundary.schottky(1.2, 0))
+                .top(TopBoundary.schottky(1.2).atBiasV(0))
                 .bottom(BottomBoundary.fixedFermiLevel(1.2))
                 .build();
         Solution sol = new SelfConsistentSolver(SolverOptions.defaults().withMesh(new MeshPolicy(0.3 * NM, 1.2, 5 * NM)))
@@ -102,7 +102,7 @@ class PoissonAnalyticTest {
         double phiB = 1.0;
         Structure s = Structure.builder(SET)
                 .grow(Layer.of("n-GaN", Composition.GAN, 1000 * NM).withDopant(Dopant.donorsPerCm3(nd, 0.0)))
-                .top(TopBoundary.schottky(phiB, 0))
+                .top(TopBoundary.schottky(phiB).atBiasV(0))
                 .build();
         Solution sol = new SelfConsistentSolver().solve(s);
         double[] x = sol.depth();

@@ -32,7 +32,7 @@ class PolarizationModelVsMeasuredTest {
     private static final double[][] MEASURED = ReferenceTable.rows("/reference/algan-gan-sheet-density-measured.csv");
 
     private static double ns(PolarizationModel model, double x, double barrierNm) {
-        Structure s = StandardStacks.hemt(VM03, 500, x, barrierNm, 0, TopBoundary.schottky(0.84 + 1.3 * x, 0))
+        Structure s = StandardStacks.hemt(VM03, 500, x, barrierNm, 0, TopBoundary.schottky(0.84 + 1.3 * x).atBiasV(0))
                 .toBuilder().polarizationModel(model).build();
         return new SelfConsistentSolver().solve(s).sheetDensityPerCm2();
     }

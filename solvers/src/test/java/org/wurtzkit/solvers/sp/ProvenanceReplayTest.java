@@ -130,9 +130,9 @@ class ProvenanceReplayTest {
         int expected = components.length + 2; // the mesh policy is written as its three numbers
         assertEquals(expected, SolverOptions.defaults().settings().size());
         for (SolverOptions o : new SolverOptions[] {SolverOptions.defaults(), OPTIONS,
-            OPTIONS.withQuantumRegion(QuantumRegion.none()).withHoleFermiLevel(HoleFermiLevel.BOTTOM_CONTACT),
-            OPTIONS.withQuantumRegion(QuantumRegion.windows(QuantumRegion.Window.nm(1.5, 40),
-                    QuantumRegion.Window.nm(60, 90.25)))}) {
+            OPTIONS.withQuantumWindows(QuantumWindows.none()).withHoleFermiLevel(HoleFermiLevel.BOTTOM_CONTACT),
+            OPTIONS.withQuantumWindows(QuantumWindows.explicit(QuantumWindows.Window.nm(1.5, 40),
+                    QuantumWindows.Window.nm(60, 90.25)))}) {
             assertEquals(o, SolverOptions.fromSettings(o.settings()));
         }
     }
@@ -149,7 +149,7 @@ class ProvenanceReplayTest {
         assertTrue(assertThrows(InvalidParameterException.class, () -> SolverOptions.fromSettings(t)).getMessage()
                 .contains("tolerence"));
         Map<String, String> u = new LinkedHashMap<>(SolverOptions.defaults().settings());
-        u.put("quantumRegion", "everywhere");
+        u.put("quantumWindows", "everywhere");
         assertTrue(assertThrows(InvalidParameterException.class, () -> SolverOptions.fromSettings(u)).getMessage()
                 .contains("everywhere"));
     }

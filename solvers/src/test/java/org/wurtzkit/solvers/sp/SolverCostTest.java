@@ -32,7 +32,7 @@ class SolverCostTest {
                 .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
                 .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(1.0, biasV))
+                .top(TopBoundary.schottky(1.0).atBiasV(biasV))
                 .build();
     }
 
@@ -51,7 +51,7 @@ class SolverCostTest {
      */
     @Test
     void classicalSolveOfTheReferenceHemt() {
-        ConvergenceRecord r = new SelfConsistentSolver(SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()))
+        ConvergenceRecord r = new SelfConsistentSolver(SolverOptions.defaults().withQuantumWindows(QuantumWindows.none()))
                 .solve(referenceHemt(0)).convergence();
         assertTrue(r.converged(), r.message());
         assertEquals(0, r.iterations(), "a classical solve has no outer iteration");

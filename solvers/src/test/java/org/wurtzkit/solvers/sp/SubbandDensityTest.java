@@ -24,7 +24,7 @@ class SubbandDensityTest {
         return new Device(Structure.builder(ParameterSets.defaultSet())
                 .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.3), 20 * NM))
-                .top(TopBoundary.schottky(1.0, 0)).build(), OPTIONS);
+                .top(TopBoundary.schottky(1.0).atBiasV(0)).build(), OPTIONS);
     }
 
     /** A potential with a triangular well at the interface, so that several subbands are bound. */

@@ -25,7 +25,7 @@ import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -145,7 +145,7 @@ class GateLeakageTest {
                 / (m * Constants.ELECTRON_MASS * gan.permittivityStatic() * Constants.VACUUM_PERMITTIVITY));
         assertEquals(0.0407, e00, 0.0005, "E00 (eV)");
         SelfConsistentSolver classical = new SelfConsistentSolver(
-                SolverOptions.defaults().withQuantumRegion(QuantumRegion.none()));
+                SolverOptions.defaults().withQuantumWindows(QuantumWindows.none()));
         Structure d = Structure.builder(SET)
                 .grow(Layer.of("n+ GaN", Composition.GAN, 300 * NM).withDopant(Dopant.donorsPerCm3(nd, 0.0)))
                 .top(TopBoundary.schottky(phi, 0)).temperature(t).build();

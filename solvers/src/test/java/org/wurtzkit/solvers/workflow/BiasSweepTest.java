@@ -55,7 +55,7 @@ class BiasSweepTest {
         int newtonCold = 0;
         int newtonContinued = 0;
         for (int i = 0; i < v.length; i++) {
-            Solution cold = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0, v[i])));
+            Solution cold = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0).atBiasV(v[i])));
             double n = cold.sheetDensityPerCm2();
             assertEquals(n, ns[i], 1e-4 * n + 1, "n_s at " + v[i] + " V");
             assertEquals(cold.gateCharge(), q[i], 1e-5 * Math.abs(cold.gateCharge()), "Q_gate at " + v[i] + " V");
@@ -82,7 +82,7 @@ class BiasSweepTest {
         double[] v = grid.values();
         Solution[] linear = new Solution[v.length];
         for (int i = 0; i < v.length; i++) {
-            Structure s = Hemts.standard().withTop(TopBoundary.schottky(1.0, v[i]));
+            Structure s = Hemts.standard().withTop(TopBoundary.schottky(1.0).atBiasV(v[i]));
             linear[i] = i == 0 ? Hemts.SOLVER.solve(s)
                     : i == 1 ? Hemts.SOLVER.solve(s, linear[0])
                     : Hemts.SOLVER.solve(s, linear[i - 1].depth(),
@@ -105,7 +105,7 @@ class BiasSweepTest {
         assertTrue(newton < newtonLinear, newton + " vs " + newtonLinear + " Newton steps");
         assertTrue(outer <= 1.5 * points, outer + " outer iterations for " + points + " points");
         for (int i : new int[] {0, 10, 20}) {
-            Solution cold = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0, v[i])));
+            Solution cold = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0).atBiasV(v[i])));
             double n = cold.sheetDensityPerCm2();
             assertEquals(n, fine.sheetDensityPerCm2()[i], 1e-4 * n, "n_s at " + v[i] + " V");
         }
@@ -150,9 +150,9 @@ class BiasSweepTest {
                 * Constants.VACUUM_PERMITTIVITY;
         for (int k : new int[] {2, 5, 8}) {
             double h = 0.01;
-            double qp = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0, mid[k] + h / 2)))
+            double qp = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0).atBiasV(mid[k] + h / 2)))
                     .gateCharge();
-            double qm = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0, mid[k] - h / 2)))
+            double qm = Hemts.SOLVER.solve(Hemts.standard().withTop(TopBoundary.schottky(1.0).atBiasV(mid[k] - h / 2)))
                     .gateCharge();
             double fine = (qp - qm) / h;
             double curvature = Math.abs(c[k + 1] - 2 * c[k] + c[k - 1]); // = C'' (0.5 V)^2
@@ -256,7 +256,7 @@ class BiasSweepTest {
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
                 () -> SWEEP.run(Hemts.standard(), 0, 30));
         assertTrue(e.getMessage().contains("gate bias (V) = 30.0"), e.getMessage());
-        Structure free = StandardStacks.hemt(Hemts.DEFAULT_SET, 500, 0.25, 25, 0, TopBoundary.freeSurface(1.65, 1e14));
+        Structure free = StandardStacks.hemt(Hemts.DEFAULT_SET, 500, 0.25, 25, 0, TopBoundary.freeSurfacePerCm2(1.65, 1e14));
         e = assertThrows(InvalidParameterException.class, () -> SWEEP.run(free, 0, -1));
         assertTrue(e.getMessage().contains("top boundary"), e.getMessage());
         assertThrows(InvalidParameterException.class, () -> ThresholdDefinition.constantDensity(0));

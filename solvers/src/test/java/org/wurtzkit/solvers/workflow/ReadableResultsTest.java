@@ -77,8 +77,8 @@ class ReadableResultsTest {
     void optionRecords() {
         assertEquals("mesh 0.2 nm at interfaces, growing by 1.15 to at most 100 nm", Hemts.COARSE.mesh().toString());
         assertEquals("automatic quantum windows, 40 nm on both sides of every interface",
-                org.wurtzkit.solvers.sp.QuantumRegion.automatic().toString());
-        assertEquals("window 0 to 40 nm", org.wurtzkit.solvers.sp.QuantumRegion.Window.nm(0, 40).toString());
+                org.wurtzkit.solvers.sp.QuantumWindows.automatic().toString());
+        assertEquals("window 0 to 40 nm", org.wurtzkit.solvers.sp.QuantumWindows.Window.nm(0, 40).toString());
         assertEquals("gate_bias (V)", Column.of("gate_bias", "V").toString());
         assertEquals("Quantity[sheet_density (cm^-2)]", Quantity.SHEET_DENSITY.toString());
     }

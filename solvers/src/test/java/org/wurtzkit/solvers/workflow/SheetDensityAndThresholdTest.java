@@ -63,7 +63,7 @@ class SheetDensityAndThresholdTest {
         Structure free = Structure.builder(Hemts.DEFAULT_SET)
                 .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
-                .top(TopBoundary.freeSurface(1.65, 1.6e13))
+                .top(TopBoundary.freeSurfacePerCm2(1.65, 1.6e13))
                 .build();
         SheetDensityAndThreshold eval = SheetDensityAndThreshold.of(LEVEL);
         InvalidParameterException e = assertThrows(InvalidParameterException.class,

@@ -131,13 +131,13 @@ class TargetSearchTest {
                 .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 10 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.2), 10 * NM))
-                .top(TopBoundary.schottky(1, 0)).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).build();
         e = assertThrows(InvalidParameterException.class, () -> StructureFamilies.alFraction(twoBarriers, "barrier"));
         assertTrue(e.getMessage().contains("number of layers named \"barrier\" = 2"), e.getMessage());
         Structure graded = Structure.builder(Hemts.DEFAULT_SET)
                 .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
                 .grow(Layer.graded("barrier", Composition.alGaN(0.1), Composition.alGaN(0.3), 20 * NM))
-                .top(TopBoundary.schottky(1, 0)).build();
+                .top(TopBoundary.schottky(1).atBiasV(0)).build();
         assertThrows(InvalidParameterException.class, () -> StructureFamilies.alFraction(graded, "barrier"));
     }
 }

@@ -30,7 +30,7 @@ class TemperatureSweepTest {
     void continuationEqualsColdSolves() {
         double[] ns = sweep.sheetDensityPerCm2();
         for (int i = 0; i < T.length; i++) {
-            Solution cold = Hemts.SOLVER.solve(Hemts.standard().withTemperature(T[i]));
+            Solution cold = Hemts.SOLVER.solve(Hemts.standard().withTemperatureK(T[i]));
             assertEquals(cold.sheetDensityPerCm2(), ns[i], 1e-4 * cold.sheetDensityPerCm2(), "T = " + T[i]);
             assertEquals(cold.gateCharge(), sweep.gateCharge()[i], 1e-5 * Math.abs(cold.gateCharge()));
             System.out.printf("T = %.0f K: n_s = %.5e cm^-2, E_0 - E_F = %.4f eV, bottom gap = %.4f eV%n", T[i], ns[i],

@@ -104,7 +104,7 @@ class ToleranceStudyTest {
                 .grow(Layer.of("buffer", org.wurtzkit.material.Composition.GAN, 500 * Units.NM))
                 .grow(Layer.of("barrier", org.wurtzkit.material.Composition.alGaN(0.25), 25 * Units.NM)
                         .withDopant(Dopant.donorsPerCm3(1e17, 0.02)))
-                .top(TopBoundary.schottky(1.0, -0.5))
+                .top(TopBoundary.schottky(1.0).atBiasV(-0.5))
                 .build();
         ToleranceStudy s = ToleranceStudy.builder(doped)
                 .tolerance(Tolerance.conductionBandOffsetFraction(Distribution.uniform(0.6, 0.8)))

@@ -10,7 +10,7 @@ import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
-import org.wurtzkit.solvers.sp.QuantumRegion;
+import org.wurtzkit.solvers.sp.QuantumWindows;
 
 /** Bad input fails with a message that names the parameter, the value and the allowed range. */
 class MobilityBadInputTest {
@@ -57,7 +57,7 @@ class MobilityBadInputTest {
 
     @Test
     void solutionWithoutSubbands() {
-        Solution classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumRegion(new QuantumRegion.None()))
+        Solution classical = new SelfConsistentSolver(SolverOptions.defaults().withQuantumWindows(new QuantumWindows.None()))
                 .solve(MobilityOfSolutionTest.hemt(false, 300));
         fails("occupied subbands of the solution", "0", () -> Mobility.of(classical, MobilityOptions.defaults()));
     }

@@ -11,7 +11,8 @@ import org.wurtzkit.units.Units;
  * over the subbands of the effective-mass Schroedinger equation (wavefunction zero at the window's
  * two ends); outside it, and for holes everywhere, densities are classical (Fermi-Dirac, 3D).
  */
-public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRegion.None, QuantumRegion.Windows {
+public sealed interface QuantumWindows permits QuantumWindows.Automatic, QuantumWindows.BelowDeepestInterface,
+        QuantumWindows.None, QuantumWindows.Explicit {
 
     /**
      * The default: a window reaching a given distance above and below every interface of the stack
@@ -21,7 +22,7 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
      *
      * @param extension how far each window reaches on both sides of its interface (m), in [1 nm, 1 um]
      */
-    record Automatic(double extension) implements QuantumRegion {
+    record Automatic(double extension) implements QuantumWindows {
         /**
          * Creates the record and checks every component.
          *
@@ -41,12 +42,34 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
         }
     }
 
-    /** Fully classical electrons (no Schroedinger equation). */
-    record None() implements QuantumRegion {
-        /** @return {@code "no quantum region (classical electrons)"} */
+    /**
+     * One window from the surface to a given distance below the deepest interface of the stack,
+     * clipped to the stack (for a stack without interfaces: from the surface down to that distance).
+     * Unlike {@link Automatic} it follows the stack: a thicker barrier moves the window's bottom with
+     * the channel, and the window never splits in two however far apart the interfaces are.
+     *
+     * @param depthBelow how far the window reaches below the deepest interface (m), in [1 nm, 10 um]
+     */
+    record BelowDeepestInterface(double depthBelow) implements QuantumWindows {
+        /** Validates. */
+        public BelowDeepestInterface {
+            Require.inRange("quantum window depth below the deepest interface (m)", depthBelow, 1e-9, 1e-5);
+        }
+
+        /** @return e.g. {@code "one quantum window from the surface to 40 nm below the deepest interface"} */
         @Override
         public String toString() {
-            return "no quantum region (classical electrons)";
+            return "one quantum window from the surface to " + Decimals.format(depthBelow * 1e9, "nm")
+                    + " below the deepest interface";
+        }
+    }
+
+    /** Fully classical electrons (no Schroedinger equation). */
+    record None() implements QuantumWindows {
+        /** @return {@code "no quantum windows (classical electrons)"} */
+        @Override
+        public String toString() {
+            return "no quantum windows (classical electrons)";
         }
     }
 
@@ -55,7 +78,7 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
      *
      * @param windows the windows, shallowest first
      */
-    record Windows(List<Window> windows) implements QuantumRegion {
+    record Explicit(List<Window> windows) implements QuantumWindows {
         /**
          * Creates the record and checks order and overlap.
          *
@@ -63,10 +86,10 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
          * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
          *         finite or outside its documented range
          */
-        public Windows {
+        public Explicit {
             windows = List.copyOf(windows);
             if (windows.isEmpty()) {
-                throw new InvalidParameterException("number of quantum windows", "0", "[1, ...) (use QuantumRegion.none())");
+                throw new InvalidParameterException("number of quantum windows", "0", "[1, ...) (use QuantumWindows.none())");
             }
             for (int i = 1; i < windows.size(); i++) {
                 if (windows.get(i).depthTop() < windows.get(i - 1).depthBottom()) {
@@ -118,21 +141,29 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
         }
     }
 
-    /** {@return the default automatic region: 40 nm on both sides of every interface} */
-    static QuantumRegion automatic() {
+    /** {@return the default automatic windows: 40 nm on both sides of every interface} */
+    static QuantumWindows automatic() {
         return new Automatic(40 * Units.NM);
     }
 
-    /** {@return no quantum region} */
-    static QuantumRegion none() {
+    /**
+     * @param nm how far the window reaches below the deepest interface (nm), in [1, 10000]
+     * @return one window from the surface to that depth below the deepest interface
+     */
+    static QuantumWindows belowDeepestInterfaceNm(double nm) {
+        return new BelowDeepestInterface(nm * Units.NM);
+    }
+
+    /** {@return no quantum windows} */
+    static QuantumWindows none() {
         return new None();
     }
 
     /**
      * @param windows explicit windows
-     * @return the region
+     * @return the windows
      */
-    static QuantumRegion windows(Window... windows) {
-        return new Windows(List.of(windows));
+    static QuantumWindows explicit(Window... windows) {
+        return new Explicit(List.of(windows));
     }
 }

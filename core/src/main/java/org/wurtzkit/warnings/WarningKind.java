@@ -1,0 +1,35 @@
+package org.wurtzkit.warnings;
+
+/** What a {@link Warning} is about; each constant names the condition that raises it. */
+public enum WarningKind {
+    /** A layer is thicker than the critical thickness of the structure's critical-thickness model. */
+    BEYOND_CRITICAL_THICKNESS,
+    /** A layer is thicker than 10 um (likely a unit slip: a thickness in nm given as m, or similar). */
+    LAYER_THICKER_THAN_10_UM,
+    /**
+     * The temperature is below 20 K or above 1000 K, outside the range over which the band-gap
+     * temperature laws and the Fermi-Dirac tables of the library were checked.
+     */
+    TEMPERATURE_OUT_OF_RANGE,
+    /**
+     * The gate bias is at or above the Schottky barrier height: the gate conducts forward and the
+     * equilibrium picture (no current) no longer describes the device.
+     */
+    GATE_BIAS_AT_OR_ABOVE_BARRIER,
+    /**
+     * Holes gather at a free surface because the surface donors given cannot supply the positive
+     * charge the polarization field asks for.
+     */
+    SURFACE_HOLE_GAS,
+    /**
+     * A subband that holds electrons lies above the conduction-band edge at an edge of its window:
+     * it is bound only by the window's wall, so its energy and density depend on where the window ends.
+     */
+    WINDOW_BOUND_SUBBAND,
+    /** An edge of a quantum window cuts through free electrons, which the window then misses or clips. */
+    WINDOW_EDGE_IN_ELECTRONS,
+    /** A quantum window had more subbands below the cut-off than the solver's limit; its density is too low. */
+    SUBBAND_LIMIT_REACHED,
+    /** A threshold voltage was extrapolated to a bias outside the swept range. */
+    THRESHOLD_OUTSIDE_SWEPT_RANGE
+}
