@@ -18,7 +18,7 @@ import org.wurtzkit.material.WurtziteMaterial;
  *
  * @param name       a name for reports (need not be unique)
  * @param material   what the layer is made of
- * @param thickness  thickness (m), &gt; 0 and at most 1 mm
+ * @param thickness  thickness (m), at least {@link #MIN_THICKNESS} (1 pm) and at most 1 mm
  * @param dopants    shallow dopants (uniform)
  * @param deepLevels deep levels (uniform)
  * @param deltaSheets delta-doping sheets inside the layer
@@ -29,6 +29,12 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
 
     /** Largest accepted layer thickness (m). */
     public static final double MAX_THICKNESS = 1e-3;
+    /**
+     * Smallest accepted layer thickness (m): 1 pm, far below one monolayer (c/2 = 0.26 nm in GaN);
+     * a thinner value is a unit slip, and below it the depths of the interfaces can no longer be
+     * told apart in a millimetre-thick stack.
+     */
+    public static final double MIN_THICKNESS = 1e-12;
 
     /** Validates and copies the lists. */
     public Layer {
@@ -38,9 +44,13 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
             throw new InvalidParameterException("thickness of layer \"" + name + "\" (m)", Double.toString(thickness),
                     "(0, " + MAX_THICKNESS + "]");
         }
-        dopants = List.copyOf(dopants);
-        deepLevels = List.copyOf(deepLevels);
-        deltaSheets = List.copyOf(deltaSheets);
+        if (thickness < MIN_THICKNESS) {
+            throw new InvalidParameterException("thickness of layer \"" + name + "\" (m)", Double.toString(thickness),
+                    "[" + MIN_THICKNESS + ", " + MAX_THICKNESS + "] (below 1 pm: a unit slip?)");
+        }
+        dopants = Require.nonNullElements("dopants of layer \"" + name + "\"", dopants);
+        deepLevels = Require.nonNullElements("deep levels of layer \"" + name + "\"", deepLevels);
+        deltaSheets = Require.nonNullElements("delta sheets of layer \"" + name + "\"", deltaSheets);
         for (DeltaDoping d : deltaSheets) {
             if (d.offsetFromLayerTop() > thickness) {
                 throw new InvalidParameterException("delta sheet offset in layer \"" + name + "\" (m)",
