@@ -14,13 +14,17 @@
  * <li><b>Classical start.</b> A damped Newton solve of the box-integrated Poisson equation with
  * Fermi-Dirac electrons everywhere (package-private {@code ChargeModel} for the charge and its
  * derivative; each Newton step one O(N) tridiagonal solve). As planned, this Newton-Poisson loop
- * lives in its own package-private class, {@code NewtonPoisson}.</li>
+ * lives in its own package-private class, {@code NewtonPoisson}. Its budget grows with the potential
+ * it must carry from the flat start to a gate (issue #14: -30 V), and a step limited to the maximum
+ * is first tried clamped node by node.</li>
  * <li><b>Outer loop</b> (A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81,
  * 7880 (1997)): {@code QuantumStates} solves the BenDaniel-Duke equation in every quantum window
  * ({@link org.wurtzkit.solvers.sp.QuantumRegion}) for the lowest subbands, O(N k); then Newton-Poisson
  * runs with the predictor density g<sub>k</sub> ln(1 + e<sup>eta</sup>) |psi<sub>k</sub>|<sup>2</sup>,
  * whose one home is planned to be {@code SubbandDensity}; repeat until max |delta phi| is below the
- * tolerance.</li>
+ * tolerance. Once the change stalls, {@code AndersonMixing} (package-private, D. G. Anderson,
+ * J. ACM 12, 547 (1965)) gives the next input; a converged solve returns the unmixed Newton-Poisson
+ * solution, so the change it reports is that of the potential it returns.</li>
  * <li><b>Result or failure.</b> A converged solve returns a {@code Solution} (copies, no NaN); one
  * that runs out of budget throws {@link org.wurtzkit.solvers.sp.NotConvergedException} carrying its
  * record and last finite iterate.</li>
