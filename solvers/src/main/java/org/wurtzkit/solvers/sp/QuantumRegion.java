@@ -39,7 +39,7 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
     record Windows(List<Window> windows) implements QuantumRegion {
         /** Validates order and overlap. */
         public Windows {
-            windows = List.copyOf(windows);
+            windows = Require.nonNullElements("quantum windows", windows);
             if (windows.isEmpty()) {
                 throw new InvalidParameterException("number of quantum windows", "0", "[1, ...) (use QuantumRegion.none())");
             }

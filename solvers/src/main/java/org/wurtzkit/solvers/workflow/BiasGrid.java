@@ -58,8 +58,12 @@ public final class BiasGrid {
                     "any finite value other than the first bias " + fromV + " (empty bias range)");
         }
         double[] v = new double[points];
+        double span = toV - fromV;
         for (int i = 0; i < points; i++) {
-            v[i] = fromV + (toV - fromV) * i / (points - 1);
+            // the span of two finite biases of opposite signs may overflow; then weigh the two ends
+            // (each product is at most its end, and they have opposite signs)
+            double t = (double) i / (points - 1);
+            v[i] = Double.isFinite(span) ? fromV + span * i / (points - 1) : fromV * (1 - t) + toV * t;
         }
         v[points - 1] = toV;
         return new BiasGrid(v);
