@@ -30,6 +30,8 @@ import org.wurtzkit.solvers.workflow.Column;
 import org.wurtzkit.solvers.workflow.DesignMap;
 import org.wurtzkit.solvers.workflow.ParameterSetSpread;
 import org.wurtzkit.solvers.workflow.PointEvaluator;
+import org.wurtzkit.solvers.workflow.StructureFamilies;
+import org.wurtzkit.solvers.workflow.TargetSearch;
 import org.wurtzkit.solvers.workflow.TemperatureSweep;
 import org.wurtzkit.solvers.workflow.ThresholdDefinition;
 import org.wurtzkit.solvers.workflow.ThresholdExtraction;
@@ -39,13 +41,13 @@ import org.wurtzkit.structure.TopBoundary;
 
 /**
  * Interruption of the long workflows (issue #14): a design map (one thread and several), a
- * parameter-set spread and the sweeps stop with a {@link CancellationException} within one point
- * per thread once their thread is interrupted or their future cancelled, and an evaluator that
- * restores its worker's interrupt flag (the correct reaction to an {@link InterruptedException},
- * B. Goetz et al., Java Concurrency in Practice, Addison-Wesley 2006, sec. 7.1.3) cancels the map
- * instead of leaving a point empty. The evaluators here count points and wait on a clock instead
- * of solving, so that the counts, not timings, carry the checks; the preemptive joins only guard
- * against a hang.
+ * parameter-set spread, the sweeps and a target search stop with a {@link CancellationException}
+ * within one point per thread once their thread is interrupted or their future cancelled, and an
+ * evaluator that restores its worker's interrupt flag (the correct reaction to an
+ * {@link InterruptedException}, B. Goetz et al., Java Concurrency in Practice, Addison-Wesley 2006,
+ * ch. 7; from memory) cancels the map instead of leaving a point empty. The evaluators here count
+ * points and wait on a clock instead of solving, so that the counts, not timings, carry the checks;
+ * the preemptive joins only guard against a hang.
  */
 @Tag("reliability")
 class WorkflowInterruptionTest {
@@ -200,6 +202,16 @@ class WorkflowInterruptionTest {
                 () -> new TemperatureSweep().run(hemt(), 300, 350, 400));
         assertTrue(Thread.interrupted());
         assertEquals("temperature sweep interrupted after 0 of 3 points", f.getMessage());
+    }
+
+    /** A target search whose thread is interrupted makes no evaluation and says so. */
+    @Test
+    void interruptedTargetSearchEvaluatesNothing() {
+        Thread.currentThread().interrupt();
+        CancellationException e = assertThrows(CancellationException.class, () -> new TargetSearch().sheetDensity(
+                StructureFamilies.layerThicknessNm(hemt(), "barrier"), 10, 40, 1e13, 1e-3));
+        assertTrue(Thread.interrupted());
+        assertEquals("target search interrupted after 0 evaluations", e.getMessage());
     }
 
     /**
