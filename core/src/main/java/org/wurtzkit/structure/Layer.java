@@ -19,7 +19,7 @@ import org.wurtzkit.material.WurtziteMaterial;
  * @param name       a name for reports (need not be unique)
  * @param material   what the layer is made of
  * @param thickness  thickness (m), at least {@link #MIN_THICKNESS} (1 pm) and at most 1 mm
- * @param dopants    shallow dopants (uniform)
+ * @param dopants    shallow dopants (uniform); the lists are non-null and hold no null element
  * @param deepLevels deep levels (uniform)
  * @param deltaSheets delta-doping sheets inside the layer
  * @param relaxation relaxation r in [0, 1] with respect to the layer below (0 = pseudomorphic)

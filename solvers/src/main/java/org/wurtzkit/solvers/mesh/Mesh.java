@@ -50,6 +50,9 @@ public final class Mesh {
      *                    total thickness (m)
      * @param policy      the spacing policy
      * @return the mesh
+     * @throws InvalidParameterException if the breakpoints are not strictly increasing from 0, or the
+     *                                   mesh would have more than {@link #MAX_NODES} nodes (counted
+     *                                   before any is allocated)
      */
     public static Mesh generate(double[] breakpoints, MeshPolicy policy) {
         Require.nonNull("mesh policy", policy);
