@@ -141,6 +141,9 @@ public final class RatioReport {
         // interleaved forks per side (1, 2, 2, 1), as the map ratio is the one a shared host disturbs
         jobs.add(new Job("DesignMapBenchmark\\.workflowMap$", "threads", new String[] {"1", "2"}, Mode.AverageTime, 2,
                 3, S2, 3, S1, false, true));
+        // a 200-sample study against a 200-point map, both on 2 threads (the full run: 10 000 each)
+        jobs.add(new Job("ToleranceStudyBenchmark\\.", "samples", new String[] {"200"}, Mode.AverageTime, 1, 3, S2, 4,
+                S1, false));
         return jobs;
     }
 
@@ -172,6 +175,9 @@ public final class RatioReport {
         jobs.add(new Job("SweepBenchmark\\.", null, null, Mode.AverageTime, 5, 4, S2, 6, S2, false));
         jobs.add(new Job("DesignMapBenchmark\\.", "threads", new String[] {"1", "2"}, Mode.AverageTime, 5, 4, S2, 6, S2,
                 false, true));
+        // 10 000 solves per operation (about 40 s on two threads): single shots
+        jobs.add(new Job("ToleranceStudyBenchmark\\.", "samples", new String[] {"10000"}, Mode.SingleShotTime, 2, 1, null,
+                2, null, false));
         return jobs;
     }
 
@@ -455,6 +461,10 @@ public final class RatioReport {
                 f.get("DesignMapBenchmark.workflowMap@threads=2"));
         mapRows(b, "plain pool", f.get("DesignMapBenchmark.executorMap@threads=1"),
                 f.get("DesignMapBenchmark.executorMap@threads=2"));
+        for (String n : new String[] {"200", "10000"}) {
+            studyRow(b, n, f.get("ToleranceStudyBenchmark.toleranceStudy@samples=" + n),
+                    f.get("ToleranceStudyBenchmark.designMap@samples=" + n));
+        }
         return b.toString();
     }
 
@@ -484,6 +494,22 @@ public final class RatioReport {
                 + "achieved (JVM CPU / wall, 2 threads); foreign load | %s×; %s processors | foreign: %s (1 thread), "
                 + "%s (2 threads) processors | — | — |%n", what, num(cpuPerMap),
                 num(two.process().median() / two.wall().median()), num(one.foreign()), num(two.foreign())));
+    }
+
+    /**
+     * The tolerance study against the design map of the same size (issue #19: within 1.2x). Both use
+     * two pool threads, so the verdict uses the whole JVM's CPU time per operation (which other
+     * processes do not inflate); the wall-clock ratio is shown beside it.
+     */
+    private static void studyRow(StringBuilder b, String n, Figure study, Figure map) {
+        if (study == null || map == null) {
+            return;
+        }
+        Span w = study.wall().over(map.wall());
+        Span u = study.process().over(map.process());
+        b.append(String.format(Locale.ROOT, "| %s-sample tolerance study / %s-point design map, n_s, 2 threads "
+                + "| %s× (%s× – %s×) | %s× (%s× – %s×) (JVM) | ≤ 1.2× | %s |%n", n, n, num(w.median()), num(w.min()),
+                num(w.max()), num(u.median()), num(u.min()), num(u.max()), verdict(u.median() <= 1.2, "JVM CPU")));
     }
 
     private static String verdict(boolean ok, String basis) {

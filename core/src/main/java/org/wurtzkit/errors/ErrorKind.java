@@ -11,5 +11,13 @@ public enum ErrorKind {
     /** A parameter-set data file is malformed: missing, duplicated or non-numeric values. */
     MALFORMED_DATA,
     /** An iterative solve did not reach its tolerance within its budget. */
-    NOT_CONVERGED
+    NOT_CONVERGED,
+    /** An eigen-solver could not resolve an eigenpair to its residual tolerance. */
+    EIGEN_SOLVER_FAILED,
+    /** A linear system met a zero or near-zero pivot (the matrix is numerically singular). */
+    SINGULAR_MATRIX,
+    /** A computed result holds NaN or infinite values (a defect to report, with the input). */
+    NON_FINITE_RESULT,
+    /** A caller-supplied callback broke its contract (returned null or the wrong number of values). */
+    INVALID_CALLBACK_RESULT
 }

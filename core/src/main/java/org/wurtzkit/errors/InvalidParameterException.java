@@ -8,7 +8,7 @@ package org.wurtzkit.errors;
  * <p>It extends {@link IllegalArgumentException} so that ordinary Java code that already catches
  * that type keeps working.
  */
-public class InvalidParameterException extends IllegalArgumentException {
+public class InvalidParameterException extends IllegalArgumentException implements WurtzkitError {
     private static final long serialVersionUID = 1L;
     private final String parameter;
     private final String value;
@@ -42,6 +42,7 @@ public class InvalidParameterException extends IllegalArgumentException {
     }
 
     /** {@return {@link ErrorKind#INVALID_PARAMETER}} */
+    @Override
     public ErrorKind kind() {
         return ErrorKind.INVALID_PARAMETER;
     }

@@ -105,10 +105,94 @@ public final class Require {
         nonNull(name, value);
         for (int i = 0; i < value.size(); i++) {
             if (value.get(i) == null) {
-                throw new InvalidParameterException(name + "[" + i + "]", "null", "(non-null)");
+                throw invalid(name + "[" + i + "]", "null", "(non-null)");
             }
         }
         return List.copyOf(value);
+    }
+
+    /**
+     * The exception for a value outside its allowed range, for checks that have no helper here;
+     * throw what it returns.
+     *
+     * @param name  parameter name
+     * @param value the offending value (its {@code String.valueOf} is shown)
+     * @param range the allowed range, as text
+     * @return the exception, naming parameter, value and range
+     */
+    public static InvalidParameterException invalid(String name, Object value, String range) {
+        return new InvalidParameterException(name, String.valueOf(value), range);
+    }
+
+    /**
+     * @param name  parameter name
+     * @param value value to check (infinities allowed)
+     * @return value, if not NaN
+     */
+    public static double notNaN(String name, double value) {
+        if (Double.isNaN(value)) {
+            throw invalid(name, value, "[-Infinity, +Infinity] (not NaN)");
+        }
+        return value;
+    }
+
+    /**
+     * @param name  array name
+     * @param array array to check
+     * @return its length, if the array is non-null and has at least one element
+     */
+    public static int nonEmpty(String name, double[] array) {
+        if (array == null) {
+            throw invalid(name, "null", "(a non-null array)");
+        }
+        if (array.length < 1) {
+            throw invalid(name + ".length", 0, "[1, " + Integer.MAX_VALUE + "]");
+        }
+        return array.length;
+    }
+
+    /**
+     * @param name     array name
+     * @param array    array to check
+     * @param expected required length
+     */
+    public static void length(String name, double[] array, int expected) {
+        if (array == null) {
+            throw invalid(name, "null", "(a non-null array)");
+        }
+        if (array.length != expected) {
+            throw invalid(name + ".length", array.length, "[" + expected + ", " + expected + "]");
+        }
+    }
+
+    /**
+     * @param name  array name
+     * @param array array to check
+     * @param min   smallest allowed length
+     */
+    public static void minLength(String name, double[] array, int min) {
+        if (array == null) {
+            throw invalid(name, "null", "(a non-null array)");
+        }
+        if (array.length < min) {
+            throw invalid(name + ".length", array.length, "[" + min + ", " + Integer.MAX_VALUE + "]");
+        }
+    }
+
+    /**
+     * Requires every element of {@code array[0..n-1]} to be finite.
+     *
+     * @param name  array name
+     * @param array array to check (at least n long)
+     * @param n     number of leading elements to check
+     */
+    public static void allFinite(String name, double[] array, int n) {
+        for (int i = 0; i < n; i++) {
+            double v = array[i];
+            if (!Double.isFinite(v)) {
+                throw invalid(name + "[" + i + "]", v, "(-Infinity, +Infinity) (finite values only)");
+            }
+        }
     }
 
     private static String fmt(double v) {

@@ -5,7 +5,7 @@ package org.wurtzkit.errors;
  * Each carries an {@link ErrorKind} so that callers (and tests) can branch on the kind of failure
  * without parsing messages.
  */
-public class WurtzkitException extends RuntimeException {
+public class WurtzkitException extends RuntimeException implements WurtzkitError {
     private static final long serialVersionUID = 1L;
     private final ErrorKind kind;
 
@@ -29,6 +29,7 @@ public class WurtzkitException extends RuntimeException {
     }
 
     /** {@return the kind of failure} */
+    @Override
     public ErrorKind kind() {
         return kind;
     }

@@ -12,7 +12,9 @@ import java.util.Locale;
  * <li>Every parameter follows Vegard's law, v = x v_AlN + y v_InN + z v_GaN (L. Vegard, Z. Phys. 5,
  * 17 (1921)); for the lattice constants this is the law itself, for the others it is the usual
  * linear interpolation (I. Vurgaftman &amp; J. R. Meyer, J. Appl. Phys. 94, 3675 (2003)).</li>
- * <li>The gap bows: Eg = Vegard - b_AlGa x z - b_InGa y z - b_InAl x y. For a ternary this is the
+ * <li>The gap bows: Eg = Vegard - b_AlGa x z - b_InGa y z - b_InAl x y. Its temperature
+ * dependence follows the set's {@link ParameterSet#alloyGapTemperatureRule()}: one Varshni law with
+ * interpolated alpha and beta (the default), or each binary's Varshni law, then the bowing. For a ternary this is the
  * usual one-parameter bowing form; for the quaternary it is the sum of the three pairwise terms
  * (one of the two schemes in common use; the other is the weighted-ternary scheme of Glisson et al.,
  * J. Electron. Mater. 7, 1 (1978)).</li>
@@ -74,6 +76,12 @@ public final class AlloyRules {
                         bow.polarizationInAlN(), "C/m^2", "nonlinear spontaneous polarization, bowing");
             }
             b.set(p, v, new Provenance(rule, dedupe(sources)));
+        }
+        if (set.alloyGapTemperatureRule() == AlloyGapTemperatureRule.VARSHNI_PER_BINARY_THEN_BOWING) {
+            double bowing = bow.gapAlGaN().value() * x * z + bow.gapInGaN().value() * y * z
+                    + bow.gapInAlN().value() * x * y;
+            b.perBinaryGap(new BandGap.PerBinary(new double[] {x, y, z},
+                    new BandGap[] {aln.bandGap(), inn.bandGap(), gan.bandGap()}, bowing));
         }
         return b.build();
     }

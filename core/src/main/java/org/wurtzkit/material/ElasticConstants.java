@@ -1,5 +1,7 @@
 package org.wurtzkit.material;
 
+import org.wurtzkit.units.Decimals;
+
 /**
  * Elastic stiffness constants of a hexagonal crystal (Pa).
  *
@@ -28,5 +30,13 @@ public record ElasticConstants(double c11, double c12, double c13, double c33, d
      */
     public double poissonRatio() {
         return c13 / (c13 + c33);
+    }
+
+    /** @return e.g. {@code "C11 = 390 GPa, C12 = 145 GPa, C13 = 106 GPa, C33 = 398 GPa, C44 = 105 GPa"} */
+    @Override
+    public String toString() {
+        return "C11 = " + Decimals.format(c11 / 1e9, "GPa") + ", C12 = " + Decimals.format(c12 / 1e9, "GPa")
+                + ", C13 = " + Decimals.format(c13 / 1e9, "GPa") + ", C33 = " + Decimals.format(c33 / 1e9, "GPa")
+                + ", C44 = " + Decimals.format(c44 / 1e9, "GPa");
     }
 }

@@ -62,8 +62,13 @@ public enum MaterialParameter {
     HEAVY_HOLE_MASS_PARALLEL("mhh_par", "m0", "m0", 1),
     /** Heavy-hole effective mass perpendicular to c (relative to m0). */
     HEAVY_HOLE_MASS_PERPENDICULAR("mhh_perp", "m0", "m0", 1),
-    /** Static relative permittivity (along c, the direction that matters for c-plane stacks). */
+    /**
+     * Static relative permittivity along c (the extraordinary component, epsilon_33): the component
+     * that the Poisson equation of a c-plane stack uses, since its fields point along c.
+     */
     PERMITTIVITY_STATIC("eps_static", "1", "1", 1),
+    /** Static relative permittivity across c (the ordinary component, epsilon_11 = epsilon_22). */
+    PERMITTIVITY_STATIC_PERPENDICULAR("eps_static_perp", "1", "1", 1),
     /** High-frequency relative permittivity. */
     PERMITTIVITY_HIGH_FREQUENCY("eps_inf", "1", "1", 1),
     /**
@@ -114,6 +119,59 @@ public enum MaterialParameter {
     /** {@return the factor that converts a file value to the library unit} */
     public double fileToSi() {
         return fileToSi;
+    }
+
+    /**
+     * {@return the smallest plausible value, in the file unit {@link #fileUnit()}} A value outside
+     * [{@link #plausibleMinInFileUnit()}, {@link #plausibleMaxInFileUnit()}] is almost surely a unit
+     * slip or a typo (a lattice constant in nm instead of Angstrom, a stiffness in Pa instead of GPa)
+     * and is rejected by {@link WurtziteMaterial.Builder#build()}.
+     */
+    public double plausibleMinInFileUnit() {
+        return plausibleRange(this)[0];
+    }
+
+    /** {@return the largest plausible value, in the file unit {@link #fileUnit()}} */
+    public double plausibleMaxInFileUnit() {
+        return plausibleRange(this)[1];
+    }
+
+    /** {@return the plausible range as text in the file unit, e.g. "[2.5, 4] Angstrom"} */
+    public String plausibleRangeText() {
+        double[] r = plausibleRange(this);
+        return "[" + trim(r[0]) + ", " + trim(r[1]) + "]" + ("1".equals(fileUnit) ? "" : " " + fileUnit);
+    }
+
+    private static String trim(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
+    }
+
+    /**
+     * Plausible ranges for wurtzite III-nitrides and their alloys, in file units. They are wide on
+     * purpose (common practice, no source): they bracket every published value of GaN, AlN and InN
+     * that the project knows of by a factor of two or more, and still catch a slip of a unit prefix
+     * (a factor of ten or a thousand). A switch expression, so that a new parameter does not compile
+     * without its range.
+     */
+    private static double[] plausibleRange(MaterialParameter p) {
+        return switch (p) {
+            case LATTICE_A -> new double[] {2.5, 4};
+            case LATTICE_C -> new double[] {4, 6.5};
+            case C11, C12, C13, C33, C44 -> new double[] {1, 1000};
+            case E31, E33, E15 -> new double[] {-3, 3};
+            case SPONTANEOUS_POLARIZATION, SPONTANEOUS_POLARIZATION_BOWING -> new double[] {-0.2, 0.2};
+            case PIEZO_NONLINEAR_LINEAR -> new double[] {-10, 10};
+            case PIEZO_NONLINEAR_QUADRATIC_TENSILE, PIEZO_NONLINEAR_QUADRATIC_COMPRESSIVE -> new double[] {-50, 50};
+            case BAND_GAP_0K -> new double[] {0.3, 7};
+            case VARSHNI_ALPHA -> new double[] {0, 5};
+            case VARSHNI_BETA -> new double[] {1, 5000};
+            case ELECTRON_MASS_PARALLEL, ELECTRON_MASS_PERPENDICULAR, HEAVY_HOLE_MASS_PARALLEL,
+                    HEAVY_HOLE_MASS_PERPENDICULAR -> new double[] {0.01, 20};
+            case PERMITTIVITY_STATIC, PERMITTIVITY_STATIC_PERPENDICULAR, PERMITTIVITY_HIGH_FREQUENCY -> new double[] {3, 30};
+            case VALENCE_BAND_EDGE -> new double[] {-5, 5};
+            case DEFORMATION_CB_PARALLEL, DEFORMATION_CB_PERPENDICULAR, DEFORMATION_D1, DEFORMATION_D2,
+                    DEFORMATION_D3, DEFORMATION_D4 -> new double[] {-40, 40};
+        };
     }
 
     /**

@@ -1,7 +1,7 @@
 package org.wurtzkit.material;
 
 import java.util.List;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * A named, published (or a team's own measured) set of wurtzite parameters: the three binaries,
@@ -37,6 +37,26 @@ public interface ParameterSet {
 
     /** {@return every source cited by the set, without duplicates} */
     List<Source> sources();
+
+    /**
+     * {@return how the gap of an alloy depends on temperature} The default,
+     * {@link AlloyGapTemperatureRule#INTERPOLATED_VARSHNI}, is the library's historical rule; a set
+     * derived with {@link #derive(String)} can choose the other.
+     */
+    default AlloyGapTemperatureRule alloyGapTemperatureRule() {
+        return AlloyGapTemperatureRule.INTERPOLATED_VARSHNI;
+    }
+
+    /**
+     * Starts a set derived from this one with a few values changed, each change with its source:
+     * {@code set.derive("vm03-lab").set(Binary.GAN, MaterialParameter.C13, 101e9, labSource).build()}.
+     *
+     * @param name the new set's name (unique among the sets a program uses)
+     * @return a builder whose unchanged values, bowing, model and sources are this set's
+     */
+    default DerivedParameterSet.Builder derive(String name) {
+        return DerivedParameterSet.builder(this, name);
+    }
 
     /**
      * Resolves an alloy by {@link AlloyRules}.

@@ -8,6 +8,11 @@ import java.util.List;
  * {@code META-INF/services/org.wurtzkit.material.ParameterSetProvider}.
  */
 public interface ParameterSetProvider {
-    /** {@return the sets this provider offers (loaded eagerly or lazily, but thread-safely)} */
+    /**
+     * {@return the sets this provider offers} Read data files here (lazily), not in a static
+     * initializer: {@link ParameterSets} calls this once per (re)load, and a failure thrown here is
+     * recorded against this provider and reported when its set is named, while the other providers
+     * keep working. Must be thread-safe.
+     */
     List<ParameterSet> parameterSets();
 }

@@ -26,12 +26,15 @@ public final class WurtziteMaterial {
     private final Composition composition;
     private final double[] values;
     private final Provenance[] provenance;
+    private final BandGap.PerBinary perBinaryGap;
 
-    private WurtziteMaterial(String name, Composition composition, double[] values, Provenance[] provenance) {
+    private WurtziteMaterial(String name, Composition composition, double[] values, Provenance[] provenance,
+            BandGap.PerBinary perBinaryGap) {
         this.name = name;
         this.composition = composition;
         this.values = values;
         this.provenance = provenance;
+        this.perBinaryGap = perBinaryGap;
     }
 
     /** {@return a readable name, e.g. "Al0.25Ga0.75N (vurgaftman-meyer-2003)"} */
@@ -103,10 +106,15 @@ public final class WurtziteMaterial {
         return get(MaterialParameter.SPONTANEOUS_POLARIZATION) + get(MaterialParameter.SPONTANEOUS_POLARIZATION_BOWING);
     }
 
-    /** {@return the band gap model (eV, Varshni)} */
+    /**
+     * {@return the band gap model (eV, Varshni)} For an alloy of a set whose
+     * {@link ParameterSet#alloyGapTemperatureRule()} is
+     * {@link AlloyGapTemperatureRule#VARSHNI_PER_BINARY_THEN_BOWING}, it carries the binaries' own
+     * Varshni laws ({@link BandGap#perBinary()}).
+     */
     public BandGap bandGap() {
         return new BandGap(get(MaterialParameter.BAND_GAP_0K), get(MaterialParameter.VARSHNI_ALPHA),
-                get(MaterialParameter.VARSHNI_BETA));
+                get(MaterialParameter.VARSHNI_BETA), perBinaryGap);
     }
 
     /** {@return effective masses relative to m0} */
@@ -116,9 +124,22 @@ public final class WurtziteMaterial {
                 get(MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR));
     }
 
-    /** {@return static relative permittivity} */
+    /**
+     * {@return the static relative permittivity along c} The same as
+     * {@link #permittivityStaticAlongC()}: the component that matters for c-plane stacks.
+     */
     public double permittivityStatic() {
+        return permittivityStaticAlongC();
+    }
+
+    /** {@return the static relative permittivity along c (epsilon_33), used by the Poisson equation of c-plane stacks} */
+    public double permittivityStaticAlongC() {
         return get(MaterialParameter.PERMITTIVITY_STATIC);
+    }
+
+    /** {@return the static relative permittivity across c (epsilon_11)} */
+    public double permittivityStaticAcrossC() {
+        return get(MaterialParameter.PERMITTIVITY_STATIC_PERPENDICULAR);
     }
 
     /** {@return high-frequency relative permittivity} */
@@ -162,6 +183,7 @@ public final class WurtziteMaterial {
         b.composition = composition;
         System.arraycopy(values, 0, b.values, 0, values.length);
         System.arraycopy(provenance, 0, b.provenance, 0, provenance.length);
+        b.perBinaryGap = perBinaryGap;
         return b;
     }
 
@@ -185,7 +207,7 @@ public final class WurtziteMaterial {
     @Override
     public boolean equals(Object o) {
         return o instanceof WurtziteMaterial w && w.name.equals(name) && Objects.equals(w.composition, composition)
-                && Arrays.equals(w.values, values);
+                && Arrays.equals(w.values, values) && Objects.equals(w.perBinaryGap, perBinaryGap);
     }
 
     @Override
@@ -200,7 +222,9 @@ public final class WurtziteMaterial {
 
     /**
      * Mutable builder for a custom material. {@link #build()} checks that every parameter is set
-     * and finite, and that the physically signed ones have the right sign.
+     * and finite, that the physically signed ones have the right sign, and that each lies in its
+     * plausible range ({@link MaterialParameter#plausibleMinInFileUnit()}): a GaN lattice constant
+     * typed in nm instead of Angstrom is rejected, not turned into a wrong polarization charge.
      */
     public static final class Builder {
         /** Parameters that must be strictly positive (lengths, stiffnesses, gap, masses, permittivities). */
@@ -209,12 +233,14 @@ public final class WurtziteMaterial {
                 MaterialParameter.C44, MaterialParameter.BAND_GAP_0K, MaterialParameter.VARSHNI_BETA,
                 MaterialParameter.ELECTRON_MASS_PARALLEL, MaterialParameter.ELECTRON_MASS_PERPENDICULAR,
                 MaterialParameter.HEAVY_HOLE_MASS_PARALLEL, MaterialParameter.HEAVY_HOLE_MASS_PERPENDICULAR,
-                MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY};
+                MaterialParameter.PERMITTIVITY_STATIC, MaterialParameter.PERMITTIVITY_STATIC_PERPENDICULAR,
+                MaterialParameter.PERMITTIVITY_HIGH_FREQUENCY};
 
         private final String name;
         private Composition composition;
         private final double[] values = new double[ALL.length];
         private final Provenance[] provenance = new Provenance[ALL.length];
+        private BandGap.PerBinary perBinaryGap;
 
         private Builder(String name) {
             this.name = Require.nonNull("material name", name);
@@ -239,6 +265,10 @@ public final class WurtziteMaterial {
         public Builder set(MaterialParameter p, double value, Provenance origin) {
             Require.nonNull("material parameter", p);
             Require.finite(p.key() + " of " + name, value);
+            if (p == MaterialParameter.BAND_GAP_0K || p == MaterialParameter.VARSHNI_ALPHA
+                    || p == MaterialParameter.VARSHNI_BETA) {
+                perBinaryGap = null; // a gap set by hand replaces the binaries' laws
+            }
             values[p.ordinal()] = value;
             provenance[p.ordinal()] = Require.nonNull("provenance of " + p.key(), origin);
             return this;
@@ -253,6 +283,12 @@ public final class WurtziteMaterial {
         public Builder set(MaterialParameter p, double value, Source source) {
             Require.nonNull("material parameter", p);
             return set(p, value, Provenance.tabulated(Require.nonNull("source of " + p.key(), source)));
+        }
+
+        /** Sets the per-binary gap form (by {@link AlloyRules}, after the gap parameters). */
+        Builder perBinaryGap(BandGap.PerBinary form) {
+            this.perBinaryGap = form;
+            return this;
         }
 
         /**
@@ -270,7 +306,18 @@ public final class WurtziteMaterial {
             }
             Require.nonNegative(MaterialParameter.VARSHNI_ALPHA.key() + " of " + name,
                     values[MaterialParameter.VARSHNI_ALPHA.ordinal()]);
-            return new WurtziteMaterial(name, composition, values.clone(), provenance.clone());
+            for (MaterialParameter p : ALL) {
+                double inFileUnit = values[p.ordinal()] / p.fileToSi();
+                if (!(inFileUnit >= p.plausibleMinInFileUnit() && inFileUnit <= p.plausibleMaxInFileUnit())) {
+                    throw new InvalidParameterException(p.key() + " of " + name,
+                            new java.math.BigDecimal(inFileUnit).round(new java.math.MathContext(10))
+                                    .stripTrailingZeros().toPlainString()
+                                    + ("1".equals(p.fileUnit()) ? "" : " " + p.fileUnit()),
+                            p.plausibleRangeText() + " (the plausible range for a wurtzite nitride; a value outside"
+                                    + " it is usually a unit slip)");
+                }
+            }
+            return new WurtziteMaterial(name, composition, values.clone(), provenance.clone(), perBinaryGap);
         }
     }
 }

@@ -7,7 +7,9 @@
  * {@link org.wurtzkit.material.WurtziteMaterial} carries its {@link org.wurtzkit.material.Provenance}
  * (rule and {@link org.wurtzkit.material.Source}s). Sets are discovered at run time through
  * {@link org.wurtzkit.material.ParameterSetProvider} and {@link java.util.ServiceLoader}
- * ({@link org.wurtzkit.material.ParameterSets}); the built-in ones live in the materials-data module.
+ * ({@link org.wurtzkit.material.ParameterSets}, which loads providers one by one, lists a broken one
+ * as broken and can {@code reload()}); the built-in ones live in the materials-data module. A set
+ * with a few values changed is derived in code with {@link org.wurtzkit.material.ParameterSet#derive(String)}.
  *
  * <h2>What a new parameter set must guarantee</h2>
  * <ul>
@@ -20,7 +22,9 @@
  * unit of {@link org.wurtzkit.material.MaterialParameter#fileUnit()} and are converted once, on
  * reading.</li>
  * <li><b>Complete and checked.</b> Every {@link org.wurtzkit.material.MaterialParameter} of each
- * binary is present, finite and inside its physical range; a missing or out-of-range value is an
+ * binary is present, finite, of the right sign and inside its plausible range
+ * ({@link org.wurtzkit.material.MaterialParameter#plausibleRangeText()}, wide enough for every
+ * published nitride value, narrow enough to catch a unit slip); a missing or out-of-range value is an
  * error at load time, not a default.</li>
  * <li><b>Sourced.</b> Every value names a source listed in the set's bibliography and says how it
  * was taken (verified against the original, or recalled from memory).</li>

@@ -1,8 +1,10 @@
 package org.wurtzkit.polarization;
 
 import org.wurtzkit.material.PiezoelectricConstants;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.strain.Strain;
+import org.wurtzkit.units.Decimals;
 
 /**
  * The polarization of one strained layer, components along [0001] (C/m&sup2;), in the sign
@@ -72,5 +74,12 @@ public record Polarization(double spontaneous, double piezoelectric) {
      */
     public double alongGrowth(Polarity polarity) {
         return polarity.sign() * total();
+    }
+
+    /** @return e.g. {@code "P_sp = -0.0426 C/m^2, P_pz = -0.0115 C/m^2 along [0001]"} */
+    @Override
+    public String toString() {
+        return "P_sp = " + Decimals.format(spontaneous, "C/m^2") + ", P_pz = " + Decimals.format(piezoelectric, "C/m^2")
+                + " along [0001]";
     }
 }

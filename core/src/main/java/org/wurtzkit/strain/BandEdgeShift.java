@@ -2,6 +2,7 @@ package org.wurtzkit.strain;
 
 import org.wurtzkit.material.DeformationPotentials;
 import org.wurtzkit.material.WurtziteMaterial;
+import org.wurtzkit.units.Decimals;
 
 /**
  * Strain-induced shifts of the band edges of a c-plane wurtzite layer, in the convention of S. L.
@@ -29,5 +30,11 @@ public record BandEdgeShift(double conductionEv, double valenceEv) {
     /** {@return the change of the gap dEc - dEv (eV)} */
     public double gapEv() {
         return conductionEv - valenceEv;
+    }
+
+    /** @return e.g. {@code "dE_c = -0.012 eV, dE_v = 0.008 eV"} */
+    @Override
+    public String toString() {
+        return "dE_c = " + Decimals.format(conductionEv, "eV") + ", dE_v = " + Decimals.format(valenceEv, "eV");
     }
 }

@@ -3,6 +3,7 @@ package org.wurtzkit.strain;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.ElasticConstants;
 import org.wurtzkit.material.WurtziteMaterial;
+import org.wurtzkit.units.Decimals;
 
 /**
  * Biaxial strain of a c-plane wurtzite layer (no shear): eps_xx = eps_yy in the basal plane and
@@ -71,5 +72,12 @@ public record Strain(double xx, double zz) {
     /** {@return the trace eps_xx + eps_yy + eps_zz (relative volume change)} */
     public double trace() {
         return 2 * xx + zz;
+    }
+
+    /** @return e.g. {@code "eps_xx = 0.0024 (0.24 %), eps_zz = -0.00124 (-0.124 %)"} */
+    @Override
+    public String toString() {
+        return "eps_xx = " + Decimals.format(xx) + " (" + Decimals.format(100 * xx, "%") + "), eps_zz = "
+                + Decimals.format(zz) + " (" + Decimals.format(100 * zz, "%") + ")";
     }
 }

@@ -4,8 +4,11 @@
  * (a<sub>s</sub> - a)/a and eps<sub>zz</sub> = -2 (C<sub>13</sub>/C<sub>33</sub>) eps<sub>xx</sub>,
  * with optional partial relaxation; {@link org.wurtzkit.strain.BandEdgeShift} gives the
  * deformation-potential shifts of the band edges (S. L. Chuang and C. S. Chang, Phys. Rev. B 54,
- * 2491 (1996)); {@link org.wurtzkit.strain.CriticalThickness} is the Matthews-Blakeslee estimate
- * (J. W. Matthews and A. E. Blakeslee, J. Cryst. Growth 27, 118 (1974)), only an estimate for
- * AlGaN on GaN, which may relax by cracking first. All types are immutable records in SI units.
+ * 2491 (1996)); {@link org.wurtzkit.strain.CriticalThicknessModel} estimates where a layer starts to
+ * relax: by default channel cracking for layers under tension (AlGaN on GaN relaxes by fracture
+ * first, S. R. Lee et al., Appl. Phys. Lett. 85, 6164 (2004)) and Matthews-Blakeslee for a+c
+ * pyramidal slip under compression (D. Holec et al., J. Cryst. Growth 303, 314 (2007));
+ * {@link org.wurtzkit.strain.CriticalThickness} keeps the zinc-blende 60-degree geometry for
+ * comparison. All types are immutable records in SI units.
  */
 package org.wurtzkit.strain;

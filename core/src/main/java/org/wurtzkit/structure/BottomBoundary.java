@@ -1,12 +1,18 @@
 package org.wurtzkit.structure;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 
 /** The boundary condition at the bottom of the stack, whose Fermi level is the energy zero. */
 public sealed interface BottomBoundary permits BottomBoundary.ZeroField, BottomBoundary.FixedFermiLevel {
 
     /** The electric field vanishes at the bottom (a thick buffer, or a neutral substrate). */
     record ZeroField() implements BottomBoundary {
+        /** @return {@code "zero field at the bottom"} */
+        @Override
+        public String toString() {
+            return "zero field at the bottom";
+        }
     }
 
     /**
@@ -19,6 +25,12 @@ public sealed interface BottomBoundary permits BottomBoundary.ZeroField, BottomB
         /** Validates. */
         public FixedFermiLevel {
             Require.inRange("E_c - E_F at the bottom (eV)", conductionAboveFermiEv, -1, 7);
+        }
+
+        /** @return e.g. {@code "Fermi level fixed at the bottom, E_c - E_F = 0.2 eV"} */
+        @Override
+        public String toString() {
+            return "Fermi level fixed at the bottom, E_c - E_F = " + Decimals.format(conductionAboveFermiEv, "eV");
         }
     }
 

@@ -1,6 +1,7 @@
 package org.wurtzkit.structure;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -44,5 +45,13 @@ public record DeepLevel(Kind kind, double densityPerM3, double energyBelowConduc
      */
     public static DeepLevel donorLikePerCm3(double densityPerCm3, double energyBelowEcEv) {
         return new DeepLevel(Kind.DONOR_LIKE, Units.perCm3ToPerM3(densityPerCm3), energyBelowEcEv);
+    }
+
+    /** @return e.g. {@code "acceptor-like level 1e17 cm^-3 at E_c - 2.6 eV"} */
+    @Override
+    public String toString() {
+        return (kind == Kind.DONOR_LIKE ? "donor-like" : "acceptor-like") + " level "
+                + Decimals.format(Units.perM3ToPerCm3(densityPerM3), "cm^-3") + " at E_c - "
+                + Decimals.format(energyBelowConductionEv, "eV");
     }
 }

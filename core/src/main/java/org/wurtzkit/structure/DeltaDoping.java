@@ -1,6 +1,7 @@
 package org.wurtzkit.structure;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -36,5 +37,14 @@ public record DeltaDoping(Dopant.Kind kind, double sheetDensityPerM2, double ion
     /** {@return the degeneracy factor: {@link Dopant#DONOR_DEGENERACY} or {@link Dopant#ACCEPTOR_DEGENERACY}} */
     public double degeneracy() {
         return kind == Dopant.Kind.DONOR ? Dopant.DONOR_DEGENERACY : Dopant.ACCEPTOR_DEGENERACY;
+    }
+
+    /** @return e.g. {@code "donor sheet 5e12 cm^-2 at 3 nm below the layer top, ionization energy 0.015 eV"} */
+    @Override
+    public String toString() {
+        return (kind == Dopant.Kind.DONOR ? "donor" : "acceptor") + " sheet "
+                + Decimals.format(Units.perM2ToPerCm2(sheetDensityPerM2), "cm^-2") + " at "
+                + Decimals.format(Units.mToNm(offsetFromLayerTop), "nm") + " below the layer top, ionization energy "
+                + Decimals.format(ionizationEnergyEv, "eV");
     }
 }

@@ -1,6 +1,7 @@
 package org.wurtzkit.structure;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -66,5 +67,12 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
     /** {@return density (cm^-3)} */
     public double densityPerCm3() {
         return Units.perM3ToPerCm3(densityPerM3);
+    }
+
+    /** @return e.g. {@code "donors 1e18 cm^-3, ionization energy 0.015 eV, g = 2"} */
+    @Override
+    public String toString() {
+        return (kind == Kind.DONOR ? "donors " : "acceptors ") + Decimals.format(Units.perM3ToPerCm3(densityPerM3), "cm^-3")
+                + ", ionization energy " + Decimals.format(ionizationEnergyEv, "eV") + ", g = " + Decimals.format(degeneracy);
     }
 }

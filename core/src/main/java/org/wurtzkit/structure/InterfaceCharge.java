@@ -1,5 +1,6 @@
 package org.wurtzkit.structure;
 
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -20,5 +21,17 @@ public record InterfaceCharge(double depth, String upperLayer, String lowerLayer
     /** {@return depth (nm)} */
     public double depthNm() {
         return Units.mToNm(depth);
+    }
+
+    /**
+     * @return e.g. {@code "interface spacer/buffer at 25 nm: sigma = 0.0175056 C/m^2 (1.09263e13 e/cm^2)"};
+     *         the surface reads {@code "surface (vacuum/cap) at 0 nm: ..."}
+     */
+    @Override
+    public String toString() {
+        String where = "vacuum".equals(upperLayer) ? "surface (vacuum/" + lowerLayer + ")"
+                : "interface " + upperLayer + "/" + lowerLayer;
+        return where + " at " + Decimals.format(depthNm(), "nm") + ": sigma = " + Decimals.format(sigma, "C/m^2")
+                + " (" + Decimals.format(sheetDensityPerCm2(), "e/cm^2") + ")";
     }
 }

@@ -6,6 +6,7 @@ import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.WurtziteMaterial;
+import org.wurtzkit.units.Decimals;
 
 /**
  * One epitaxial layer: name, material, thickness, doping, deep levels and relaxation. Immutable;
@@ -125,5 +126,28 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
     /** {@return thickness (nm)} */
     public double thicknessNm() {
         return org.wurtzkit.units.Units.mToNm(thickness);
+    }
+
+    /**
+     * @return e.g. {@code "barrier: Al0.26Ga0.74N, 22 nm"}, followed by the relaxation when it is not
+     *         zero and by every dopant, deep level and delta sheet
+     */
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder(name).append(": ").append(material.describe()).append(", ")
+                .append(Decimals.format(thicknessNm(), "nm"));
+        if (relaxation != 0) {
+            sb.append(", relaxed ").append(Decimals.format(100 * relaxation, "%"));
+        }
+        for (Dopant d : dopants) {
+            sb.append(", ").append(d);
+        }
+        for (DeepLevel d : deepLevels) {
+            sb.append(", ").append(d);
+        }
+        for (DeltaDoping d : deltaSheets) {
+            sb.append(", ").append(d);
+        }
+        return sb.toString();
     }
 }

@@ -1,5 +1,7 @@
 package org.wurtzkit.structure;
 
+import org.wurtzkit.units.Decimals;
+
 /**
  * A layer placed in its structure: depths of its top and bottom below the surface, and the state at
  * its two faces (equal for a uniform layer).
@@ -22,5 +24,16 @@ public record LayerState(Layer layer, int indexFromTop, double depthTop, double 
      */
     public double gradedBoundCharge() {
         return bottom.alongGrowth() - top.alongGrowth();
+    }
+
+    /**
+     * @return e.g. {@code "barrier (layer 1 from the top), 3 to 25 nm deep: Al0.26Ga0.74N on a = ..."}; a
+     *         graded layer shows the states at its top and bottom faces
+     */
+    @Override
+    public String toString() {
+        String head = layer.name() + " (layer " + indexFromTop + " from the top), " + Decimals.format(depthTop * 1e9)
+                + " to " + Decimals.format(depthBottom * 1e9, "nm") + " deep: ";
+        return top.equals(bottom) ? head + top : head + "top " + top + "; bottom " + bottom;
     }
 }

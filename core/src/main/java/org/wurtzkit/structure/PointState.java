@@ -4,6 +4,7 @@ import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarization;
 import org.wurtzkit.strain.BandEdgeShift;
 import org.wurtzkit.strain.Strain;
+import org.wurtzkit.units.Decimals;
 
 /**
  * Material, strain and polarization at one point of a structure.
@@ -17,4 +18,13 @@ import org.wurtzkit.strain.Strain;
  */
 public record PointState(WurtziteMaterial material, double inPlaneLatticeA, Strain strain, Polarization polarization,
         double alongGrowth, BandEdgeShift bandShift) {
+
+    /**
+     * @return e.g. {@code "Al0.26Ga0.74N on a = 3.189 A: eps_xx = ..., P_sp = ..., P_z = -0.0541 C/m^2, dE_c = ..."}
+     */
+    @Override
+    public String toString() {
+        return material.name() + " on a = " + Decimals.format(inPlaneLatticeA * 1e10, "A") + ": " + strain + ", "
+                + polarization + ", P_z = " + Decimals.format(alongGrowth, "C/m^2") + ", " + bandShift;
+    }
 }

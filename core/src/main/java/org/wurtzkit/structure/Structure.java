@@ -3,6 +3,8 @@ package org.wurtzkit.structure;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import org.wurtzkit.bands.BandAlignment;
+import org.wurtzkit.bands.BandEdges;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
@@ -12,10 +14,11 @@ import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarity;
 import org.wurtzkit.polarization.Polarization;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.BandEdgeShift;
-import org.wurtzkit.strain.CriticalThickness;
+import org.wurtzkit.strain.CriticalThicknessModel;
 import org.wurtzkit.strain.Strain;
+import org.wurtzkit.units.Decimals;
 
 /**
  * An immutable c-plane layer stack with everything a solver needs: the parameter set, the layers,
@@ -48,6 +51,8 @@ public final class Structure {
     private final double referenceLatticeA;
     private final Polarity polarity;
     private final PolarizationModel polarizationModel;
+    private final BandAlignment bandAlignment;
+    private final boolean strainShiftsBandEdges;
     private final double temperatureK;
     private final TopBoundary top;
     private final BottomBoundary bottom;
@@ -61,6 +66,8 @@ public final class Structure {
         this.polarity = b.polarity;
         this.polarizationModel = b.polarizationModel != null ? b.polarizationModel
                 : parameters.recommendedPolarizationModel();
+        this.bandAlignment = b.bandAlignment;
+        this.strainShiftsBandEdges = b.strainShiftsBandEdges;
         this.temperatureK = b.temperatureK;
         this.top = b.top;
         this.bottom = b.bottom;
@@ -128,6 +135,8 @@ public final class Structure {
         b.referenceLatticeA = referenceLatticeA;
         b.polarity = polarity;
         b.polarizationModel = polarizationModel;
+        b.bandAlignment = bandAlignment;
+        b.strainShiftsBandEdges = strainShiftsBandEdges;
         b.temperatureK = temperatureK;
         b.top = top;
         b.bottom = bottom;
@@ -181,6 +190,33 @@ public final class Structure {
     /** {@return the polarization model in force} */
     public PolarizationModel polarizationModel() {
         return polarizationModel;
+    }
+
+    /** {@return the band line-up in force} */
+    public BandAlignment bandAlignment() {
+        return bandAlignment;
+    }
+
+    /** {@return whether the deformation potentials shift the band edges} */
+    public boolean strainShiftsBandEdges() {
+        return strainShiftsBandEdges;
+    }
+
+    /**
+     * The band edges at a point of this stack: the structure's {@link #bandAlignment()} at its
+     * temperature, plus the point's strain shifts if {@link #strainShiftsBandEdges()}. The one
+     * line-up rule of the full solver and of the closed-form charge-balance model.
+     *
+     * @param point a point of this stack (from {@link #pointAt(double)} or {@link #layerStates()})
+     * @return E_c and E_v on the parameter set's energy scale (eV)
+     */
+    public BandEdges bandEdgesAt(PointState point) {
+        Require.nonNull("point state", point);
+        BandEdges e = bandAlignment.edges(parameters, point.material(), temperatureK);
+        if (strainShiftsBandEdges) {
+            e = e.shiftedBy(point.bandShift().conductionEv(), point.bandShift().valenceEv());
+        }
+        return e;
     }
 
     /** {@return temperature (K)} */
@@ -279,7 +315,8 @@ public final class Structure {
      * @param model the critical-thickness model
      * @return the layers (from the top down) thicker than the critical thickness for their strain
      */
-    public List<LayerState> layersBeyondCriticalThickness(CriticalThickness model) {
+    public List<LayerState> layersBeyondCriticalThickness(CriticalThicknessModel model) {
+        org.wurtzkit.errors.Require.nonNull("critical-thickness model", model);
         List<LayerState> out = new ArrayList<>();
         for (LayerState s : states) {
             PointState worst = Math.abs(s.top().strain().xx()) >= Math.abs(s.bottom().strain().xx()) ? s.top()
@@ -291,19 +328,49 @@ public final class Structure {
         return Collections.unmodifiableList(out);
     }
 
-    /** {@return the layers beyond the Matthews-Blakeslee thickness with the default 60-degree geometry} */
+    /**
+     * {@return the layers beyond the critical thickness of the default model
+     * {@link CriticalThicknessModel#C_PLANE_WURTZITE}: channel cracking for layers under tension,
+     * pyramidal-slip Matthews-Blakeslee for layers under compression}
+     */
     public List<LayerState> layersBeyondCriticalThickness() {
-        return layersBeyondCriticalThickness(CriticalThickness.MATTHEWS_BLAKESLEE_60);
+        return layersBeyondCriticalThickness(CriticalThicknessModel.C_PLANE_WURTZITE);
     }
 
+    /**
+     * A summary to read in jshell or a notebook, one line per item, top down: the parameter set,
+     * polarity and temperature; the top boundary; every layer with its material, thickness,
+     * relaxation, dopants, deep levels and delta sheets; the bottom boundary; and a warning for
+     * every layer thicker than its Matthews-Blakeslee critical thickness (an estimate). For example:
+     *
+     * <pre>
+     * Structure (vurgaftman-meyer-2003, metal-face, 300 K), top down:
+     *   top: Schottky gate, barrier 1 eV, bias 0 V
+     *   cap: GaN, 2 nm
+     *   barrier: Al0.26Ga0.74N, 22 nm
+     *   spacer: AlN, 1 nm
+     *   buffer: GaN, 1800 nm
+     *   bottom: zero field at the bottom
+     * </pre>
+     *
+     * @return the summary (lines separated by '\n')
+     */
     @Override
     public String toString() {
-        StringBuilder sb = new StringBuilder("Structure[");
+        StringBuilder sb = new StringBuilder("Structure (").append(parameters.name()).append(", ")
+                .append(polarity == Polarity.METAL_FACE ? "metal-face" : "N-face").append(", ")
+                .append(Decimals.format(temperatureK, "K")).append("), top down:\n");
+        sb.append("  top: ").append(top).append('\n');
         for (LayerState s : states) {
-            sb.append(s.layer().name()).append(' ').append(s.layer().material().describe()).append(' ')
-                    .append(String.format(java.util.Locale.ROOT, "%.3g nm", s.layer().thicknessNm())).append(" / ");
+            sb.append("  ").append(s.layer()).append('\n');
         }
-        return sb.append(polarity).append(", ").append(temperatureK).append(" K]").toString();
+        sb.append("  bottom: ").append(bottom);
+        for (LayerState s : layersBeyondCriticalThickness()) {
+            sb.append("\n  warning: ").append(s.layer().name()).append(" (")
+                    .append(Decimals.format(s.layer().thicknessNm(), "nm"))
+                    .append(") is thicker than its Matthews-Blakeslee critical thickness (an estimate); it may relax");
+        }
+        return sb.toString();
     }
 
     /**
@@ -317,6 +384,8 @@ public final class Structure {
         private double referenceLatticeA = -1;
         private Polarity polarity = Polarity.METAL_FACE;
         private PolarizationModel polarizationModel;
+        private BandAlignment bandAlignment = BandAlignment.valenceBandTable();
+        private boolean strainShiftsBandEdges;
         private double temperatureK = 300;
         private TopBoundary top;
         private BottomBoundary bottom = new BottomBoundary.ZeroField();
@@ -371,6 +440,28 @@ public final class Structure {
          */
         public Builder polarizationModel(PolarizationModel model) {
             this.polarizationModel = Require.nonNull("polarization model", model);
+            return this;
+        }
+
+        /**
+         * @param alignment how the band edges of the materials line up; default
+         *                  {@link BandAlignment#valenceBandTable()} (the parameter set's tabulated
+         *                  valence-band maxima)
+         * @return this builder
+         */
+        public Builder bandAlignment(BandAlignment alignment) {
+            this.bandAlignment = Require.nonNull("band alignment", alignment);
+            return this;
+        }
+
+        /**
+         * @param shifts whether the deformation potentials shift the band edges; default false,
+         *               because the deformation potentials of the built-in sets are recalled values
+         *               whose sign convention was not verified
+         * @return this builder
+         */
+        public Builder strainShiftsBandEdges(boolean shifts) {
+            this.strainShiftsBandEdges = shifts;
             return this;
         }
 

@@ -1,6 +1,7 @@
 package org.wurtzkit.structure;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -30,6 +31,24 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
         public Schottky withBias(double v) {
             return new Schottky(barrierHeightEv, v);
         }
+
+        /**
+         * The same gate at another bias; reads {@code TopBoundary.schottky(1.0).atBiasV(-2)}, which
+         * names the unit and cannot swap barrier and bias.
+         *
+         * @param biasV gate bias with respect to the bottom contact (V), in [-100, 20]
+         * @return a copy at that bias
+         */
+        public Schottky atBiasV(double biasV) {
+            return new Schottky(barrierHeightEv, biasV);
+        }
+
+        /** @return e.g. {@code "Schottky gate, barrier 1 eV, bias -2.5 V"} */
+        @Override
+        public String toString() {
+            return "Schottky gate, barrier " + Decimals.format(barrierHeightEv, "eV") + ", bias "
+                    + Decimals.format(biasV, "V");
+        }
     }
 
     /**
@@ -46,12 +65,32 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
             Require.inRange("surface donor energy below E_c (eV)", donorEnergyBelowEcEv, 0, 6);
             Require.inRange("surface donor density (m^-2)", donorDensityPerM2, 0, 1e20);
         }
+
+        /** @return e.g. {@code "free surface, donor states 1.6e13 cm^-2 at E_c - 1.65 eV"} */
+        @Override
+        public String toString() {
+            return "free surface, donor states " + Decimals.format(Units.perM2ToPerCm2(donorDensityPerM2), "cm^-2")
+                    + " at E_c - " + Decimals.format(donorEnergyBelowEcEv, "eV");
+        }
+    }
+
+    /**
+     * A Schottky gate at 0 V; give it a bias with {@link Schottky#atBiasV(double)}:
+     * {@code TopBoundary.schottky(1.0).atBiasV(-2)}. Prefer this form to
+     * {@link #schottky(double, double)}, whose two numbers can be swapped unnoticed.
+     *
+     * @param barrierHeightEv phi_B (eV), in [0, 6]
+     * @return the gate at zero bias
+     */
+    static Schottky schottky(double barrierHeightEv) {
+        return new Schottky(barrierHeightEv, 0);
     }
 
     /**
      * @param barrierHeightEv phi_B (eV)
      * @param biasV           gate bias (V)
      * @return a Schottky gate
+     * @see #schottky(double)
      */
     static Schottky schottky(double barrierHeightEv, double biasV) {
         return new Schottky(barrierHeightEv, biasV);

@@ -9,8 +9,8 @@
  * and thread-safe; it resolves each layer once into {@link org.wurtzkit.structure.LayerState}s and
  * {@link org.wurtzkit.structure.PointState}s (material, strain, polarization) and reports the bound
  * {@link org.wurtzkit.structure.InterfaceCharge}s. Depth is measured from the surface downward, in
- * metres. As planned for the next release, model choices that belong to the stack itself (the band
- * line-up and whether strain shifts the band edges) are set here rather than in the solver's
- * options.
+ * metres. Model choices that belong to the stack itself are set here, not in a solver's options:
+ * the polarization model, the band line-up ({@link org.wurtzkit.bands.BandAlignment}) and whether
+ * strain shifts the band edges.
  */
 package org.wurtzkit.structure;

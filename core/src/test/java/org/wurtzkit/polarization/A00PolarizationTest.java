@@ -7,6 +7,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
 import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.strain.Strain;
 import org.wurtzkit.structure.InterfaceCharge;

@@ -13,6 +13,7 @@ import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
 import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.structure.InterfaceCharge;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.LayerState;

@@ -27,8 +27,9 @@ import org.wurtzkit.material.Provenance;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarization;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.CriticalThickness;
+import org.wurtzkit.strain.CriticalThicknessModel;
 import org.wurtzkit.strain.Strain;
 import org.wurtzkit.structure.BottomBoundary;
 import org.wurtzkit.structure.DeepLevel;
@@ -184,6 +185,24 @@ class CoreBadInputTest {
                         "[0, 90)"),
                 row("MB lambda negative", () -> new CriticalThickness(60, -1), "slip angle lambda (degrees)", -1.0,
                         "[0, 90)"),
+                row("cracking Gamma zero", () -> new CriticalThicknessModel.ChannelCracking(0),
+                        "fracture resistance Gamma (J/m^2)", 0.0, "(0, 1000]"),
+                row("cracking Gamma NaN", () -> new CriticalThicknessModel.ChannelCracking(NAN),
+                        "fracture resistance Gamma (J/m^2)", NAN, "(0, 1000]"),
+                row("cracking Gamma above 1000", () -> new CriticalThicknessModel.ChannelCracking(2000),
+                        "fracture resistance Gamma (J/m^2)", 2000.0, "(0, 1000]"),
+                row("c-plane model without slip part", () -> new CriticalThicknessModel.CPlaneWurtzite(null,
+                        CriticalThicknessModel.ChannelCracking.EINFELDT_2000), "slip model", "null", "(non-null)"),
+                row("derived set with blank name", () -> A00TestSet.INSTANCE.derive(" "), "derived set name", "\" \"",
+                        "non-blank text"),
+                row("derived set value NaN", () -> A00TestSet.INSTANCE.derive("d").set(Binary.GAN,
+                        MaterialParameter.C13, NAN, Source.of("S", "test")), "C13 of GaN", NAN, "(finite)"),
+                row("derived set value implausible", () -> A00TestSet.INSTANCE.derive("d").set(Binary.GAN,
+                        MaterialParameter.LATTICE_A, 0.3189e-10, Source.of("S", "test")).build(), "a of GaN (d)",
+                        "0.3189 Angstrom", "[2.5, 4] Angstrom (the plausible range for a wurtzite nitride; a value"
+                                + " outside it is usually a unit slip)"),
+                row("reload through a null loader", () -> ParameterSets.reload(null), "class loader", "null",
+                        "(non-null)"),
                 row("polarization model without spontaneous part",
                         () -> new PolarizationModel(null, PolarizationModel.Piezoelectric.LINEAR),
                         "spontaneous polarization model", "null", "(non-null)"),

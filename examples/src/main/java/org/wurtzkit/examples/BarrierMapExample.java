@@ -6,11 +6,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.Styler;
-import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.wurtzkit.material.ParameterSets;
+import org.wurtzkit.plot.DesignMapPlot;
+import org.wurtzkit.plot.Labels;
 import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
 import org.wurtzkit.solvers.workflow.Axis;
 import org.wurtzkit.solvers.workflow.Column;
@@ -26,13 +24,14 @@ import org.wurtzkit.solvers.workflow.StructureFactory;
  * on wafer {@value DemoLab#WAFER}), from the full self-consistent solver
  * ({@link DesignMap}, in parallel, with progress on the terminal) and from the analytic
  * charge-balance model ({@link ChargeBalanceModel#fromStructure}) of the same stacks, side by side
- * on one colour scale with contour lines.
+ * on one colour scale with contour lines, and a third panel with their relative difference
+ * (analytic &minus; full) / full in percent ({@link DesignMapPlot}).
  *
  * <p>Writes {@code barrier-map.png}, {@code barrier-map-full.csv} (the design map's own table) and
  * {@code barrier-map-analytic.csv}. The data is invented; the numbers are model estimates.
  */
 public final class BarrierMapExample {
-    static final int PANEL_WIDTH = 980;
+    static final int PANEL_WIDTH = 860;
     static final int PANEL_HEIGHT = 720;
 
     private BarrierMapExample() {
@@ -114,26 +113,17 @@ public final class BarrierMapExample {
             }
         }
 
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (double[][] z : new double[][][] {full, analytic}) {
-            for (double[] row : z) {
-                for (double v : row) {
-                    if (!Double.isNaN(v)) {
-                        lo = Math.min(lo, v / 1e13);
-                        hi = Math.max(hi, v / 1e13);
-                    }
-                }
-            }
-        }
-        MapPlot.Levels levels = MapPlot.Levels.nice(lo, hi, 9);
-        XYChart left = panel("Self-consistent solver: n\u209b (10\u00b9\u00b3 cm\u207b\u00b2), " + DemoLab.WAFER + " family (invented)", xs, ds, scaled(full),
-                levels);
-        XYChart right = panel("Analytic charge-balance model: n\u209b (10\u00b9\u00b3 cm\u207b\u00b2), " + DemoLab.WAFER + " family (invented)", xs, ds,
-                scaled(analytic), levels);
+        DesignMapPlot plot = DesignMapPlot.of(xs, ds, scaled(full))
+                .axes("Al fraction x of the barrier", "barrier thickness (nm)")
+                .quantity(Labels.N_S + " (" + Labels.powerOfTen(13) + " " + Labels.PER_CM2 + ")")
+                .title(DemoLab.WAFER + " family (invented)")
+                .name("full solver")
+                .compareWith("analytic model", scaled(analytic))
+                .mark("wafer " + DemoLab.WAFER, DemoLab.AL_FRACTION, DemoLab.BARRIER_NM)
+                .panelSize(PANEL_WIDTH, PANEL_HEIGHT);
 
         List<Path> files = new ArrayList<>();
-        files.add(Charts.savePngRow(List.of(left, right), out.resolve("barrier-map.png")));
+        files.add(plot.figure().writePng(out.resolve("barrier-map.png")));
         files.add(Tables.write(map, out.resolve("barrier-map-full.csv")));
         files.add(at.write(out.resolve("barrier-map-analytic.csv")));
 
@@ -153,8 +143,8 @@ public final class BarrierMapExample {
         List<String> summary = new ArrayList<>();
         summary.add("Barrier design map around wafer " + DemoLab.WAFER + ", " + DemoLab.INVENTED + ":");
         summary.add(String.format(Locale.ROOT, "  %d x %d points (Al fraction %.2f to %.2f, barrier %s to %s nm, cap %s nm,"
-                + " AlN spacer %s nm), full solver in %.1f s", nx, nd, xs[0], xs[nx - 1], Charts.nm(ds[0]),
-                Charts.nm(ds[nd - 1]), Charts.nm(DemoLab.CAP_NM), Charts.nm(DemoLab.SPACER_NM), seconds));
+                + " AlN spacer %s nm), full solver in %.1f s", nx, nd, xs[0], xs[nx - 1], Labels.trimmed(ds[0]),
+                Labels.trimmed(ds[nd - 1]), Labels.trimmed(DemoLab.CAP_NM), Labels.trimmed(DemoLab.SPACER_NM), seconds));
         summary.add(String.format(Locale.ROOT, "  full solver n_s from %.3e to %.3e cm^-2; analytic model from %.3e to %.3e cm^-2",
                 min(full), max(full), min(analytic), max(analytic)));
         summary.add(String.format(Locale.ROOT, "  analytic minus full, relative: mean |difference| %.1f %%, largest %+.1f %%",
@@ -165,21 +155,6 @@ public final class BarrierMapExample {
         }
         summary.add("  model estimates: confirm by measurement");
         return new Result(map, analytic, List.copyOf(files), List.copyOf(summary));
-    }
-
-    private static XYChart panel(String title, double[] xs, double[] ds, double[][] z, MapPlot.Levels levels) {
-        XYChart c = Charts.xy(PANEL_WIDTH, PANEL_HEIGHT, title, "Al fraction x of the barrier",
-                "barrier thickness (nm)");
-        c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideE);
-        List<MapPlot.ContourLabel> labels = MapPlot.draw(c, xs, ds, z, levels, "");
-        XYSeries w = c.addSeries("wafer " + DemoLab.WAFER, new double[] {DemoLab.AL_FRACTION},
-                new double[] {DemoLab.BARRIER_NM});
-        w.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-        w.setMarker(SeriesMarkers.DIAMOND);
-        w.setMarkerColor(Charts.RED);
-        c.getStyler().setMarkerSize(12);
-        MapPlot.label(c, labels);
-        return c;
     }
 
     private static double[][] scaled(double[][] z) {

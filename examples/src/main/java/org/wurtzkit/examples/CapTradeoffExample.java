@@ -6,9 +6,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.Styler;
+import org.wurtzkit.plot.Figure;
+import org.wurtzkit.plot.Labels;
+import org.wurtzkit.plot.TradeoffPlot;
 import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.workflow.Axis;
@@ -26,7 +26,8 @@ import org.wurtzkit.units.Units;
  * sheet density n_s and the electric field in the AlGaN barrier change with the thickness of the
  * GaN cap (0 = no cap), everything else as on the wafer. The full solver runs as a one-axis
  * {@link DesignMap} (progress on the terminal); the analytic charge-balance model of the same
- * stacks is drawn beside it.
+ * stacks is drawn beside it. The two quantities are drawn in two panels stacked over one shared
+ * x axis ({@link TradeoffPlot}), each with its own y axis.
  *
  * <p>Writes {@code cap-tradeoff.png}, {@code cap-tradeoff.csv} (per cap thickness: n_s of both
  * models, the barrier field, status) and {@code cap-tradeoff-map.csv} (the design map's own
@@ -34,7 +35,8 @@ import org.wurtzkit.units.Units;
  */
 public final class CapTradeoffExample {
     static final int WIDTH = 1200;
-    static final int HEIGHT = 760;
+    /** Height of each of the two stacked panels (pixels); the figure adds room for title and x axis. */
+    static final int PANEL_HEIGHT = 380;
 
     private CapTradeoffExample() {
     }
@@ -109,12 +111,9 @@ public final class CapTradeoffExample {
                 Column.of("status", ""));
         for (int i = 0; i < n; i++) {
             analytic[i] = ChargeBalanceModel.fromStructure(family.at(caps[i])).sheetDensityPerCm2();
-            t.row(caps[i], ns[i], analytic[i], field[i], map.failure(i).map(f -> "failed: " + f).orElse("ok"));
+            t.row(caps[i], ns[i], analytic[i], field[i], map.failure(i).map(f -> "failed: " + f.message()).orElse("ok"));
         }
 
-        XYChart c = Charts.xy(WIDTH, HEIGHT, "Wafer " + DemoLab.WAFER + ": 2DEG and barrier field against the GaN cap \u2014 "
-                + DemoLab.INVENTED, "GaN cap thickness (nm)", "2DEG sheet density n\u209b (10\u00b9\u00b3 cm\u207b\u00b2)");
-        c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNE);
         double[] nsScaled = new double[n];
         double[] anScaled = new double[n];
         double[] fieldAbs = new double[n];
@@ -123,26 +122,19 @@ public final class CapTradeoffExample {
             anScaled[i] = analytic[i] / 1e13;
             fieldAbs[i] = Math.abs(field[i]);
         }
-        double top = BandDiagramExample.niceCeiling(1.35 * Math.max(BandDiagramExample.max(nsScaled),
-                BandDiagramExample.max(anScaled)));
-        c.getStyler().setYAxisMin(0, 0.0);
-        c.getStyler().setYAxisMax(0, top);
-        Charts.lineWithMarkers(c, "n\u209b, self-consistent solver", caps, nsScaled, Charts.BLUE, Charts.SOLID);
-        Charts.line(c, "n\u209b, analytic charge-balance model", caps, anScaled, Charts.BLUE, Charts.DASHED);
-        XYSeries w = Charts.line(c, "wafer " + DemoLab.WAFER + " (" + Charts.nm(DemoLab.CAP_NM) + " nm cap)",
-                new double[] {DemoLab.CAP_NM, DemoLab.CAP_NM}, new double[] {0, top}, Charts.GREY, Charts.DOTTED);
-        w.setYAxisGroup(0);
-        XYSeries f = Charts.lineWithMarkers(c, "|E| in the barrier (right axis)", caps, fieldAbs, Charts.RED,
-                Charts.SOLID);
-        f.setMarker(org.knowm.xchart.style.markers.SeriesMarkers.SQUARE);
-        f.setYAxisGroup(1);
-        c.setYAxisGroupTitle(1, "field in the AlGaN barrier |E| (MV/cm)");
-        c.getStyler().setYAxisGroupPosition(1, Styler.YAxisPosition.Right);
-        c.getStyler().setYAxisMin(1, 0.0);
-        c.getStyler().setYAxisMax(1, BandDiagramExample.niceCeiling(1.35 * BandDiagramExample.max(fieldAbs)));
+        Figure figure = TradeoffPlot.along("GaN cap thickness (nm)", caps)
+                .title("Wafer " + DemoLab.WAFER + ": 2DEG and barrier field against the GaN cap \u2014 " + DemoLab.INVENTED)
+                .size(WIDTH, PANEL_HEIGHT)
+                .panel("2DEG sheet density " + Labels.N_S + " (" + Labels.powerOfTen(13) + " " + Labels.PER_CM2 + ")")
+                .points(Labels.N_S + ", self-consistent solver", nsScaled)
+                .line(Labels.N_S + ", analytic charge-balance model", anScaled)
+                .panel("field in the AlGaN barrier |E| (MV/cm)")
+                .points("|E| in the barrier, self-consistent solver", fieldAbs)
+                .mark("wafer " + DemoLab.WAFER + " (" + Labels.trimmed(DemoLab.CAP_NM) + " nm cap)", DemoLab.CAP_NM)
+                .figure();
 
         List<Path> files = new ArrayList<>();
-        files.add(Charts.savePng(c, out.resolve("cap-tradeoff.png")));
+        files.add(figure.writePng(out.resolve("cap-tradeoff.png")));
         files.add(t.write(out.resolve("cap-tradeoff.csv")));
         files.add(Tables.write(map, out.resolve("cap-tradeoff-map.csv")));
 
@@ -151,7 +143,7 @@ public final class CapTradeoffExample {
         for (int i = 0; i < n; i++) {
             if (i == 0 || i == n - 1 || caps[i] == DemoLab.CAP_NM) {
                 summary.add(String.format(Locale.ROOT,
-                        "  cap %5s nm: n_s = %.4e cm^-2 (analytic %.4e), barrier field %+.3f MV/cm", Charts.nm(caps[i]),
+                        "  cap %5s nm: n_s = %.4e cm^-2 (analytic %.4e), barrier field %+.3f MV/cm", Labels.trimmed(caps[i]),
                         ns[i], analytic[i], field[i]));
             }
         }

@@ -21,19 +21,18 @@ public final class DemoLabParameterSets implements ParameterSetProvider {
     /** Name of the invented set. */
     public static final String NAME = "tarnwick-lab-2025";
 
-    private static final class Holder {
-        static final ParameterSet SET = JsonParameterSetReader.readResource(DemoLabParameterSets.class,
-                "tarnwick-lab-2025.json");
-    }
-
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
     public DemoLabParameterSets() {
     }
 
-    /** @return the invented set, read on first use */
+    /**
+     * @return the invented set, read from its file on each call: {@code ParameterSets} calls this
+     *         once per (re)load, and a typo in the file is then reported against this set only (and
+     *         can be fixed and reloaded), instead of failing a static initializer for good
+     */
     @Override
     public List<ParameterSet> parameterSets() {
-        return List.of(Holder.SET);
+        return List.of(JsonParameterSetReader.readResource(DemoLabParameterSets.class, "tarnwick-lab-2025.json"));
     }
 
     /**

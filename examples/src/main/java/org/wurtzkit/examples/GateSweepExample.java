@@ -6,13 +6,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.knowm.xchart.XYChart;
-import org.knowm.xchart.style.Styler;
+import org.wurtzkit.plot.Figure;
+import org.wurtzkit.plot.GateSweepPlot;
 import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
 import org.wurtzkit.solvers.workflow.BiasGrid;
 import org.wurtzkit.solvers.workflow.BiasSweep;
 import org.wurtzkit.solvers.workflow.BiasSweepResult;
-import org.wurtzkit.solvers.workflow.CapacitanceVoltage;
 import org.wurtzkit.solvers.workflow.Column;
 import org.wurtzkit.solvers.workflow.PointFailure;
 import org.wurtzkit.solvers.workflow.ThresholdDefinition;
@@ -111,26 +110,20 @@ public final class GateSweepExample {
         }
         double vthModel = model.thresholdVoltage();
 
-        // ascending order for drawing
+        // ascending order for the tangent
         double[] v = r.gateBiasV();
         double[] ns = r.sheetDensityPerCm2();
         reverseIfDescending(v, ns);
-        // the tangent of the linear-extrapolation definition: the steepest interval of n_s(V_g)
-        int steep = -1;
-        double slope = 0;
-        for (int k = 0; k + 1 < v.length; k++) {
-            double sl = (ns[k + 1] - ns[k]) / (v[k + 1] - v[k]);
-            if (sl > slope) {
-                slope = sl;
-                steep = k;
-            }
-        }
-        double tangentZero = steep < 0 ? Double.NaN : v[steep] - ns[steep] / slope;
+        GateSweepPlot.Tangent tangent = GateSweepPlot.steepestTangent(v, ns);
+        double slope = tangent.slopePerCm2PerV();
+        double tangentZero = tangent.zeroV();
 
         List<Path> files = new ArrayList<>();
-        XYChart left = nsPanel(v, ns, model, vthLinear, vthLevel, slope, tangentZero);
-        XYChart right = cvPanel(r.capacitanceVoltage(), model, vthLinear);
-        files.add(Charts.savePngRow(List.of(left, right), out.resolve("gate-sweep.png")));
+        Figure figure = GateSweepPlot.of(r).analyticModel(model).constantDensityThreshold(LEVEL_PER_CM2)
+                .title("Wafer " + DemoLab.WAFER + " (invented demo data)")
+                .panelSize(PANEL_WIDTH, PANEL_HEIGHT)
+                .figure();
+        files.add(figure.writePng(out.resolve("gate-sweep.png")));
         files.add(Tables.write(r, out.resolve("gate-sweep.csv")));
         files.add(Tables.write(r.capacitanceVoltage(), out.resolve("gate-sweep-cv.csv")));
         Tables th = Tables.of(Column.of("model", ""), Column.of("definition", ""), Column.of("threshold_voltage", "V"));
@@ -155,65 +148,6 @@ public final class GateSweepExample {
         summary.add("  model estimates: confirm by measurement");
         return new Result(r, vthLinear, vthLevel, vthModel, slope, tangentZero, List.copyOf(files),
                 List.copyOf(summary));
-    }
-
-    private static XYChart nsPanel(double[] v, double[] ns, ChargeBalanceModel model, double vthLinear,
-            double vthLevel, double slope, double tangentZero) {
-        XYChart c = Charts.xy(PANEL_WIDTH, PANEL_HEIGHT, "Wafer " + DemoLab.WAFER + ": n\u209b against V_g (invented demo data)",
-                "gate bias V_g (V)", "2DEG sheet density n\u209b (10\u00b9\u00b3 cm\u207b\u00b2)");
-        c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNW);
-        double[] y = new double[ns.length];
-        for (int i = 0; i < y.length; i++) {
-            y[i] = ns[i] / 1e13;
-        }
-        double top = BandDiagramExample.niceCeiling(1.3 * BandDiagramExample.max(y));
-        c.getStyler().setYAxisMin(0.0);
-        c.getStyler().setYAxisMax(top);
-        c.getStyler().setXAxisMin(v[0]);
-        c.getStyler().setXAxisMax(v[v.length - 1]);
-        Charts.lineWithMarkers(c, "self-consistent solver", v, y, Charts.BLUE, Charts.SOLID);
-        int fine = 200;
-        double[] vf = new double[fine];
-        double[] nf = new double[fine];
-        for (int i = 0; i < fine; i++) {
-            vf[i] = v[0] + (v[v.length - 1] - v[0]) * i / (fine - 1);
-            nf[i] = model.sheetDensityPerCm2(vf[i]) / 1e13;
-        }
-        Charts.line(c, "analytic charge-balance model", vf, nf, Charts.GREY, Charts.DASHED);
-        if (!Double.isNaN(tangentZero)) {
-            double vEnd = v[v.length - 1];
-            Charts.line(c, "tangent at the steepest slope", new double[] {tangentZero, vEnd},
-                    new double[] {0, slope * (vEnd - tangentZero) / 1e13}, Charts.ORANGE, Charts.DOTTED);
-        }
-        Charts.line(c, String.format(Locale.ROOT, "V_th = %+.2f V (linear extrapolation)", vthLinear),
-                new double[] {vthLinear, vthLinear}, new double[] {0, top}, Charts.RED, Charts.SOLID);
-        if (!Double.isNaN(vthLevel)) {
-            Charts.line(c, String.format(Locale.ROOT, "V_th = %+.2f V (n\u209b = 10\u00b9\u00b9 cm\u207b\u00b2)", vthLevel),
-                    new double[] {vthLevel, vthLevel}, new double[] {0, top}, Charts.PURPLE, Charts.DASHED);
-        }
-        return c;
-    }
-
-    private static XYChart cvPanel(CapacitanceVoltage cv, ChargeBalanceModel model, double vthLinear) {
-        XYChart c = Charts.xy(PANEL_WIDTH, PANEL_HEIGHT, "Wafer " + DemoLab.WAFER + ": quasi-static C\u2013V (invented demo data)",
-                "gate bias V_g (V), interval midpoints", "gate capacitance C (\u00b5F/cm\u00b2)");
-        c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNW);
-        double[] v = cv.midpointBiasV();
-        double[] cap = cv.capacitanceMicroFaradPerCm2();
-        reverseIfDescending(v, cap);
-        double series = model.gateCapacitance() / Units.UF_PER_CM2;
-        double top = BandDiagramExample.niceCeiling(1.3 * Math.max(BandDiagramExample.max(cap), series));
-        c.getStyler().setYAxisDecimalPattern("0.00");
-        c.getStyler().setYAxisMin(0.0);
-        c.getStyler().setYAxisMax(top);
-        c.getStyler().setXAxisMin(v[0]);
-        c.getStyler().setXAxisMax(v[v.length - 1]);
-        Charts.lineWithMarkers(c, "C = dQ_gate/dV_g, self-consistent solver", v, cap, Charts.BLUE, Charts.SOLID);
-        Charts.line(c, String.format(Locale.ROOT, "series capacitance of cap, barrier and spacer, %.3f \u00b5F/cm\u00b2", series),
-                new double[] {v[0], v[v.length - 1]}, new double[] {series, series}, Charts.GREY, Charts.DASHED);
-        Charts.line(c, String.format(Locale.ROOT, "V_th = %+.2f V (linear extrapolation)", vthLinear),
-                new double[] {vthLinear, vthLinear}, new double[] {0, top}, Charts.RED, Charts.SOLID);
-        return c;
     }
 
     private static void reverseIfDescending(double[] x, double[] y) {

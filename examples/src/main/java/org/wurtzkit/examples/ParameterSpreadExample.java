@@ -1,18 +1,15 @@
 package org.wurtzkit.examples;
 
-import java.awt.Color;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.knowm.xchart.XYChart;
-import org.knowm.xchart.style.Styler;
-import org.knowm.xchart.style.markers.Marker;
-import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
+import org.wurtzkit.plot.Figure;
+import org.wurtzkit.plot.SpreadPlot;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.workflow.BiasGrid;
 import org.wurtzkit.solvers.workflow.Column;
@@ -29,8 +26,8 @@ import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
  * parameter set ({@link ParameterSets#all()}: the built-in published sets and, with this module
  * on the class path, the invented set of the fictional lab, {@link DemoLabParameterSets}, which is
  * labelled "(invented)" wherever it appears) by {@link ParameterSetSpread}: n_s at 0 V and the
- * threshold voltage (linear extrapolation of a bias sweep), with the min&ndash;max band across the
- * sets.
+ * threshold voltage (linear extrapolation of a bias sweep), with the min&ndash;max band and the
+ * median across the sets ({@link SpreadPlot}).
  *
  * <p>Writes {@code parameter-spread.png}, {@code parameter-spread.csv} (every member) and
  * {@code parameter-spread-summary.csv} (min, median, max per Al fraction). The data is invented;
@@ -44,11 +41,6 @@ public final class ParameterSpreadExample {
     private static final double TOP_BIAS_V = 0.5;
     /** How far below the analytic threshold of the default set each sweep reaches (V). */
     private static final double BELOW_THRESHOLD_V = 2.0;
-
-    private static final Color[] SET_COLORS = {Charts.BLUE, Charts.GREEN, Charts.ORANGE, Charts.PURPLE,
-        Charts.RED, Charts.GREY};
-    private static final Marker[] SET_MARKERS = {SeriesMarkers.CIRCLE, SeriesMarkers.SQUARE, SeriesMarkers.DIAMOND,
-        SeriesMarkers.TRIANGLE_UP, SeriesMarkers.TRIANGLE_DOWN, SeriesMarkers.CROSS};
 
     private ParameterSpreadExample() {
     }
@@ -132,19 +124,18 @@ public final class ParameterSpreadExample {
             SpreadResult s = spreads.get(i);
             for (SpreadResult.Member m : s.members()) {
                 members.row(xs[i], DemoLabParameterSets.label(m.parameterSet()), m.sheetDensityPerCm2(), m.thresholdVoltage(),
-                        m.succeeded() ? "ok" : "failed: " + m.failure());
+                        m.succeeded() ? "ok" : "failed: " + m.failure().message());
             }
             SpreadResult.Statistics n = s.sheetDensityPerCm2();
             SpreadResult.Statistics v = s.thresholdVoltage();
             stats.row(xs[i], n.min(), n.median(), n.max(), v.min(), v.median(), v.max(), n.count());
         }
 
-        XYChart left = panel("n\u209b at V_g = 0 V across parameter sets (invented demo stack)",
-                "2DEG sheet density n\u209b (10\u00b9\u00b3 cm\u207b\u00b2)", xs, spreads, names, true);
-        XYChart right = panel("Threshold voltage across parameter sets (invented demo stack)",
-                "threshold voltage V_th (V), linear extrapolation", xs, spreads, names, false);
+        Figure figure = SpreadPlot.of(xs, spreads).xTitle("Al fraction x of the barrier")
+                .title("invented demo stack").setLabels(DemoLabParameterSets::label)
+                .panelSize(PANEL_WIDTH, PANEL_HEIGHT).figure();
         List<Path> files = new ArrayList<>();
-        files.add(Charts.savePngRow(List.of(left, right), out.resolve("parameter-spread.png")));
+        files.add(figure.writePng(out.resolve("parameter-spread.png")));
         files.add(members.write(out.resolve("parameter-spread.csv")));
         files.add(stats.write(out.resolve("parameter-spread-summary.csv")));
 
@@ -162,53 +153,5 @@ public final class ParameterSpreadExample {
         }
         summary.add("  model estimates: confirm by measurement");
         return new Result(names, List.copyOf(spreads), List.copyOf(files), List.copyOf(summary));
-    }
-
-    private static XYChart panel(String title, String yTitle, double[] xs, List<SpreadResult> spreads,
-            List<String> names, boolean sheet) {
-        XYChart c = Charts.xy(PANEL_WIDTH, PANEL_HEIGHT, title, "Al fraction x of the barrier", yTitle);
-        c.getStyler().setLegendPosition(sheet ? Styler.LegendPosition.InsideNW : Styler.LegendPosition.InsideNE);
-        double scale = sheet ? 1e-13 : 1;
-        int n = xs.length;
-        double[] min = new double[n];
-        double[] med = new double[n];
-        double[] max = new double[n];
-        for (int i = 0; i < n; i++) {
-            SpreadResult.Statistics s = sheet ? spreads.get(i).sheetDensityPerCm2() : spreads.get(i).thresholdVoltage();
-            min[i] = s.min() * scale;
-            med[i] = s.median() * scale;
-            max[i] = s.max() * scale;
-        }
-        double[] px = new double[2 * n];
-        double[] py = new double[2 * n];
-        for (int i = 0; i < n; i++) {
-            px[i] = xs[i];
-            py[i] = min[i];
-            px[2 * n - 1 - i] = xs[i];
-            py[2 * n - 1 - i] = max[i];
-        }
-        Charts.polygon(c, "min\u2013max band over " + names.size() + " parameter sets", px, py, new Color(200, 220, 240),
-                true);
-        Charts.line(c, "median", xs, med, Charts.INK, Charts.DASHED);
-        for (int k = 0; k < names.size(); k++) {
-            double[] y = new double[n];
-            for (int i = 0; i < n; i++) {
-                SpreadResult.Member m = spreads.get(i).members().get(k);
-                y[i] = (sheet ? m.sheetDensityPerCm2() : m.thresholdVoltage()) * scale;
-            }
-            Charts.lineWithMarkers(c, DemoLabParameterSets.label(names.get(k)), xs, y,
-                    SET_COLORS[k % SET_COLORS.length], Charts.THIN).setMarker(SET_MARKERS[k % SET_MARKERS.length]);
-        }
-        double lo = BandDiagramExample.min(min);
-        double hi = BandDiagramExample.max(max);
-        double pad = 0.35 * (hi - lo) + 1e-9;
-        if (sheet) {
-            c.getStyler().setYAxisMin(0.0);
-            c.getStyler().setYAxisMax(BandDiagramExample.niceCeiling(hi + pad));
-        } else {
-            c.getStyler().setYAxisMin(Math.floor(lo - 0.05 * (hi - lo)));
-            c.getStyler().setYAxisMax(Math.ceil(hi + pad));
-        }
-        return c;
     }
 }

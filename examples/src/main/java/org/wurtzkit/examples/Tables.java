@@ -16,9 +16,14 @@ import org.wurtzkit.solvers.workflow.CsvTable;
  * The examples' own CSV tables, written with Apache Commons CSV in the same form as the library's
  * workflow results ({@link CsvTable}): RFC 4180, one header line of {@code name_unit} cells
  * ({@link Column#header()}), numbers as {@link Double#toString(double)}, an empty cell for a value
- * that does not exist.
+ * that does not exist. Every file starts with one comment line ({@link #NOTE}, marked with
+ * {@code #}) saying that the data is invented demo data; read it with a comment marker, e.g.
+ * {@code pandas.read_csv(f, comment="#")} or Commons CSV's {@code setCommentMarker('#')}.
  */
 final class Tables {
+    /** The comment line at the top of every CSV file of the examples (without its marker). */
+    static final String NOTE = DemoLab.INVENTED + ": model estimates of wurtzkit, not measurements";
+
     private final List<Column> columns;
     private final List<List<String>> rows = new ArrayList<>();
 
@@ -65,7 +70,8 @@ final class Tables {
     Path write(Path file) throws IOException {
         String[] header = columns.stream().map(Column::header).toArray(String[]::new);
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
-                CSVPrinter p = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(header).get())) {
+                CSVPrinter p = new CSVPrinter(w, CSVFormat.RFC4180.builder()
+                        .setCommentMarker('#').setHeaderComments(NOTE).setHeader(header).get())) {
             for (List<String> r : rows) {
                 p.printRecord(r);
             }
@@ -74,7 +80,7 @@ final class Tables {
     }
 
     /**
-     * Writes a library result table.
+     * Writes a library result table after the comment line.
      *
      * @param table the result
      * @param file  the file
@@ -82,7 +88,10 @@ final class Tables {
      * @throws IOException from the file system
      */
     static Path write(CsvTable table, Path file) throws IOException {
-        table.writeCsv(file);
+        try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+            w.write("# " + NOTE + "\r\n");
+            table.writeCsv(w);
+        }
         return file;
     }
 }

@@ -50,12 +50,13 @@ class ExamplesTest {
         Outputs.assertPng(file(r, "band-diagram-channel.png"), BandDiagramExample.WIDTH, BandDiagramExample.HEIGHT);
         List<CSVRecord> bands = csv(r, "band-diagram.csv", "depth_nm", "conduction_band_minus_fermi_eV",
                 "valence_band_minus_fermi_eV");
-        assertEquals(r.solution().bandDiagram()[0].length, bands.size(), "one row per point of the band polyline");
+        assertEquals(r.solution().bandDiagram().size(), bands.size(), "one row per point of the band polyline");
         String[] nodeHeader = new String[4 + r.drawnSubbands()];
         System.arraycopy(new String[] {"depth_nm", "conduction_band_minus_fermi_eV", "valence_band_minus_fermi_eV",
             "electron_density_cm^-3"}, 0, nodeHeader, 0, 4);
         for (int k = 0; k < r.drawnSubbands(); k++) {
-            nodeHeader[4 + k] = "psi_squared_subband_" + k + "_1/nm";
+            // one quantum window here, so the column names the subband's index alone
+            nodeHeader[4 + k] = "subband_" + k + "_psi_squared_nm^-1";
         }
         List<CSVRecord> nodes = csv(r, "band-diagram-nodes.csv", nodeHeader);
         assertEquals(r.solution().nodeCount(), nodes.size());
@@ -87,7 +88,8 @@ class ExamplesTest {
     void barrierMap(@TempDir Path out) throws IOException {
         BarrierMapExample.Settings s = BarrierMapExample.Settings.quick();
         BarrierMapExample.Result r = BarrierMapExample.run(out, s, log);
-        Outputs.assertPng(file(r, "barrier-map.png"), 2 * BarrierMapExample.PANEL_WIDTH,
+        // solver, analytic model and their relative difference
+        Outputs.assertPng(file(r, "barrier-map.png"), 3 * BarrierMapExample.PANEL_WIDTH,
                 BarrierMapExample.PANEL_HEIGHT);
         List<CSVRecord> full = csv(r, "barrier-map-full.csv", "barrier_al_fraction", "barrier_thickness_nm",
                 "sheet_density_cm^-2", "ground_subband_minus_fermi_eV", "status");
@@ -116,7 +118,9 @@ class ExamplesTest {
     void capTradeoff(@TempDir Path out) throws IOException {
         CapTradeoffExample.Settings s = CapTradeoffExample.Settings.quick();
         CapTradeoffExample.Result r = CapTradeoffExample.run(out, s, log);
-        Outputs.assertPng(file(r, "cap-tradeoff.png"), CapTradeoffExample.WIDTH, CapTradeoffExample.HEIGHT);
+        // two panels stacked over the shared x axis, the title above and the axis below
+        Outputs.assertPng(file(r, "cap-tradeoff.png"), CapTradeoffExample.WIDTH, 2 * CapTradeoffExample.PANEL_HEIGHT
+                + org.wurtzkit.plot.TradeoffPlot.TITLE_HEIGHT_PX + org.wurtzkit.plot.TradeoffPlot.AXIS_HEIGHT_PX);
         List<CSVRecord> rows = csv(r, "cap-tradeoff.csv", "cap_thickness_nm", "sheet_density_cm^-2",
                 "sheet_density_analytic_cm^-2", "barrier_field_along_depth_MV/cm", "status");
         csv(r, "cap-tradeoff-map.csv", "cap_thickness_nm", "sheet_density_cm^-2", "barrier_field_along_depth_MV/cm",

@@ -51,14 +51,18 @@ final class Outputs {
     }
 
     /**
-     * Reads a CSV file and checks that its header is exactly the expected one and that every row
-     * has one cell per column.
+     * Reads a CSV file and checks that it opens with the comment line that calls its data invented,
+     * that its header is exactly the expected one and that every row has one cell per column.
      *
      * @return the records
      */
     static List<CSVRecord> assertCsv(Path file, List<String> header) throws IOException {
+        String first = Files.readAllLines(file, StandardCharsets.UTF_8).get(0);
+        assertEquals("# " + Tables.NOTE, first, file + " first line");
+        assertTrue(first.contains("invented demo data"), first);
         try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                CSVParser p = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
+                CSVParser p = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true)
+                        .get().parse(r)) {
             assertEquals(header, p.getHeaderNames(), file + " header");
             List<CSVRecord> rows = p.getRecords();
             assertTrue(rows.size() > 0, file + " has no rows");
@@ -75,7 +79,7 @@ final class Outputs {
             if (dimensionless.contains(h)) {
                 continue;
             }
-            boolean unit = h.matches(".*_(nm|eV|V|cm\\^-2|cm\\^-3|C/m\\^2|F/m\\^2|uF/cm\\^2|MV/cm|1/nm|m0)");
+            boolean unit = h.matches(".*_(nm|eV|V|cm\\^-2|cm\\^-3|C/m\\^2|F/m\\^2|uF/cm\\^2|MV/cm|nm\\^-1|m0)");
             assertTrue(unit, "header " + h + " names no unit");
         }
     }

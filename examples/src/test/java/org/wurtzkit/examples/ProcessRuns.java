@@ -42,8 +42,14 @@ final class ProcessRuns {
      * failing on a non-zero exit or on a hang.
      */
     static String run(List<String> command, Path work) throws IOException, InterruptedException {
+        return runIn(command, work, null);
+    }
+
+    /** As {@link #run}, with the child's working directory {@code dir} (null: this JVM's). */
+    static String runIn(List<String> command, Path work, Path dir) throws IOException, InterruptedException {
         Path log = Files.createTempFile(work, "process", ".log");
-        ProcessBuilder pb = new ProcessBuilder(command).redirectErrorStream(true)
+        ProcessBuilder pb = new ProcessBuilder(command).directory(dir == null ? null : dir.toFile())
+                .redirectErrorStream(true)
                 .redirectOutput(log.toFile()).redirectInput(ProcessBuilder.Redirect.from(emptyFile(work).toFile()));
         Process p = pb.start();
         boolean done = p.waitFor(180, TimeUnit.SECONDS);

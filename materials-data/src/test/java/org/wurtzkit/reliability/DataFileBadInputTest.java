@@ -113,7 +113,7 @@ class DataFileBadInputTest {
                         t -> 2, "formatVersion = 2"),
                 edit("unknown polarization model", t -> DataFiles.replaceOnLine(t, 5, "\"LINEAR\"", "\"QUADRATIC\""),
                         "recommendedPolarizationModel", t -> 5, "\"QUADRATIC\""),
-                edit("NaN gap bowing", t -> DataFiles.replaceOnLine(t, lineOfKey(t, "gap", "AlGaN"), "0.7", "NaN"),
+                edit("NaN gap bowing", t -> DataFiles.replaceOnLine(t, lineOfKey(t, "gap", "AlGaN"), "0.8", "NaN"),
                         "bowing.gap.AlGaN", t -> lineOfKey(t, "gap", "AlGaN"), "malformed JSON"),
                 edit("overflowing polarization bowing", t -> DataFiles.replaceOnLine(t,
                         lineOfKey(t, "polarization", "InGaN"), "\"value\": 0", "\"value\": 1e500"),

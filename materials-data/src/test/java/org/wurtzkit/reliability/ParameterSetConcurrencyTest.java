@@ -103,4 +103,36 @@ class ParameterSetConcurrencyTest {
             assertSame(got.get(0), s);
         }
     }
+
+    /**
+     * {@link ParameterSets#reload()} publishes a new registry while other threads look sets up: every
+     * lookup sees either the old or the new registry, both complete, never a half-built one.
+     */
+    @Test
+    void lookupsDuringReloadsAlwaysFindTheDefaultSet() throws Exception {
+        java.util.concurrent.atomic.AtomicBoolean done = new java.util.concurrent.atomic.AtomicBoolean();
+        Thread reloader = new Thread(() -> {
+            for (int i = 0; i < 50; i++) {
+                org.wurtzkit.material.ParameterSets.reload();
+            }
+            done.set(true);
+        });
+        reloader.start();
+        List<Integer> found = concurrently(THREADS, () -> {
+            int n = 0;
+            do {
+                if (org.wurtzkit.material.ParameterSets.defaultSet().name().equals(
+                        org.wurtzkit.material.ParameterSets.DEFAULT_NAME)
+                        && org.wurtzkit.material.ParameterSets.names().contains("ambacher-2002")) {
+                    n++;
+                }
+            } while (!done.get());
+            return n;
+        });
+        reloader.join(60_000);
+        for (int n : found) {
+            org.junit.jupiter.api.Assertions.assertTrue(n > 0);
+        }
+        org.junit.jupiter.api.Assertions.assertTrue(org.wurtzkit.material.ParameterSets.brokenProviders().isEmpty());
+    }
 }

@@ -4,7 +4,9 @@ import java.nio.ByteBuffer;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
+import org.wurtzkit.solvers.sp.BandDiagram;
 import org.wurtzkit.solvers.sp.ConvergenceRecord;
+import org.wurtzkit.solvers.sp.DepthRange;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.Subband;
 
@@ -64,11 +66,12 @@ final class Fingerprint {
             s.cellMidpoints(), s.electricField(), s.wellSheetDensities()}) {
             h.add(a);
         }
-        for (double[] a : s.bandDiagram()) {
-            h.add(a);
-        }
-        for (double[] a : s.quantumWindows()) {
-            h.add(a);
+        BandDiagram bd = s.bandDiagram();
+        h.add(bd.depth());
+        h.add(bd.conductionEv());
+        h.add(bd.valenceEv());
+        for (DepthRange w : s.quantumWindows()) {
+            h.add(new double[] {w.top(), w.bottom()});
         }
         h.add((long) s.subbands().size());
         for (Subband b : s.subbands()) {

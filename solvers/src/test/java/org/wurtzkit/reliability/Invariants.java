@@ -6,7 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.wurtzkit.solvers.sp.BandDiagram;
 import org.wurtzkit.solvers.sp.ConvergenceRecord;
+import org.wurtzkit.solvers.sp.DepthRange;
 import org.wurtzkit.solvers.sp.HoleFermiLevel;
 import org.wurtzkit.solvers.sp.NotConvergedException;
 import org.wurtzkit.solvers.sp.Solution;
@@ -105,7 +107,7 @@ final class Invariants {
             eps[k] = ps.material().permittivityStatic() * Constants.VACUUM_PERMITTIVITY;
             px[k] = -ps.alongGrowth();
             gap[k] = ps.material().bandGap().atTemperature(t)
-                    + (o.strainShiftsBandEdges() ? ps.bandShift().gapEv() : 0);
+                    + (s.strainShiftsBandEdges() ? ps.bandShift().gapEv() : 0);
             Layer l = s.layerStates().get(s.layerIndexAt(mid)).layer();
             for (Dopant d : l.dopants()) {
                 if (d.kind() == Dopant.Kind.DONOR) {
@@ -210,28 +212,30 @@ final class Invariants {
     }
 
     private static void checkSubbands(Solution sol, double[] x, double[] w, String where) {
-        double[][] windows = sol.quantumWindows();
+        List<DepthRange> windows = sol.quantumWindows();
         double[] well = sol.wellSheetDensities();
-        double[][] bd = sol.bandDiagram();
+        BandDiagram bd = sol.bandDiagram();
+        double[] bdDepth = bd.depth();
+        double[] bdEc = bd.conductionEv();
         List<List<Subband>> byWindow = new ArrayList<>();
-        for (int i = 0; i < windows.length; i++) {
+        for (int i = 0; i < windows.size(); i++) {
             byWindow.add(new ArrayList<>());
         }
         for (Subband b : sol.subbands()) {
-            assertTrue(b.window() >= 0 && b.window() < windows.length, "window index " + b.window() + where);
+            assertTrue(b.window() >= 0 && b.window() < windows.size(), "window index " + b.window() + where);
             byWindow.get(b.window()).add(b);
         }
         double wellSum = 0;
-        for (int win = 0; win < windows.length; win++) {
+        for (int win = 0; win < windows.size(); win++) {
             List<Subband> bands = byWindow.get(win);
-            double top = windows[win][0];
-            double bottom = windows[win][1];
+            double top = windows.get(win).top();
+            double bottom = windows.get(win).bottom();
             // variational bound of the discrete Hamiltonian (positive kinetic term): every level
             // lies above the lowest conduction-band edge in its window
             double ecMin = Double.POSITIVE_INFINITY;
-            for (int j = 0; j < bd[0].length; j++) {
-                if (bd[0][j] >= top && bd[0][j] <= bottom) {
-                    ecMin = Math.min(ecMin, bd[1][j]);
+            for (int j = 0; j < bdDepth.length; j++) {
+                if (bdDepth[j] >= top && bdDepth[j] <= bottom) {
+                    ecMin = Math.min(ecMin, bdEc[j]);
                 }
             }
             double sum = 0;
@@ -266,7 +270,7 @@ final class Invariants {
             assertEquals(well[win], sum, 1e-12 * Math.max(sum, 1), "window sheet density = sum of subbands" + where);
             wellSum += sum;
         }
-        if (windows.length > 0) {
+        if (!windows.isEmpty()) {
             assertEquals(wellSum * 1e-4, sol.sheetDensityPerCm2(), 1e-12 * Math.max(wellSum * 1e-4, 1), where);
         }
         // the subband electrons are part of all electrons: integral of n >= sum of occupations

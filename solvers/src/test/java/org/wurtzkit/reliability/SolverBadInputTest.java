@@ -15,6 +15,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.wurtzkit.bands.BandAlignment;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
@@ -23,7 +24,6 @@ import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.mesh.Mesh;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
 import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
-import org.wurtzkit.solvers.sp.BandAlignment;
 import org.wurtzkit.solvers.sp.HoleFermiLevel;
 import org.wurtzkit.solvers.sp.NotConvergedException;
 import org.wurtzkit.solvers.sp.QuantumRegion;
@@ -61,15 +61,13 @@ class SolverBadInputTest {
 
     private static SolverOptions newtonTolerance(double v) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), v, D.maxNewtonIterations(), D.maxNewtonStep(), D.mesh(),
-                D.quantumRegion(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel(), D.bandAlignment(),
-                D.strainShiftsBandEdges());
+                D.quantumRegion(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel());
     }
 
     private static SolverOptions nulls(int which) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), D.newtonTolerance(), D.maxNewtonIterations(),
                 D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumRegion(), D.maxSubbands(),
-                D.subbandCutoffKT(), which == 2 ? null : D.holeFermiLevel(), which == 3 ? null : D.bandAlignment(),
-                D.strainShiftsBandEdges());
+                D.subbandCutoffKT(), which == 2 ? null : D.holeFermiLevel());
     }
 
     static Stream<Arguments> options() {
@@ -113,11 +111,10 @@ class SolverBadInputTest {
                 row("null mesh policy", () -> D.withMesh(null), "mesh policy", "null", "(non-null)"),
                 row("null quantum region", () -> D.withQuantumRegion(null), "quantum region", "null", "(non-null)"),
                 row("null hole Fermi level", () -> D.withHoleFermiLevel(null), "hole Fermi level", "null", "(non-null)"),
-                row("null band alignment", () -> D.withBandAlignment(null), "band alignment", "null", "(non-null)"),
+                row("null band alignment", () -> Structure.builder(SET).bandAlignment(null), "band alignment", "null", "(non-null)"),
                 row("null mesh policy (constructor)", () -> nulls(0), "mesh policy", "null", "(non-null)"),
                 row("null quantum region (constructor)", () -> nulls(1), "quantum region", "null", "(non-null)"),
                 row("null hole Fermi level (constructor)", () -> nulls(2), "hole Fermi level", "null", "(non-null)"),
-                row("null band alignment (constructor)", () -> nulls(3), "band alignment", "null", "(non-null)"),
                 row("conduction-band fraction NaN", () -> BandAlignment.conductionBandFraction(NAN),
                         "conduction-band offset fraction", NAN, "[0, 1]"),
                 row("conduction-band fraction 1.1", () -> BandAlignment.conductionBandFraction(1.1),

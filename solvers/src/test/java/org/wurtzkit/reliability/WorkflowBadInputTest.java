@@ -14,6 +14,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
@@ -245,7 +246,8 @@ class WorkflowBadInputTest {
                 .axis(Axis.of("al", "", 0.25, 1.2)).threads(1).build().run();
         assertTrue(r.succeeded(0));
         assertFalse(r.succeeded(1));
-        String why = r.failure(1).orElseThrow();
+        assertEquals(ErrorKind.INVALID_PARAMETER, r.failure(1).orElseThrow().kind());
+        String why = r.failure(1).orElseThrow().message();
         assertTrue(why.contains("Al fraction x = 1.2") && why.contains("[0, 1]"), why);
         // documented: a failed point's values are NaN, never a stale or default number
         assertTrue(Double.isNaN(r.value(1, 0)), "a failed point carries no number: " + r.value(1, 0));

@@ -1,3 +1,5 @@
+// SPDX-License-Identifier: Apache-2.0
+// Copyright 2026 The wurtzkit developers
 package org.wurtzkit.reliability;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -35,13 +37,16 @@ import org.wurtzkit.solvers.workflow.TargetSearch;
 import org.wurtzkit.solvers.workflow.TemperatureSweep;
 import org.wurtzkit.solvers.workflow.ThresholdDefinition;
 import org.wurtzkit.solvers.workflow.ThresholdExtraction;
+import org.wurtzkit.solvers.workflow.Distribution;
+import org.wurtzkit.solvers.workflow.Tolerance;
+import org.wurtzkit.solvers.workflow.ToleranceStudy;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 
 /**
  * Interruption of the long workflows (issue #14): a design map (one thread and several), a
- * parameter-set spread, the sweeps and a target search stop with a {@link CancellationException}
+ * tolerance study (one thread and several), a parameter-set spread, the sweeps and a target search stop with a {@link CancellationException}
  * within one point per thread once their thread is interrupted or their future cancelled, and an
  * evaluator that restores its worker's interrupt flag (the correct reaction to an
  * {@link InterruptedException}, B. Goetz et al., Java Concurrency in Practice, Addison-Wesley 2006,
@@ -184,6 +189,61 @@ class WorkflowInterruptionTest {
         } finally {
             exec.shutdownNow();
         }
+    }
+
+    private static ToleranceStudy study(int threads, int samples, PointEvaluator e) {
+        return ToleranceStudy.builder(hemt()).tolerance(Tolerance.layerThicknessNm("barrier", Distribution.uniform(20, 30)))
+                .samples(samples).seed(731).threads(threads).evaluators(e).build();
+    }
+
+    /**
+     * A one-thread tolerance study whose evaluator interrupts its own thread at its third sample
+     * stops before the fourth with a CancellationException, leaving the flag set (the study runs its
+     * samples through the map's worker code).
+     */
+    @Test
+    void oneThreadToleranceStudyStopsAtTheNextSample() {
+        AtomicInteger count = new AtomicInteger();
+        ToleranceStudy st = study(1, 40, counting(count, 0, k -> {
+            if (k == 3) {
+                Thread.currentThread().interrupt();
+            }
+        }));
+        CancellationException e = assertThrows(CancellationException.class, st::run);
+        assertTrue(Thread.interrupted(), "the interrupt flag stays set (and is cleared here)");
+        assertEquals(3, count.get(), "samples evaluated");
+        assertTrue(e.getMessage().contains("after 3 of " + st.size() + " points"), e.getMessage());
+    }
+
+    /**
+     * A tolerance study running in its own thread is interrupted from outside after 4 samples: it
+     * throws CancellationException and evaluates at most one more sample per thread.
+     */
+    @ParameterizedTest(name = "{0} threads")
+    @ValueSource(ints = {1, 2, 3})
+    void toleranceStudyInterruptedFromOutsideStopsWithinOneSamplePerThread(int threads) throws InterruptedException {
+        AtomicInteger count = new AtomicInteger();
+        CountDownLatch fourDone = new CountDownLatch(4);
+        ToleranceStudy st = study(threads, 200, counting(count, 20, k -> fourDone.countDown()));
+        AtomicReference<Throwable> thrown = new AtomicReference<>();
+        Thread t = new Thread(() -> {
+            try {
+                st.run();
+            } catch (Throwable x) {
+                thrown.set(x);
+            }
+        });
+        t.start();
+        assertTrue(fourDone.await(GUARD_SECONDS, TimeUnit.SECONDS));
+        int atInterrupt = count.get();
+        t.interrupt();
+        t.join(TimeUnit.SECONDS.toMillis(GUARD_SECONDS));
+        assertFalse(t.isAlive(), "the tolerance study did not stop");
+        assertInstanceOf(CancellationException.class, thrown.get(), String.valueOf(thrown.get()));
+        Thread.sleep(200);
+        assertTrue(count.get() <= atInterrupt + threads,
+                count.get() + " samples evaluated, " + atInterrupt + " when interrupted, " + threads + " threads");
+        assertTrue(count.get() < st.size(), count.get() + " of " + st.size() + " samples evaluated");
     }
 
     /**

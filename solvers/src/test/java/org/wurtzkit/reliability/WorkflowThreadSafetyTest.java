@@ -22,6 +22,7 @@ import org.wurtzkit.solvers.workflow.BiasSweepResult;
 import org.wurtzkit.solvers.workflow.DesignMap;
 import org.wurtzkit.solvers.workflow.DesignMapResult;
 import org.wurtzkit.solvers.workflow.ParameterSetSpread;
+import org.wurtzkit.solvers.workflow.PointFailure;
 import org.wurtzkit.solvers.workflow.SpreadResult;
 import org.wurtzkit.solvers.workflow.StructureFamilies;
 import org.wurtzkit.solvers.workflow.StructureFamily;
@@ -48,7 +49,7 @@ class WorkflowThreadSafetyTest {
         DesignMapResult four = b.threads(4).build().run();
         assertEquals(one.size(), four.size());
         for (int i = 0; i < one.size(); i++) {
-            assertTrue(one.succeeded(i), one.failure(i).orElse(""));
+            assertTrue(one.succeeded(i), one.failure(i).map(PointFailure::message).orElse(""));
             assertArrayEquals(one.values(i), four.values(i), "point " + i);
             for (int c = 0; c < one.values(i).length; c++) {
                 assertEquals(Double.doubleToRawLongBits(one.value(i, c)), Double.doubleToRawLongBits(four.value(i, c)));

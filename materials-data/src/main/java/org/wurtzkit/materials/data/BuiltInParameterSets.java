@@ -16,11 +16,11 @@ import org.wurtzkit.material.ParameterSets;
  * after I. Vurgaftman &amp; J. R. Meyer, J. Appl. Phys. 94, 3675 (2003), with the spontaneous
  * polarization and piezoelectric constants of F. Bernardini, V. Fiorentini &amp; D. Vanderbilt,
  * Phys. Rev. B 56, R10024 (1997); recommended polarization model
- * {@link org.wurtzkit.polarization.PolarizationModel#LINEAR}.</li>
+ * {@link org.wurtzkit.material.PolarizationModel#LINEAR}.</li>
  * <li>{@value #AMBACHER_2002}: following O. Ambacher et al., J. Phys.: Condens. Matter 14, 3399
  * (2002), with the nonlinear polarization of F. Bernardini &amp; V. Fiorentini, Phys. Rev. B 64,
  * 085207 (2001); recommended model
- * {@link org.wurtzkit.polarization.PolarizationModel#NONLINEAR}.</li>
+ * {@link org.wurtzkit.material.PolarizationModel#NONLINEAR}.</li>
  * </ul>
  *
  * Each file is read once, on first use (thread-safely; a broken file fails with its

@@ -12,7 +12,7 @@ import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * An immutable, thread-safe {@link ParameterSet} read from a data file by

@@ -25,7 +25,7 @@ import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.Provenance;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * Reads a parameter set from a JSON data file (format version {@value #FORMAT_VERSION}) with
@@ -90,13 +90,17 @@ import org.wurtzkit.polarization.PolarizationModel;
  *
  * <pre>{@code
  * public final class LabSets implements ParameterSetProvider {
- *     private static final ParameterSet LAB = JsonParameterSetReader.readResource(LabSets.class, "lab-2025.json");
- *
- *     @Override public List<ParameterSet> parameterSets() { return List.of(LAB); }
+ *     @Override public List<ParameterSet> parameterSets() {   // read lazily, on each call
+ *         return List.of(JsonParameterSetReader.readResource(LabSets.class, "lab-2025.json"));
+ *     }
  * }
  * }</pre>
  *
- * Then {@code ParameterSets.named("lab-2025")} finds it. The reader is stateless and thread-safe.
+ * Then {@code ParameterSets.named("lab-2025")} finds it. Read the file inside
+ * {@code parameterSets()}, not in a static field: {@code ParameterSets} calls it once per
+ * (re)load and keeps the sets, and a typo in the file is then reported when the set is named (with
+ * set, file, key and line), whereas a failing static initializer leaves the class unusable until
+ * the JVM restarts. The reader is stateless and thread-safe.
  */
 public final class JsonParameterSetReader {
     /** The only format version this reader understands. */

@@ -2,6 +2,7 @@ package org.wurtzkit.materials.data;
 
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.material.NamedSetFailure;
 
 /**
  * A parameter-set data file cannot be turned into a parameter set: it is not well-formed JSON, a
@@ -15,7 +16,7 @@ import org.wurtzkit.errors.WurtzkitException;
  * {@link #setName()}, {@link #fileName()}, {@link #key()}, {@link #line()} and
  * {@link #problem()}. The kind is always {@link ErrorKind#MALFORMED_DATA}.
  */
-public class ParameterSetFormatException extends WurtzkitException {
+public class ParameterSetFormatException extends WurtzkitException implements NamedSetFailure {
     private static final long serialVersionUID = 1L;
 
     /** Set name used in messages when the file fails before its {@code "name"} could be read. */
@@ -57,6 +58,7 @@ public class ParameterSetFormatException extends WurtzkitException {
     }
 
     /** {@return the set's name, or {@link #UNNAMED} if the file failed before its name was read} */
+    @Override
     public String setName() {
         return setName;
     }

@@ -14,7 +14,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.strain.Strain;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;

@@ -17,7 +17,7 @@ import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
-import org.wurtzkit.polarization.PolarizationModel;
+import org.wurtzkit.material.PolarizationModel;
 
 /**
  * A team's own set, read through the public reader from a test resource, works end to end: it

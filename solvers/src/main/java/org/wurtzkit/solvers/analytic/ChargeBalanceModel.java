@@ -11,8 +11,6 @@ import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.EffectiveMasses;
 import org.wurtzkit.material.ParameterSet;
-import org.wurtzkit.solvers.sp.BandAlignment;
-import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.LayerState;
 import org.wurtzkit.structure.PointState;
@@ -183,23 +181,11 @@ public final class ChargeBalanceModel {
     }
 
     /**
-     * The model of a structure with the band line-up of the full solver's defaults
-     * ({@link SolverOptions#defaults()}: tabulated valence-band edges, no strain shifts).
-     *
-     * @param structure a stack of undoped uniform layers on a channel, with a Schottky gate
-     * @return its charge-balance model
-     * @see #fromStructure(Structure, SolverOptions)
-     */
-    public static ChargeBalanceModel fromStructure(Structure structure) {
-        return fromStructure(structure, SolverOptions.defaults());
-    }
-
-    /**
      * The model of a structure, fed by the structure's parameter set: the polarization charges S_j
      * from the structure's strain and polarization model (core's {@link Structure#layerStates()}),
      * permittivities from the set, the offset E_c(top) - E_c(channel) from the set's band edges at
-     * the structure's temperature with the same line-up rules as the full solver
-     * ({@link SolverOptions#bandAlignment()}, {@link SolverOptions#strainShiftsBandEdges()}), and
+     * the structure's temperature with the same line-up rule as the full solver
+     * ({@link Structure#bandEdgesAt}: the structure's band alignment and strain-shift switch), and
      * the channel's electron masses (along c for E_0, in the basal plane for the density of
      * states). E_0 is evaluated with the channel's permittivity, since the field of the well is in
      * the channel; A00's expression as recalled uses the barrier's eps(x) there ({@link Ambacher2000}
@@ -211,13 +197,11 @@ public final class ChargeBalanceModel {
      * so its own doping and the bottom boundary do not enter.
      *
      * @param structure the stack
-     * @param options   the solver options whose band line-up to follow
      * @return its charge-balance model
      * @throws InvalidParameterException naming the offending layer or boundary
      */
-    public static ChargeBalanceModel fromStructure(Structure structure, SolverOptions options) {
+    public static ChargeBalanceModel fromStructure(Structure structure) {
         Require.nonNull("structure", structure);
-        Require.nonNull("solver options", options);
         List<LayerState> states = structure.layerStates();
         if (states.size() < 2) {
             throw new InvalidParameterException("number of layers of the structure", Integer.toString(states.size()),
@@ -227,7 +211,6 @@ public final class ChargeBalanceModel {
             throw new InvalidParameterException("top boundary", String.valueOf(structure.top()),
                     "a Schottky gate (the analytic model pins E_c at the surface)");
         }
-        double t = structure.temperatureK();
         LayerState channel = states.get(states.size() - 1);
         PointState ch = channel.top();
         double pCh = ch.alongGrowth();
@@ -247,8 +230,8 @@ public final class ChargeBalanceModel {
             b.addLayer(new BarrierLayer(l.name(), l.thickness(), s.top().material().permittivityStatic(),
                     pCh - s.top().alongGrowth()));
         }
-        double ecTop = conductionEdge(structure, states.get(0).top(), options, t);
-        double ecCh = conductionEdge(structure, ch, options, t);
+        double ecTop = structure.bandEdgesAt(states.get(0).top()).conductionEv();
+        double ecCh = structure.bandEdgesAt(ch).conductionEv();
         EffectiveMasses m = ch.material().masses();
         return b.surfaceOffsetEv(ecTop - ecCh)
                 .wellPermittivity(ch.material().permittivityStatic())
@@ -278,13 +261,6 @@ public final class ChargeBalanceModel {
                 .temperature(temperatureK)
                 .build();
         return fromStructure(s);
-    }
-
-    /** E_c at a point by the full solver's line-up rule ({@link BandAlignment#edgesEv}). */
-    private static double conductionEdge(Structure s, PointState p, SolverOptions o, double t) {
-        double[] edges = new double[2];
-        o.bandAlignment().edgesEv(s, p, t, o.strainShiftsBandEdges(), edges);
-        return edges[0];
     }
 
     // ------------------------------------------------------------------ evaluation

@@ -1,5 +1,7 @@
 package org.wurtzkit.solvers.linalg;
 
+import org.wurtzkit.errors.Require;
+
 import java.util.Arrays;
 
 /**
@@ -35,19 +37,19 @@ public final class EigenPairs {
      */
     public static EigenPairs of(double[] values, double[][] vectors) {
         if (values == null) {
-            throw Checks.outside("values", "null", "(a non-null array)");
+            throw Require.invalid("values", "null", "(a non-null array)");
         }
         if (vectors == null) {
-            throw Checks.outside("vectors", "null", "(a non-null array)");
+            throw Require.invalid("vectors", "null", "(a non-null array)");
         }
         int k = values.length;
         if (vectors.length != k) {
-            throw Checks.outside("vectors.length", vectors.length, "[" + k + ", " + k + "] (one vector per value)");
+            throw Require.invalid("vectors.length", vectors.length, "[" + k + ", " + k + "] (one vector per value)");
         }
-        Checks.finite("values", values, k);
+        Require.allFinite("values", values, k);
         for (int i = 1; i < k; i++) {
             if (values[i] < values[i - 1]) {
-                throw Checks.outside("values[" + i + "]", values[i],
+                throw Require.invalid("values[" + i + "]", values[i],
                         "[" + values[i - 1] + ", +Infinity) (ascending order)");
             }
         }
@@ -56,17 +58,17 @@ public final class EigenPairs {
         for (int i = 0; i < k; i++) {
             double[] v = vectors[i];
             if (v == null) {
-                throw Checks.outside("vectors[" + i + "]", "null", "(a non-null array)");
+                throw Require.invalid("vectors[" + i + "]", "null", "(a non-null array)");
             }
             if (dim < 0) {
                 dim = v.length;
                 if (dim < 1) {
-                    throw Checks.outside("vectors[0].length", 0, "[1, " + Integer.MAX_VALUE + "]");
+                    throw Require.invalid("vectors[0].length", 0, "[1, " + Integer.MAX_VALUE + "]");
                 }
             } else if (v.length != dim) {
-                throw Checks.outside("vectors[" + i + "].length", v.length, "[" + dim + ", " + dim + "]");
+                throw Require.invalid("vectors[" + i + "].length", v.length, "[" + dim + ", " + dim + "]");
             }
-            Checks.finite("vectors[" + i + "]", v, dim);
+            Require.allFinite("vectors[" + i + "]", v, dim);
             copy[i] = v.clone();
         }
         return new EigenPairs(values.clone(), copy, dim);
@@ -99,7 +101,7 @@ public final class EigenPairs {
      * @throws IllegalArgumentException if {@code i} is out of range
      */
     public double value(int i) {
-        Checks.intInRange("i", i, 0, values.length - 1);
+        Require.inRange("i", i, 0, values.length - 1);
         return values[i];
     }
 
@@ -120,7 +122,7 @@ public final class EigenPairs {
      * @throws IllegalArgumentException if {@code i} is out of range
      */
     public double[] vector(int i) {
-        Checks.intInRange("i", i, 0, values.length - 1);
+        Require.inRange("i", i, 0, values.length - 1);
         return vectors[i].clone();
     }
 
@@ -133,8 +135,8 @@ public final class EigenPairs {
      * @throws IllegalArgumentException if an index is out of range
      */
     public double component(int i, int row) {
-        Checks.intInRange("i", i, 0, values.length - 1);
-        Checks.intInRange("row", row, 0, dimension - 1);
+        Require.inRange("i", i, 0, values.length - 1);
+        Require.inRange("row", row, 0, dimension - 1);
         return vectors[i][row];
     }
 

@@ -1,14 +1,12 @@
 package org.wurtzkit.solvers.linalg;
 
 /**
- * A real symmetric {@code n x n} matrix held in a sparse form of this package. Two forms exist:
- * {@link SymmetricTridiagonalMatrix} (two arrays) and {@link SparseSymmetricMatrix} (general
- * sparsity, built from triplets). Both are immutable.
- *
- * <p>The interface is sealed so that the eigen-solvers can rely on the storage they know; no
- * third-party matrix type appears in it.
+ * A real symmetric {@code n x n} matrix held in a sparse form, immutable. The main tree has one
+ * form, {@link SymmetricTridiagonalMatrix} (two arrays); a general sparse form and a Lanczos
+ * eigen-solver for it live beside the tests until a banded Hamiltonian (e.g. a multiband k.p
+ * valence band) needs them. No third-party matrix type appears in it.
  */
-public sealed interface SymmetricMatrix permits SymmetricTridiagonalMatrix, SparseSymmetricMatrix {
+public interface SymmetricMatrix {
 
     /**
      * Order {@code n} of the matrix.

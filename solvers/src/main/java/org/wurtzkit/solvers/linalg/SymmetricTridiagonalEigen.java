@@ -1,5 +1,8 @@
 package org.wurtzkit.solvers.linalg;
 
+import java.util.SplittableRandom;
+import org.wurtzkit.errors.Require;
+
 /**
  * Lowest eigenpairs of a real symmetric tridiagonal matrix {@code T}, given by its diagonal
  * {@code diag[0..n-1]} and off-diagonal {@code off[0..n-2]}, in O(N·k) operations (plus
@@ -42,7 +45,7 @@ package org.wurtzkit.solvers.linalg;
  * problem size, except for the result objects of the allocating methods) and are not
  * thread-safe. Results are deterministic: the pseudo-random start vectors use a fixed seed.
  */
-public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
+public final class SymmetricTridiagonalEigen {
 
     /**
      * Relative gap, with respect to the Gershgorin norm {@code max(|gl|, |gu|)}, below which two
@@ -91,7 +94,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     private double gl;
     private double gu;
     private double lastPivotMagnitude;
-    private final SplitMix64 rng = new SplitMix64();
+    private SplittableRandom rng;
 
     /** Creates a solver with empty work space (it grows on first use). */
     public SymmetricTridiagonalEigen() {
@@ -113,8 +116,8 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * @throws IllegalArgumentException on null arrays, wrong lengths, non-finite entries or NaN x
      */
     public static int countBelow(double[] diag, double[] off, double x) {
-        int n = validateMatrix(diag, off);
-        Checks.notNaN("x", x);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.notNaN("x", x);
         double s = scaleFor(maxAbs(diag, off, n));
         double maxE2 = 0.0;
         for (int i = 0; i < n - 1; i++) {
@@ -153,8 +156,8 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      *                                  finite input)
      */
     public EigenPairs lowest(double[] diag, double[] off, int k) {
-        int n = validateMatrix(diag, off);
-        Checks.intInRange("k", k, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.inRange("k", k, 1, n);
         double[] values = new double[k];
         double[][] vectors = new double[k][n];
         lowestInto(diag, off, k, values, vectors);
@@ -174,9 +177,9 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * @throws ArithmeticException      if inverse iteration fails to converge
      */
     public EigenPairs below(double[] diag, double[] off, double bound, int kMax) {
-        int n = validateMatrix(diag, off);
-        Checks.notNaN("bound", bound);
-        Checks.intInRange("kMax", kMax, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.notNaN("bound", bound);
+        Require.inRange("kMax", kMax, 1, n);
         double[] values = new double[kMax];
         double[][] vectors = new double[kMax][n];
         int m = belowInto(diag, off, bound, kMax, values, vectors);
@@ -203,8 +206,8 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      * @throws ArithmeticException      if inverse iteration fails to converge
      */
     public int lowestInto(double[] diag, double[] off, int k, double[] valuesOut, double[][] vectorsOut) {
-        int n = validateMatrix(diag, off);
-        Checks.intInRange("k", k, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.inRange("k", k, 1, n);
         validateOutputs(valuesOut, vectorsOut, k, n);
         prepare(diag, off, n);
         bisect(n, k, gu, vectorsOut != null);
@@ -228,9 +231,9 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
      */
     public int belowInto(double[] diag, double[] off, double bound, int kMax,
                          double[] valuesOut, double[][] vectorsOut) {
-        int n = validateMatrix(diag, off);
-        Checks.notNaN("bound", bound);
-        Checks.intInRange("kMax", kMax, 1, n);
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.notNaN("bound", bound);
+        Require.inRange("kMax", kMax, 1, n);
         validateOutputs(valuesOut, vectorsOut, kMax, n);
         prepare(diag, off, n);
         double s = scale;
@@ -249,15 +252,18 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
     }
 
     /**
-     * {@inheritDoc}
+     * The {@code k} lowest eigenpairs of a matrix, ascending.
      *
-     * <p>Accepts a {@link SymmetricTridiagonalMatrix}, or a {@link SparseSymmetricMatrix} whose
-     * {@link SymmetricMatrix#bandwidth() bandwidth} is at most 1.
+     * <p>Accepts a {@link SymmetricTridiagonalMatrix}, or any {@link SymmetricMatrix} whose
+     * {@link SymmetricMatrix#bandwidth() bandwidth} is at most 1 (its entries are read with
+     * {@link SymmetricMatrix#get}).
      *
+     * @param matrix a tridiagonal symmetric matrix
+     * @param k      number of eigenpairs, in {@code [1, n]}
+     * @return eigenpairs, ascending
      * @throws IllegalArgumentException if the matrix is not tridiagonal (bandwidth above 1) or
      *                                  {@code k} is out of range
      */
-    @Override
     public EigenPairs lowest(SymmetricMatrix matrix, int k) {
         double[][] t = tridiagonalArrays(matrix);
         return lowest(t[0], t[1], k);
@@ -280,50 +286,39 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
 
     // ------------------------------------------------------------------ validation
 
-    private static int validateMatrix(double[] diag, double[] off) {
-        if (diag == null) {
-            throw Checks.outside("diag", "null", "(a non-null array)");
-        }
-        int n = diag.length;
-        if (n < 1) {
-            throw Checks.outside("diag.length", 0, "[1, " + Integer.MAX_VALUE + "]");
-        }
-        Checks.length("off", off, n - 1);
-        Checks.finite("diag", diag, n);
-        Checks.finite("off", off, n - 1);
-        return n;
-    }
-
     private static void validateOutputs(double[] valuesOut, double[][] vectorsOut, int k, int n) {
-        Checks.minLength("valuesOut", valuesOut, k);
+        Require.minLength("valuesOut", valuesOut, k);
         if (vectorsOut != null) {
             if (vectorsOut.length < k) {
-                throw Checks.outside("vectorsOut.length", vectorsOut.length, "[" + k + ", " + Integer.MAX_VALUE + "]");
+                throw Require.invalid("vectorsOut.length", vectorsOut.length, "[" + k + ", " + Integer.MAX_VALUE + "]");
             }
             for (int j = 0; j < k; j++) {
-                Checks.minLength("vectorsOut[" + j + "]", vectorsOut[j], n);
+                Require.minLength("vectorsOut[" + j + "]", vectorsOut[j], n);
             }
         }
     }
 
     private static double[][] tridiagonalArrays(SymmetricMatrix matrix) {
         if (matrix == null) {
-            throw Checks.outside("matrix", "null", "(a non-null matrix)");
+            throw Require.invalid("matrix", "null", "(a non-null matrix)");
         }
         if (matrix instanceof SymmetricTridiagonalMatrix) {
             SymmetricTridiagonalMatrix t = (SymmetricTridiagonalMatrix) matrix;
             return new double[][] {t.diagRef(), t.offRef()};
         }
         if (matrix.bandwidth() > 1) {
-            throw Checks.outside("matrix bandwidth", matrix.bandwidth(),
-                    "[0, 1]: SymmetricTridiagonalEigen accepts tridiagonal matrices only; "
-                            + "use SparseLanczosEigen for wider bands");
+            throw Require.invalid("matrix bandwidth", matrix.bandwidth(),
+                    "[0, 1]: SymmetricTridiagonalEigen accepts tridiagonal matrices only");
         }
-        SparseSymmetricMatrix s = (SparseSymmetricMatrix) matrix;
-        int n = s.size();
+        int n = matrix.size();
         double[] dd = new double[n];
         double[] ee = new double[n - 1];
-        s.copyTridiagonal(dd, ee);
+        for (int i = 0; i < n; i++) {
+            dd[i] = matrix.get(i, i);
+            if (i + 1 < n) {
+                ee[i] = matrix.get(i + 1, i);
+            }
+        }
         return new double[][] {dd, ee};
     }
 
@@ -566,7 +561,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
             }
             return;
         }
-        rng.reset(SEED);
+        rng = new SplittableRandom(SEED);
         double clusterGap = CLUSTER_RELATIVE_GAP * tnorm;
         int clusterStart = 0;
         double previousShift = Double.NEGATIVE_INFINITY;
@@ -654,7 +649,7 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
             }
         }
         if (!(best <= 1e3 * resTol)) {
-            throw new ArithmeticException("inverse iteration did not converge for eigenvalue #" + j
+            throw new EigenSolverException(j, "inverse iteration did not converge for eigenvalue #" + j
                     + " = " + lambda / scale + ": relative residual " + best / tnorm
                     + " after " + MAX_INVERSE_ITERATIONS + " iterations");
         }
@@ -800,11 +795,14 @@ public final class SymmetricTridiagonalEigen implements SymmetricEigenSolver {
         }
     }
 
-    /** Fills x[0..n-1] with a unit vector of pseudo-random components (SplitMix64). */
+    /**
+     * Fills x[0..n-1] with a unit vector of pseudo-random components in (-1, 1]: the JDK's
+     * SplitMix64 generator ({@link SplittableRandom}), so the start vectors are fixed by the seed.
+     */
     private void randomUnit(double[] x, int n) {
         double sum = 0.0;
         for (int i = 0; i < n; i++) {
-            double r = rng.nextSigned();
+            double r = 2.0 * rng.nextDouble() - 1.0 + 0x1.0p-53;
             x[i] = r;
             sum += r * r;
         }

@@ -1,5 +1,7 @@
 package org.wurtzkit.solvers.linalg;
 
+import org.wurtzkit.errors.Require;
+
 /**
  * Immutable real symmetric tridiagonal matrix given by its diagonal {@code diag[0..n-1]} and its
  * off-diagonal {@code off[0..n-2]} ({@code off[i] = A[i][i+1] = A[i+1][i]}).
@@ -23,17 +25,24 @@ public final class SymmetricTridiagonalMatrix implements SymmetricMatrix {
      * @throws IllegalArgumentException on null arrays, wrong lengths or non-finite entries
      */
     public static SymmetricTridiagonalMatrix of(double[] diag, double[] off) {
-        if (diag == null) {
-            throw Checks.outside("diag", "null", "(a non-null array)");
-        }
-        int n = diag.length;
-        if (n < 1) {
-            throw Checks.outside("diag.length", 0, "[1, " + Integer.MAX_VALUE + "]");
-        }
-        Checks.length("off", off, n - 1);
-        Checks.finite("diag", diag, n);
-        Checks.finite("off", off, n - 1);
+        validate(diag, off);
         return new SymmetricTridiagonalMatrix(diag.clone(), off.clone());
+    }
+
+    /**
+     * The one check of a symmetric tridiagonal matrix given by its arrays, shared with
+     * {@link SymmetricTridiagonalEigen}.
+     *
+     * @param diag diagonal, length n &ge; 1, finite
+     * @param off  off-diagonal, length n - 1, finite
+     * @return n
+     */
+    static int validate(double[] diag, double[] off) {
+        int n = Require.nonEmpty("diag", diag);
+        Require.length("off", off, n - 1);
+        Require.allFinite("diag", diag, n);
+        Require.allFinite("off", off, n - 1);
+        return n;
     }
 
     /**
@@ -89,8 +98,8 @@ public final class SymmetricTridiagonalMatrix implements SymmetricMatrix {
     @Override
     public double get(int row, int col) {
         int n = diag.length;
-        Checks.intInRange("row", row, 0, n - 1);
-        Checks.intInRange("col", col, 0, n - 1);
+        Require.inRange("row", row, 0, n - 1);
+        Require.inRange("col", col, 0, n - 1);
         if (row == col) {
             return diag[row];
         }

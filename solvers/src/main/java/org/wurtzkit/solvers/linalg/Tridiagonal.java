@@ -1,5 +1,7 @@
 package org.wurtzkit.solvers.linalg;
 
+import org.wurtzkit.errors.Require;
+
 /**
  * Direct O(N) solution of general (not necessarily symmetric) tridiagonal linear systems by the
  * Thomas algorithm, i.e. Gaussian elimination without row interchanges specialised to a band of
@@ -52,7 +54,7 @@ public final class Tridiagonal {
      */
     public static double[] solve(double[] sub, double[] diag, double[] sup, double[] rhs) {
         if (diag == null) {
-            throw Checks.outside("diag", "null", "(a non-null array)");
+            throw Require.invalid("diag", "null", "(a non-null array)");
         }
         int n = diag.length;
         double[] x = new double[n];
@@ -84,30 +86,24 @@ public final class Tridiagonal {
      */
     public static void solve(double[] sub, double[] diag, double[] sup, double[] rhs,
                              double[] x, double[] work) {
-        if (diag == null) {
-            throw Checks.outside("diag", "null", "(a non-null array)");
-        }
-        int n = diag.length;
-        if (n < 1) {
-            throw Checks.outside("diag.length", 0, "[1, " + Integer.MAX_VALUE + "]");
-        }
-        Checks.length("sub", sub, n - 1);
-        Checks.length("sup", sup, n - 1);
-        Checks.length("rhs", rhs, n);
-        Checks.minLength("x", x, n);
-        Checks.minLength("work", work, n);
+        int n = Require.nonEmpty("diag", diag);
+        Require.length("sub", sub, n - 1);
+        Require.length("sup", sup, n - 1);
+        Require.length("rhs", rhs, n);
+        Require.minLength("x", x, n);
+        Require.minLength("work", work, n);
         if (work == x || work == rhs || work == diag || work == sub || work == sup) {
-            throw Checks.outside("work", "an array aliasing another argument",
+            throw Require.invalid("work", "an array aliasing another argument",
                     "(a scratch array distinct from all other arguments)");
         }
         if (x == diag || x == sub || x == sup) {
-            throw Checks.outside("x", "an array aliasing a matrix argument",
+            throw Require.invalid("x", "an array aliasing a matrix argument",
                     "(the rhs array or a distinct array)");
         }
-        Checks.finite("diag", diag, n);
-        Checks.finite("sub", sub, n - 1);
-        Checks.finite("sup", sup, n - 1);
-        Checks.finite("rhs", rhs, n);
+        Require.allFinite("diag", diag, n);
+        Require.allFinite("sub", sub, n - 1);
+        Require.allFinite("sup", sup, n - 1);
+        Require.allFinite("rhs", rhs, n);
 
         double p = diag[0];
         double rowScale = Math.abs(diag[0]) + (n > 1 ? Math.abs(sup[0]) : 0.0);
@@ -144,19 +140,13 @@ public final class Tridiagonal {
      * @throws IllegalArgumentException on null arrays, wrong lengths or {@code y == x}
      */
     public static void multiply(double[] sub, double[] diag, double[] sup, double[] x, double[] y) {
-        if (diag == null) {
-            throw Checks.outside("diag", "null", "(a non-null array)");
-        }
-        int n = diag.length;
-        if (n < 1) {
-            throw Checks.outside("diag.length", 0, "[1, " + Integer.MAX_VALUE + "]");
-        }
-        Checks.length("sub", sub, n - 1);
-        Checks.length("sup", sup, n - 1);
-        Checks.length("x", x, n);
-        Checks.minLength("y", y, n);
+        int n = Require.nonEmpty("diag", diag);
+        Require.length("sub", sub, n - 1);
+        Require.length("sup", sup, n - 1);
+        Require.length("x", x, n);
+        Require.minLength("y", y, n);
         if (y == x) {
-            throw Checks.outside("y", "the same array as x", "(an array distinct from x)");
+            throw Require.invalid("y", "the same array as x", "(an array distinct from x)");
         }
         if (n == 1) {
             y[0] = diag[0] * x[0];

@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.mesh;
 
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -40,5 +41,12 @@ public record MeshPolicy(double interfaceSpacing, double growthRatio, double max
         Require.inRange("mesh refinement factor", factor, 1, 64);
         // h(s)/factor = h0/factor + ((g-1)/factor) s
         return new MeshPolicy(interfaceSpacing / factor, 1 + (growthRatio - 1) / factor, maxSpacing / factor);
+    }
+
+    /** @return e.g. {@code "mesh 0.1 nm at interfaces, growing by 1.1 to at most 50 nm"} */
+    @Override
+    public String toString() {
+        return "mesh " + Decimals.format(interfaceSpacing * 1e9, "nm") + " at interfaces, growing by "
+                + Decimals.format(growthRatio) + " to at most " + Decimals.format(maxSpacing * 1e9, "nm");
     }
 }

@@ -1,7 +1,7 @@
 package org.wurtzkit.solvers.schrodinger;
 
 import java.util.Arrays;
-import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.Require;
 import org.wurtzkit.units.Constants;
 
 import org.wurtzkit.solvers.linalg.SymmetricTridiagonalEigen;
@@ -118,33 +118,33 @@ public final class EffectiveMassHamiltonian {
      */
     public static EffectiveMassHamiltonian of(double[] meshMetres, double[] massRatio) {
         if (meshMetres == null) {
-            throw outside("meshMetres", "null", "(a non-null array)");
+            throw Require.invalid("meshMetres", "null", "(a non-null array)");
         }
         int n = meshMetres.length;
         if (n < 3) {
-            throw outside("meshMetres.length", n, "[3, " + Integer.MAX_VALUE + "] (at least one interior node)");
+            throw Require.invalid("meshMetres.length", n, "[3, " + Integer.MAX_VALUE + "] (at least one interior node)");
         }
         for (int i = 0; i < n; i++) {
             double z = meshMetres[i];
             if (!(z - z == 0.0)) {
-                throw outside("meshMetres[" + i + "]", z, "(-Infinity, +Infinity) (finite values only)");
+                throw Require.invalid("meshMetres[" + i + "]", z, "(-Infinity, +Infinity) (finite values only)");
             }
             if (i > 0 && !(z > meshMetres[i - 1])) {
-                throw outside("meshMetres[" + i + "]", z, "(" + meshMetres[i - 1]
+                throw Require.invalid("meshMetres[" + i + "]", z, "(" + meshMetres[i - 1]
                         + ", +Infinity): the mesh must be strictly increasing");
             }
         }
         if (massRatio == null) {
-            throw outside("massRatio", "null", "(a non-null array)");
+            throw Require.invalid("massRatio", "null", "(a non-null array)");
         }
         if (massRatio.length != n - 1) {
-            throw outside("massRatio.length", massRatio.length, "[" + (n - 1) + ", " + (n - 1)
+            throw Require.invalid("massRatio.length", massRatio.length, "[" + (n - 1) + ", " + (n - 1)
                     + "] (one value per mesh interval)");
         }
         for (int i = 0; i < n - 1; i++) {
             double m = massRatio[i];
             if (!(m > 0.0) || Double.isInfinite(m)) {
-                throw outside("massRatio[" + i + "]", m, "(0, +Infinity)");
+                throw Require.invalid("massRatio[" + i + "]", m, "(0, +Infinity)");
             }
         }
         return new EffectiveMassHamiltonian(meshMetres.clone(), massRatio.clone());
@@ -208,7 +208,7 @@ public final class EffectiveMassHamiltonian {
     public BoundStates lowest(double[] potentialEv, int k) {
         checkPotential(potentialEv);
         if (k < 1 || k > unknowns) {
-            throw outside("k", k, "[1, " + unknowns + "]");
+            throw Require.invalid("k", k, "[1, " + unknowns + "]");
         }
         ensureWork(k);
         fillDiagonal(potentialEv);
@@ -255,23 +255,23 @@ public final class EffectiveMassHamiltonian {
             double[][] wavefunctionsOut) {
         checkBelow(potentialEv, energyBoundEv, kMax);
         if (energiesOut == null) {
-            throw outside("energiesOut", "null", "(a non-null array)");
+            throw Require.invalid("energiesOut", "null", "(a non-null array)");
         }
         if (energiesOut.length < kMax) {
-            throw outside("energiesOut.length", energiesOut.length,
+            throw Require.invalid("energiesOut.length", energiesOut.length,
                     "[" + kMax + ", " + Integer.MAX_VALUE + "] (at least kMax)");
         }
         if (wavefunctionsOut == null) {
-            throw outside("wavefunctionsOut", "null", "(a non-null array)");
+            throw Require.invalid("wavefunctionsOut", "null", "(a non-null array)");
         }
         if (wavefunctionsOut.length < kMax) {
-            throw outside("wavefunctionsOut.length", wavefunctionsOut.length,
+            throw Require.invalid("wavefunctionsOut.length", wavefunctionsOut.length,
                     "[" + kMax + ", " + Integer.MAX_VALUE + "] (at least kMax rows)");
         }
         for (int j = 0; j < kMax; j++) {
             double[] row = wavefunctionsOut[j];
             if (row != null && row.length != nodes) {
-                throw outside("wavefunctionsOut[" + j + "].length", row.length,
+                throw Require.invalid("wavefunctionsOut[" + j + "].length", row.length,
                         "[" + nodes + ", " + nodes + "] (one value per mesh node, or a null row)");
             }
         }
@@ -302,25 +302,25 @@ public final class EffectiveMassHamiltonian {
     private void checkBelow(double[] potentialEv, double energyBoundEv, int kMax) {
         checkPotential(potentialEv);
         if (Double.isNaN(energyBoundEv)) {
-            throw outside("energyBoundEv", energyBoundEv, "[-Infinity, +Infinity] (not NaN)");
+            throw Require.invalid("energyBoundEv", energyBoundEv, "[-Infinity, +Infinity] (not NaN)");
         }
         if (kMax < 1 || kMax > unknowns) {
-            throw outside("kMax", kMax, "[1, " + unknowns + "]");
+            throw Require.invalid("kMax", kMax, "[1, " + unknowns + "]");
         }
     }
 
     private void checkPotential(double[] potentialEv) {
         if (potentialEv == null) {
-            throw outside("potentialEv", "null", "(a non-null array)");
+            throw Require.invalid("potentialEv", "null", "(a non-null array)");
         }
         if (potentialEv.length != nodes) {
-            throw outside("potentialEv.length", potentialEv.length, "[" + nodes + ", " + nodes
+            throw Require.invalid("potentialEv.length", potentialEv.length, "[" + nodes + ", " + nodes
                     + "] (one value per mesh node)");
         }
         for (int i = 0; i < nodes; i++) {
             double v = potentialEv[i];
             if (!(v - v == 0.0)) {
-                throw outside("potentialEv[" + i + "]", v, "(-Infinity, +Infinity) (finite values only)");
+                throw Require.invalid("potentialEv[" + i + "]", v, "(-Infinity, +Infinity) (finite values only)");
             }
         }
     }
@@ -361,9 +361,5 @@ public final class EffectiveMassHamiltonian {
                 p[q + 1] = u[q] * inverseSqrtWidth[q];
             }
         }
-    }
-
-    private static IllegalArgumentException outside(String name, Object value, String range) {
-        return new InvalidParameterException(name, String.valueOf(value), range);
     }
 }

@@ -3,6 +3,7 @@ package org.wurtzkit.solvers.sp;
 import java.util.List;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -25,10 +26,22 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
         public Automatic {
             Require.inRange("quantum window extension around an interface (m)", extension, 1e-9, 1e-6);
         }
+
+        /** @return e.g. {@code "automatic quantum windows, 40 nm on both sides of every interface"} */
+        @Override
+        public String toString() {
+            return "automatic quantum windows, " + Decimals.format(extension * 1e9, "nm")
+                    + " on both sides of every interface";
+        }
     }
 
     /** Fully classical electrons (no Schroedinger equation). */
     record None() implements QuantumRegion {
+        /** @return {@code "no quantum region (classical electrons)"} */
+        @Override
+        public String toString() {
+            return "no quantum region (classical electrons)";
+        }
     }
 
     /**
@@ -77,6 +90,12 @@ public sealed interface QuantumRegion permits QuantumRegion.Automatic, QuantumRe
          */
         public static Window nm(double topNm, double bottomNm) {
             return new Window(topNm * Units.NM, bottomNm * Units.NM);
+        }
+
+        /** @return e.g. {@code "window 0 to 40 nm"} */
+        @Override
+        public String toString() {
+            return "window " + Decimals.format(depthTop * 1e9) + " to " + Decimals.format(depthBottom * 1e9, "nm");
         }
     }
 

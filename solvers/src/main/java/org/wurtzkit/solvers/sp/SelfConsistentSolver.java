@@ -2,7 +2,9 @@ package org.wurtzkit.solvers.sp;
 
 import java.util.Arrays;
 import java.util.Locale;
+import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.solvers.linalg.EigenSolverException;
 import org.wurtzkit.structure.Structure;
 
 /**
@@ -195,7 +197,7 @@ public final class SelfConsistentSolver {
             // 1. subbands of every window for the current potential
             try {
                 qs.update(d, phi);
-            } catch (ArithmeticException | IllegalArgumentException e) {
+            } catch (EigenSolverException | InvalidParameterException e) {
                 throw eigenFailure(d, phi, it, newtonSteps, history, e);
             }
             System.arraycopy(phi, 0, ref, 0, d.n);

@@ -3,7 +3,11 @@ package org.wurtzkit.solvers.sp;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -16,6 +20,9 @@ import org.wurtzkit.units.Units;
  * ({@link #electricField()}) have one value per interval between nodes, at {@link #cellMidpoints()}.
  */
 public final class Solution {
+    /** Subbands listed one per line by {@link #toString()}; the rest are summed on one line. */
+    private static final int SUBBANDS_SHOWN = 4;
+
     private final Structure structure;
     private final double[] depth;
     private final double[] potential;
@@ -149,7 +156,8 @@ public final class Solution {
         for (double[] a : new double[][] {potential, ec, ev, n, p, donors, acceptors, charge, field}) {
             for (double v : a) {
                 if (!Double.isFinite(v)) {
-                    throw new IllegalStateException("non-finite value in a solution; please report this structure: "
+                    throw new WurtzkitException(ErrorKind.NON_FINITE_RESULT,
+                            "non-finite value in a solution; please report this structure: "
                             + structure);
                 }
             }
@@ -205,9 +213,9 @@ public final class Solution {
         return holeFermiEv;
     }
 
-    /** {@return band diagram for plotting: rows depth (m), E_c (eV), E_v (eV), both sides of every step} */
-    public double[][] bandDiagram() {
-        return new double[][] {plotDepth.clone(), plotEc.clone(), plotEv.clone()};
+    /** {@return the band diagram for plotting: depth, E_c and E_v with both sides of every step} */
+    public BandDiagram bandDiagram() {
+        return new BandDiagram(plotDepth, plotEc, plotEv);
     }
 
     /** {@return electron density (m^-3), box-averaged; subband electrons inside windows} */
@@ -253,13 +261,13 @@ public final class Solution {
         return subbands;
     }
 
-    /** {@return the quantum windows [top, bottom] depth (m)} */
-    public double[][] quantumWindows() {
-        double[][] c = new double[windows.length][];
-        for (int i = 0; i < c.length; i++) {
-            c[i] = windows[i].clone();
+    /** {@return the quantum windows as resolved onto the mesh, shallowest first (empty for a classical solve)} */
+    public List<DepthRange> quantumWindows() {
+        List<DepthRange> c = new ArrayList<>(windows.length);
+        for (double[] w : windows) {
+            c.add(new DepthRange(w[0], w[1]));
         }
-        return c;
+        return Collections.unmodifiableList(c);
     }
 
     /** {@return electron sheet density held in the subbands of each window (m^-2)} */
@@ -344,5 +352,56 @@ public final class Solution {
     /** {@return how the solve converged} */
     public ConvergenceRecord convergence() {
         return record;
+    }
+
+    /**
+     * A summary to read in jshell or a notebook: the bias, temperature and mesh; the 2DEG sheet
+     * density and the holes; one line for each of the first {@value #SUBBANDS_SHOWN} subbands (in
+     * the order of {@link #subbands()}) and one for the rest together; the convergence record; and a
+     * warning when the subband limit was reached. For example:
+     *
+     * <pre>
+     * Solution (Schottky gate, barrier 1 eV, bias 0 V; 300 K; 412 nodes over 1825 nm):
+     *   n_s = 8.91e12 cm^-2 (2DEG, 2 subbands in 1 window), holes 0 cm^-2
+     *   subband 0 of window 0: E - E_F = -0.152 eV, 6.12e12 cm^-2, in-plane mass 0.2 m0
+     *   ...
+     *   ... 14 more subbands, 2.1e10 cm^-2 together
+     *   converged after 6 iterations (34 Newton steps), last change 4.1e-7 V
+     * </pre>
+     *
+     * @return the summary (lines separated by '\n')
+     */
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("Solution (").append(structure.top()).append("; ")
+                .append(Decimals.format(structure.temperatureK(), "K")).append("; ").append(depth.length)
+                .append(" nodes over ").append(Decimals.format(Units.mToNm(depth[depth.length - 1]), "nm"))
+                .append("):\n");
+        sb.append("  n_s = ").append(Decimals.format(sheetDensityPerCm2(), "cm^-2"));
+        if (windows.length == 0) {
+            sb.append(" (all electrons of the stack, no quantum window)");
+        } else {
+            sb.append(" (2DEG, ").append(subbands.size()).append(subbands.size() == 1 ? " subband" : " subbands")
+                    .append(" in ").append(windows.length).append(windows.length == 1 ? " window)" : " windows)");
+        }
+        sb.append(", holes ").append(Decimals.format(Units.perM2ToPerCm2(holeSheet), "cm^-2")).append('\n');
+        int shown = Math.min(subbands.size(), SUBBANDS_SHOWN);
+        for (int k = 0; k < shown; k++) {
+            sb.append("  ").append(subbands.get(k)).append('\n');
+        }
+        if (shown < subbands.size()) {
+            double rest = 0;
+            for (int k = shown; k < subbands.size(); k++) {
+                rest += subbands.get(k).sheetDensityPerCm2();
+            }
+            int more = subbands.size() - shown;
+            sb.append("  ... ").append(more).append(more == 1 ? " more subband, " : " more subbands, ")
+                    .append(Decimals.format(rest, "cm^-2")).append(" together\n");
+        }
+        sb.append("  ").append(record);
+        if (subbandLimitReached) {
+            sb.append("\n  warning: a quantum window reached the subband limit; its density is too low");
+        }
+        return sb.toString();
     }
 }

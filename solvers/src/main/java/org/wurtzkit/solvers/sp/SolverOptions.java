@@ -17,17 +17,16 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
  * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
- * @param bandAlignment         band line-up; default {@link BandAlignment#valenceBandTable()}
- * @param strainShiftsBandEdges whether deformation potentials shift the band edges; default false,
- *                              because the deformation potentials of the built-in sets are
- *                              recalled values whose sign convention was not verified
+ *
+ * <p>Physical model choices (polarization model, band line-up, strain shifts of the band edges)
+ * live on the {@link org.wurtzkit.structure.Structure}; these options are numerics only.
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
         double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
-        HoleFermiLevel holeFermiLevel, BandAlignment bandAlignment, boolean strainShiftsBandEdges) {
+        HoleFermiLevel holeFermiLevel) {
 
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
-            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE, BandAlignment.valenceBandTable(), false);
+            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE);
 
     /** Validates every field. */
     public SolverOptions {
@@ -41,7 +40,6 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         Require.inRange("maxSubbands", maxSubbands, 1, 2000);
         Require.inRange("subbandCutoffKT", subbandCutoffKT, 1, 200);
         Require.nonNull("hole Fermi level", holeFermiLevel);
-        Require.nonNull("band alignment", bandAlignment);
     }
 
     /** {@return the defaults listed in the class documentation} */
@@ -52,72 +50,60 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     /** @param v tolerance (V) @return a copy */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v outer iteration budget @return a copy */
     public SolverOptions withMaxIterations(int v) {
         return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v Newton tolerance (V) @return a copy */
     public SolverOptions withNewtonTolerance(double v) {
         return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v Newton step budget per Poisson solve @return a copy */
     public SolverOptions withMaxNewtonIterations(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v largest Newton update (V) @return a copy */
     public SolverOptions withMaxNewtonStep(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v mesh policy @return a copy */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v quantum region @return a copy */
     public SolverOptions withQuantumRegion(QuantumRegion v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                maxSubbands, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v most subbands per window @return a copy */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, v, subbandCutoffKT, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                quantumRegion, v, subbandCutoffKT, holeFermiLevel);
     }
 
     /** @param v subband cut-off above E_F in kT @return a copy */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, v, holeFermiLevel, bandAlignment, strainShiftsBandEdges);
+                quantumRegion, maxSubbands, v, holeFermiLevel);
     }
 
     /** @param v holes' quasi-Fermi level @return a copy */
     public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, v, bandAlignment, strainShiftsBandEdges);
-    }
-
-    /** @param v band alignment @return a copy */
-    public SolverOptions withBandAlignment(BandAlignment v) {
-        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, v, strainShiftsBandEdges);
-    }
-
-    /** @param v whether strain shifts the band edges @return a copy */
-    public SolverOptions withStrainShiftsBandEdges(boolean v) {
-        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel, bandAlignment, v);
+                quantumRegion, maxSubbands, subbandCutoffKT, v);
     }
 }

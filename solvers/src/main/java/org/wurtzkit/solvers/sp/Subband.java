@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.sp;
 
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -29,5 +30,13 @@ public record Subband(int window, int index, double energyEv, double[] wavefunct
     /** {@return occupation (cm^-2)} */
     public double sheetDensityPerCm2() {
         return Units.perM2ToPerCm2(sheetDensity);
+    }
+
+    /** @return e.g. {@code "subband 0 of window 0: E - E_F = -0.152 eV, 6.12e12 cm^-2, in-plane mass 0.2 m0"} */
+    @Override
+    public String toString() {
+        return "subband " + index + " of window " + window + ": E - E_F = " + Decimals.format(energyEv, "eV") + ", "
+                + Decimals.format(sheetDensityPerCm2(), "cm^-2") + ", in-plane mass "
+                + Decimals.format(inPlaneMass, "m0");
     }
 }

@@ -39,20 +39,16 @@ public final class Axis {
      * @param unit   unit
      * @param from   first value, finite
      * @param to     last value, finite
-     * @param points number of equally spaced values, &ge; 1 (1 gives just {@code from})
+     * @param points number of equally spaced values, &ge; 1 (1 gives just {@code from}); each is the
+     *               double nearest to the decimal value from + (to - from) i / (points - 1), so
+     *               that, e.g., 0.3 is 0.3 and not 0.30000000000000004
      * @return the axis
      */
     public static Axis linear(String name, String unit, double from, double to, int points) {
         Require.finite("first value of axis " + name, from);
         Require.finite("last value of axis " + name, to);
         Require.inRange("number of values of axis " + name, points, 1, 1_000_000);
-        double[] v = new double[points];
-        for (int i = 0; i < points; i++) {
-            v[i] = points == 1 ? from : from + (to - from) * i / (points - 1);
-        }
-        if (points > 1) {
-            v[points - 1] = to;
-        }
+        double[] v = points == 1 ? new double[] {from} : Grids.linear(from, to, points);
         return new Axis(Column.of(name, unit), v);
     }
 
@@ -89,8 +85,9 @@ public final class Axis {
         return values[i];
     }
 
+    /** @return e.g. {@code "Axis[al_fraction: 0.2, 0.25, 0.3]"}, all values when there are at most 8 */
     @Override
     public String toString() {
-        return "Axis[" + column.header() + " " + Arrays.toString(values) + "]";
+        return "Axis[" + column.name() + ": " + Grids.list(values, column.unit()) + "]";
     }
 }

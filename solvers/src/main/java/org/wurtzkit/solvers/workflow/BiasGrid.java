@@ -42,7 +42,9 @@ public final class BiasGrid {
 
     /**
      * Equally spaced biases from {@code fromV} to {@code toV}, both included; the sweep runs in that
-     * order (from may be above to).
+     * order (from may be above to). Each bias is the double nearest to the decimal value
+     * from + (to - from) i / (points - 1), taken from the shortest decimal forms of from and to, so
+     * {@code linear(0, 1, 11)} holds 0.3, not 0.30000000000000004.
      *
      * @param fromV  first bias (V), finite
      * @param toV    last bias (V), finite, different from fromV
@@ -57,16 +59,7 @@ public final class BiasGrid {
             throw new InvalidParameterException("last gate bias (V)", Double.toString(toV),
                     "any finite value other than the first bias " + fromV + " (empty bias range)");
         }
-        double[] v = new double[points];
-        double span = toV - fromV;
-        for (int i = 0; i < points; i++) {
-            // the span of two finite biases of opposite signs may overflow; then weigh the two ends
-            // (each product is at most its end, and they have opposite signs)
-            double t = (double) i / (points - 1);
-            v[i] = Double.isFinite(span) ? fromV + span * i / (points - 1) : fromV * (1 - t) + toV * t;
-        }
-        v[points - 1] = toV;
-        return new BiasGrid(v);
+        return new BiasGrid(Grids.linear(fromV, toV, points));
     }
 
     /** {@return the biases (V), a copy} */
@@ -97,8 +90,9 @@ public final class BiasGrid {
         return Arrays.hashCode(values);
     }
 
+    /** @return e.g. {@code "BiasGrid[11 gate biases: 0, 0.1, 0.2, ..., 1 V]"}, all biases when there are at most 8 */
     @Override
     public String toString() {
-        return "BiasGrid[" + values.length + " points, " + values[0] + " V to " + values[values.length - 1] + " V]";
+        return "BiasGrid[" + values.length + " gate biases: " + Grids.list(values, "V") + "]";
     }
 }

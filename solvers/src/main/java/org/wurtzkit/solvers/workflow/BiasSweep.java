@@ -73,7 +73,7 @@ public final class BiasSweep {
             at[i] = structure.withTop(gate.withBias(grid.get(i)));
         }
         Solution[] solutions = new Solution[n];
-        String[] failures = new String[n];
+        PointFailure.Reason[] failures = new PointFailure.Reason[n];
         Continuation.solveInOrder(solver, at, grid.values(), solutions, failures, "bias sweep");
         return new BiasSweepResult(structure, grid, solutions, failures);
     }

@@ -8,6 +8,7 @@ import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -34,11 +35,12 @@ public final class BiasSweepResult implements CsvTable {
     private final double[] allElectrons; // m^-2
     private final int[] iterations;
     private final Solution[] solutions;
+    private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
     private final String[] status;
     private final CapacitanceVoltage cv;
 
-    BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, String[] failureMessages) {
+    BiasSweepResult(Structure structure, BiasGrid grid, Solution[] solutions, PointFailure.Reason[] reasons) {
         int n = grid.size();
         this.structure = structure;
         this.bias = grid.values();
@@ -48,6 +50,7 @@ public final class BiasSweepResult implements CsvTable {
         this.allElectrons = new double[n];
         this.iterations = new int[n];
         this.status = new String[n];
+        this.failureAt = new PointFailure[n];
         List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             Solution s = solutions[i];
@@ -56,8 +59,9 @@ public final class BiasSweepResult implements CsvTable {
                 gateCharge[i] = Double.NaN;
                 allElectrons[i] = Double.NaN;
                 iterations[i] = -1;
-                f.add(new PointFailure(i, "gate bias = " + bias[i] + " V", failureMessages[i]));
-                status[i] = "failed: " + failureMessages[i];
+                failureAt[i] = reasons[i].at(i, "gate bias = " + bias[i] + " V");
+                f.add(failureAt[i]);
+                status[i] = "failed: " + reasons[i].message();
             } else {
                 sheet[i] = s.sheetDensityPerCm2();
                 gateCharge[i] = s.gateCharge();
@@ -116,10 +120,18 @@ public final class BiasSweepResult implements CsvTable {
 
     /**
      * @param i point index
-     * @return true if point i converged
+     * @return true if point i was computed (the one verb of every workflow result)
      */
-    public boolean converged(int i) {
-        return solutions[i] != null;
+    public boolean succeeded(int i) {
+        return failureAt[i] == null;
+    }
+
+    /**
+     * @param i point index
+     * @return why point i failed (with the kind of failure), or empty
+     */
+    public Optional<PointFailure> failure(int i) {
+        return Optional.ofNullable(failureAt[i]);
     }
 
     /**
@@ -221,5 +233,27 @@ public final class BiasSweepResult implements CsvTable {
         return List.of(CsvTable.cell(bias[i]), CsvTable.cell(sheet[i]),
                 CsvTable.cell(gateCharge[i]), CsvTable.cell(Units.perM2ToPerCm2(allElectrons[i])),
                 iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+    }
+
+    /**
+     * @return a summary line (number of biases, their range, how many converged, the n_s range) and
+     *         a {@link #preview(int) preview} of the table, e.g.
+     *         {@code "Bias sweep: 31 gate biases from 0 V to -6 V, 31 converged; n_s from 0 to 8.91e12 cm^-2"}
+     */
+    @Override
+    public String toString() {
+        double lo = Double.NaN;
+        double hi = Double.NaN;
+        for (double v : sheet) {
+            if (!Double.isNaN(v)) {
+                lo = Double.isNaN(lo) ? v : Math.min(lo, v);
+                hi = Double.isNaN(hi) ? v : Math.max(hi, v);
+            }
+        }
+        return "Bias sweep: " + bias.length + " gate biases from " + Decimals.format(bias[0], "V") + " to "
+                + Decimals.format(bias[bias.length - 1], "V") + ", " + (bias.length - failures.size()) + " converged"
+                + (failures.isEmpty() ? "" : ", " + failures.size() + " failed")
+                + (Double.isNaN(lo) ? "" : "; n_s from " + Decimals.format(lo) + " to " + Decimals.format(hi, "cm^-2"))
+                + "\n" + preview(10);
     }
 }

@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.List;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
 
 /**
@@ -133,5 +134,25 @@ public final class CapacitanceVoltage implements CsvTable {
         return List.of(CsvTable.cell(bias[k]), CsvTable.cell(bias[k + 1]), CsvTable.cell(0.5 * (bias[k] + bias[k + 1])),
                 CsvTable.cell(c), CsvTable.cell(c / Units.UF_PER_CM2),
                 Double.isNaN(c) ? "failed: an end point of the interval did not converge" : "ok");
+    }
+
+    /**
+     * @return a summary line (intervals, bias range, capacitance range in &mu;F/cm&sup2;) and a
+     *         {@link #preview(int) preview} of the table
+     */
+    @Override
+    public String toString() {
+        double lo = Double.NaN;
+        double hi = Double.NaN;
+        for (double c : capacitanceMicroFaradPerCm2()) {
+            if (!Double.isNaN(c)) {
+                lo = Double.isNaN(lo) ? c : Math.min(lo, c);
+                hi = Double.isNaN(hi) ? c : Math.max(hi, c);
+            }
+        }
+        return "C-V: " + capacitance.length + " bias intervals from " + Decimals.format(bias[0], "V") + " to "
+                + Decimals.format(bias[bias.length - 1], "V")
+                + (Double.isNaN(lo) ? "" : ", C from " + Decimals.format(lo) + " to " + Decimals.format(hi, "uF/cm^2"))
+                + "\n" + preview(10);
     }
 }

@@ -49,4 +49,10 @@ public record Column(String name, String unit) {
     public String header() {
         return unit.isEmpty() ? name : name + "_" + unit;
     }
+
+    /** @return the name with its unit in brackets, e.g. {@code "gate_bias (V)"}, or the bare name */
+    @Override
+    public String toString() {
+        return unit.isEmpty() ? name : name + " (" + unit + ")";
+    }
 }

@@ -3,6 +3,8 @@ package org.wurtzkit.solvers.workflow;
 import java.util.Arrays;
 import java.util.Locale;
 import java.util.concurrent.CancellationException;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
@@ -31,13 +33,13 @@ final class Continuation {
      * @param at        the structures, in solving order
      * @param parameter the sweep parameter of each structure (bias or temperature), distinct
      * @param solutions output: converged solutions (null where failed)
-     * @param failures  output: failure messages (null where converged)
+     * @param failures  output: why each point failed, saying what was tried (null where converged)
      * @param what      the sweep's name for the interruption message, e.g. "bias sweep"
      * @throws CancellationException if the calling thread is interrupted (its flag stays set); the
      *                               points before it are solved, the rest are not
      */
     static void solveInOrder(SelfConsistentSolver solver, Structure[] at, double[] parameter, Solution[] solutions,
-            String[] failures, String what) {
+            PointFailure.Reason[] failures, String what) {
         Solution lastSuccess = null;
         for (int i = 0; i < at.length; i++) {
             if (Thread.currentThread().isInterrupted()) {
@@ -59,18 +61,19 @@ final class Continuation {
                     // a cold start, or the last success without a predictor
                     solutions[i] = solver.solve(at[i], lastSuccess);
                 }
-            } catch (RuntimeException first) {
+            } catch (InvalidParameterException | WurtzkitException first) {
                 if (lastSuccess == null) {
-                    failures[i] = PointFailure.describe(first);
+                    failures[i] = PointFailure.Reason.of(first);
                 } else if (i > 0 && solutions[i - 1] == null) {
-                    failures[i] = "continued from the last converged point: " + PointFailure.describe(first)
-                            + " (no cold retry: the point before failed too)";
+                    failures[i] = new PointFailure.Reason(first.kind(), "continued from the last converged point: "
+                            + PointFailure.Reason.of(first).message() + " (no cold retry: the point before failed too)");
                 } else {
                     try {
                         solutions[i] = solver.solve(at[i]);
-                    } catch (RuntimeException cold) {
-                        failures[i] = "continued: " + PointFailure.describe(first) + "; cold start: "
-                                + PointFailure.describe(cold);
+                    } catch (InvalidParameterException | WurtzkitException cold) {
+                        failures[i] = new PointFailure.Reason(cold.kind(), "continued: "
+                                + PointFailure.Reason.of(first).message() + "; cold start: "
+                                + PointFailure.Reason.of(cold).message());
                     }
                 }
             }

@@ -1,6 +1,8 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -62,6 +64,36 @@ public interface CsvTable {
         try (Writer w = Files.newBufferedWriter(path, StandardCharsets.UTF_8)) {
             writeCsv(w);
         }
+    }
+
+    /**
+     * The table as CSV text, exactly what {@link #writeCsv(Writer)} writes.
+     *
+     * @return the CSV text, header line first, lines ended by "\r\n"
+     */
+    default String toCsvString() {
+        StringWriter w = new StringWriter();
+        try {
+            writeCsv(w);
+        } catch (IOException e) {
+            // a StringWriter does not throw; Commons CSV declares the exception for other writers
+            throw new UncheckedIOException(e);
+        }
+        return w.toString();
+    }
+
+    /**
+     * The table as aligned text to read in jshell or a notebook: the header (names with units),
+     * then the rows, each number shortened to six significant digits ({@link
+     * org.wurtzkit.units.Decimals}); a long table shows its first and last rows and says how many
+     * it leaves out. For reading only: CSV keeps every digit.
+     *
+     * @param maxRows most rows shown, &ge; 2
+     * @return the text, lines separated by '\n', without a final line break
+     */
+    default String preview(int maxRows) {
+        Require.inRange("rows shown in a preview", maxRows, 2, Integer.MAX_VALUE);
+        return TableText.render(this, maxRows);
     }
 
     /**

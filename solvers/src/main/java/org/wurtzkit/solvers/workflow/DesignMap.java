@@ -2,8 +2,10 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.structure.Structure;
 
@@ -27,9 +29,11 @@ import org.wurtzkit.structure.Structure;
  * independently of every other point, and its result is stored in its own slot; so the map is the
  * same, bit for bit, for any thread count (given a deterministic factory and evaluator).
  *
- * <p><b>Failures.</b> If the factory or the evaluation throws (e.g. an invalid composition, or
- * {@link org.wurtzkit.solvers.sp.NotConvergedException}), the point is recorded as failed with the
- * exception's type and message ({@link DesignMapResult#failure(int)}) and the map goes on.
+ * <p><b>Failures.</b> If the factory or the evaluation throws a library exception (e.g. an invalid
+ * composition, or {@link org.wurtzkit.solvers.sp.NotConvergedException}), the point is recorded as
+ * failed with the exception's kind, type and message ({@link DesignMapResult#failure(int)}) and the
+ * map goes on. Any other exception (a null pointer, an index out of bounds) is a defect and
+ * propagates.
  *
  * <p>A configured map is immutable and may be run several times, also concurrently.
  */
@@ -118,11 +122,12 @@ public final class DesignMap {
         ParallelPoints.Outcome[] out = ParallelPoints.run(n, threads, i -> {
             Structure s = factory.at(parameters(i));
             if (s == null) {
-                throw new IllegalStateException("the structure factory returned null");
+                throw new WurtzkitException(ErrorKind.INVALID_CALLBACK_RESULT, "the structure factory returned null");
             }
             double[] v = evaluator.evaluate(s, solver);
             if (v == null || v.length != width) {
-                throw new IllegalStateException("the evaluator returned " + (v == null ? "null" : v.length + " values")
+                throw new WurtzkitException(ErrorKind.INVALID_CALLBACK_RESULT,
+                        "the evaluator returned " + (v == null ? "null" : v.length + " values")
                         + ", expected " + width);
             }
             return v.clone();

@@ -1,11 +1,13 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 
 /**
  * The result of a {@link DesignMap}: for every point (row-major, last axis fastest) its axis
@@ -21,7 +23,7 @@ public final class DesignMapResult implements CsvTable {
     private final List<Column> columns;
     private final double[][] parameters;
     private final double[][] values;
-    private final String[] failures;
+    private final PointFailure[] failureAt;
     private final List<PointFailure> failureList;
 
     DesignMapResult(List<Axis> axes, List<Column> quantities, double[][] parameters, ParallelPoints.Outcome[] out) {
@@ -37,7 +39,7 @@ public final class DesignMapResult implements CsvTable {
         int n = out.length;
         this.parameters = parameters;
         this.values = new double[n][];
-        this.failures = new String[n];
+        this.failureAt = new PointFailure[n];
         List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             if (out[i].values() != null) {
@@ -46,8 +48,8 @@ public final class DesignMapResult implements CsvTable {
                 double[] nan = new double[quantities.size()];
                 java.util.Arrays.fill(nan, Double.NaN);
                 values[i] = nan;
-                failures[i] = out[i].failure();
-                f.add(new PointFailure(i, describe(i), failures[i]));
+                failureAt[i] = out[i].failure().at(i, describe(i));
+                f.add(failureAt[i]);
             }
         }
         this.failureList = Collections.unmodifiableList(f);
@@ -145,18 +147,18 @@ public final class DesignMapResult implements CsvTable {
 
     /**
      * @param i point index
-     * @return true if point i was computed
+     * @return true if point i was computed (the one verb of every workflow result)
      */
     public boolean succeeded(int i) {
-        return failures[i] == null;
+        return failureAt[i] == null;
     }
 
     /**
      * @param i point index
-     * @return why point i failed, or empty
+     * @return why point i failed (with the kind of failure), or empty
      */
-    public Optional<String> failure(int i) {
-        return Optional.ofNullable(failures[i]);
+    public Optional<PointFailure> failure(int i) {
+        return Optional.ofNullable(failureAt[i]);
     }
 
     /** {@return every failed point, in map order} */
@@ -183,7 +185,30 @@ public final class DesignMapResult implements CsvTable {
         for (double v : values[i]) {
             r.add(CsvTable.cell(v));
         }
-        r.add(failures[i] == null ? "ok" : "failed: " + failures[i]);
+        r.add(failureAt[i] == null ? "ok" : "failed: " + failureAt[i].message());
         return r;
+    }
+
+    /**
+     * @return a summary line (each axis with its size and range, the quantities, how many points
+     *         failed) and a {@link #preview(int) preview} of the table
+     */
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("Design map: ").append(size()).append(" points over ");
+        for (int a = 0; a < axes.size(); a++) {
+            Axis ax = axes.get(a);
+            if (a > 0) {
+                sb.append(" x ");
+            }
+            double[] v = ax.values();
+            double lo = Arrays.stream(v).min().orElseThrow();
+            double hi = Arrays.stream(v).max().orElseThrow();
+            sb.append(ax.name()).append(" (").append(v.length).append(v.length == 1 ? " value, " : " values, ")
+                    .append(Decimals.format(lo)).append(" to ").append(Decimals.format(hi, ax.unit())).append(')');
+        }
+        sb.append("; ").append(quantities.stream().map(Column::header).toList()).append(", ")
+                .append(failureList.size()).append(" failed");
+        return sb.append('\n').append(preview(10)).toString();
     }
 }

@@ -11,6 +11,8 @@ import java.util.concurrent.Future;
 import java.util.concurrent.ThreadFactory;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.WurtzkitException;
 
 /**
  * Runs independent points on a fixed number of threads. Each point's result lands in its own
@@ -21,14 +23,18 @@ final class ParallelPoints {
     private ParallelPoints() {
     }
 
-    /** One point's computation; a RuntimeException marks the point failed. */
+    /**
+     * One point's computation; a library exception ({@link InvalidParameterException} or
+     * {@link WurtzkitException}) marks the point failed, any other exception is a defect and
+     * propagates.
+     */
     @FunctionalInterface
     interface Task {
         double[] run(int index);
     }
 
-    /** A point's values, or (values null) its failure message. */
-    record Outcome(double[] values, String failure) {
+    /** A point's values, or (values null) why it failed. */
+    record Outcome(double[] values, PointFailure.Reason failure) {
     }
 
     private static final AtomicInteger POOL_COUNT = new AtomicInteger();
@@ -115,7 +121,7 @@ final class ParallelPoints {
             if (cause instanceof Error err) {
                 throw err;
             }
-            throw new IllegalStateException(cause);
+            throw new AssertionError("a workflow task threw a checked exception", cause);
         } finally {
             exec.shutdownNow();
         }
@@ -149,10 +155,8 @@ final class ParallelPoints {
     private static Outcome one(Task task, int i) {
         try {
             return new Outcome(task.run(i), null);
-        } catch (CancellationException e) {
-            throw e; // an interrupted inner workflow (e.g. the sweep of a spread member) cancels this one
-        } catch (RuntimeException e) {
-            return new Outcome(null, PointFailure.describe(e));
+        } catch (InvalidParameterException | WurtzkitException e) {
+            return new Outcome(null, PointFailure.Reason.of(e));
         }
     }
 }

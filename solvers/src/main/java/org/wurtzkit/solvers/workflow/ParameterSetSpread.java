@@ -2,8 +2,10 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.List;
 import java.util.function.Function;
+import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
@@ -88,7 +90,7 @@ public final class ParameterSetSpread {
         ParallelPoints.Outcome[] out = ParallelPoints.run(members.size(), threads, i -> {
             Structure s = factory.apply(members.get(i));
             if (s == null) {
-                throw new IllegalStateException("the structure factory returned null");
+                throw new WurtzkitException(ErrorKind.INVALID_CALLBACK_RESULT, "the structure factory returned null");
             }
             double ns = solver.solve(s).sheetDensityPerCm2();
             double vth = threshold.thresholdVoltage(s, sweep);

@@ -11,7 +11,10 @@ import org.wurtzkit.structure.Structure;
 /**
  * What a design map computes at each point. Implementations must be thread-safe and
  * deterministic (the same structure must always give the same numbers), so that a parallel map
- * equals a serial one bit for bit. An exception thrown by {@link #evaluate} marks the point failed.
+ * equals a serial one bit for bit. A library exception thrown by {@link #evaluate}
+ * ({@link org.wurtzkit.errors.InvalidParameterException} or
+ * {@link org.wurtzkit.errors.WurtzkitException}) marks the point failed; any other exception is a
+ * defect and ends the map.
  */
 public interface PointEvaluator {
     /** {@return the output columns, one per value returned by {@link #evaluate}} */
@@ -80,5 +83,18 @@ public interface PointEvaluator {
                 return new double[] {extraction.thresholdVoltage(structure, new BiasSweep(solver))};
             }
         };
+    }
+
+    /**
+     * n<sub>s</sub> at each point's own bias and V<sub>th</sub> in one call: one bias sweep per point
+     * whose range starts from the closed-form model's threshold (see
+     * {@link SheetDensityAndThreshold}); columns {@code sheet_density_cm^-2},
+     * {@code threshold_voltage_V} and {@code model_threshold_voltage_V}.
+     *
+     * @param definition the threshold definition, e.g. {@link ThresholdDefinition#constantDensity(double)}
+     * @return the evaluator with the default step and margins
+     */
+    static SheetDensityAndThreshold sheetDensityAndThreshold(ThresholdDefinition definition) {
+        return SheetDensityAndThreshold.of(definition);
     }
 }

@@ -56,4 +56,10 @@ public record Quantity(Column column, ToDoubleFunction<Solution> extractor) {
         }
         return e;
     }
+
+    /** @return the column, e.g. {@code "Quantity[sheet_density (cm^-2)]"} (the extractor is code, not shown) */
+    @Override
+    public String toString() {
+        return "Quantity[" + column + "]";
+    }
 }

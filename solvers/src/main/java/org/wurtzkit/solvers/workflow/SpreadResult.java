@@ -6,6 +6,7 @@ import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 import org.wurtzkit.material.ParameterSet;
+import org.wurtzkit.units.Decimals;
 
 /**
  * The result of a {@link ParameterSetSpread}: each member (parameter set) with its n_s and V_th,
@@ -25,12 +26,19 @@ public final class SpreadResult implements CsvTable {
      * @param parameterSet        the set's name
      * @param sheetDensityPerCm2  n_s (cm^-2), NaN if the member failed
      * @param thresholdVoltage    V_th (V), NaN if the member failed
-     * @param failure             why it failed, or null
+     * @param failure             why it failed (with the kind of failure), or null
      */
-    public record Member(String parameterSet, double sheetDensityPerCm2, double thresholdVoltage, String failure) {
+    public record Member(String parameterSet, double sheetDensityPerCm2, double thresholdVoltage, PointFailure failure) {
         /** {@return true if the member was computed} */
         public boolean succeeded() {
             return failure == null;
+        }
+
+        /** @return e.g. {@code "vurgaftman-meyer-2003: n_s = 8.91e12 cm^-2, V_th = -3.25 V"} or why it failed */
+        @Override
+        public String toString() {
+            return parameterSet + ": " + (succeeded() ? "n_s = " + Decimals.format(sheetDensityPerCm2, "cm^-2")
+                    + ", V_th = " + Decimals.format(thresholdVoltage, "V") : "failed: " + failure);
         }
     }
 
@@ -58,6 +66,22 @@ public final class SpreadResult implements CsvTable {
         public double range() {
             return max - min;
         }
+
+        /**
+         * @param unit the unit of the values
+         * @return e.g. {@code "min 8.1e12, median 8.9e12, max 9.6e12 cm^-2 (3 sets)"}
+         */
+        public String toString(String unit) {
+            return count == 0 ? "no set succeeded" : "min " + Decimals.format(min) + ", median "
+                    + Decimals.format(median)
+                    + ", max " + Decimals.format(max, unit) + " (" + count + (count == 1 ? " set)" : " sets)");
+        }
+
+        /** @return {@link #toString(String)} without a unit */
+        @Override
+        public String toString() {
+            return toString("");
+        }
     }
 
     private final List<Member> members;
@@ -80,8 +104,9 @@ public final class SpreadResult implements CsvTable {
             } else {
                 ns[i] = Double.NaN;
                 vth[i] = Double.NaN;
-                m.add(new Member(name, Double.NaN, Double.NaN, out[i].failure()));
-                f.add(new PointFailure(i, "parameter set " + name, out[i].failure()));
+                PointFailure why = out[i].failure().at(i, "parameter set " + name);
+                m.add(new Member(name, Double.NaN, Double.NaN, why));
+                f.add(why);
             }
         }
         this.members = Collections.unmodifiableList(m);
@@ -168,16 +193,21 @@ public final class SpreadResult implements CsvTable {
     public List<String> row(int i) {
         Member m = members.get(i);
         return List.of(m.parameterSet(), CsvTable.cell(m.sheetDensityPerCm2()), CsvTable.cell(m.thresholdVoltage()),
-                m.succeeded() ? "ok" : "failed: " + m.failure());
+                m.succeeded() ? "ok" : "failed: " + m.failure().message());
     }
 
+    /**
+     * @return one line per parameter set (n_s and V_th, or why it failed), then the min / median /
+     *         max of both, and the threshold definition
+     */
     @Override
     public String toString() {
-        StringBuilder sb = new StringBuilder("SpreadResult[");
+        StringBuilder sb = new StringBuilder("Parameter-set spread over ").append(members.size()).append(" sets (")
+                .append(extraction).append("):");
         for (Member m : members) {
-            sb.append(m.parameterSet()).append(": n_s = ").append(m.sheetDensityPerCm2()).append(" cm^-2, V_th = ")
-                    .append(m.thresholdVoltage()).append(" V").append(m.succeeded() ? "" : " (failed)").append("; ");
+            sb.append("\n  ").append(m);
         }
-        return sb.append("n_s ").append(sheet).append(", V_th ").append(threshold).append(']').toString();
+        sb.append("\n  n_s: ").append(sheet.toString("cm^-2")).append("\n  V_th: ").append(threshold.toString("V"));
+        return sb.toString();
     }
 }

@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.List;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 
 /**
  * The outcome of a {@link TargetSearch}: the parameter value found, the structure it gives, the
@@ -100,5 +101,19 @@ public final class TargetResult implements CsvTable {
     public List<String> row(int i) {
         return List.of(Integer.toString(i), CsvTable.cell(evaluatedParameters[i]), CsvTable.cell(evaluatedValues[i]),
                 evaluatedParameters[i] == value && evaluatedValues[i] == achieved ? "yes" : "no");
+    }
+
+    /**
+     * @return e.g. {@code "Target sheet_density = 1e13 cm^-2 (tolerance 1e10 cm^-2): barrier_thickness = 13.8 nm
+     *         gives 1.0001e13 cm^-2 after 7 evaluations"} and a {@link #preview(int) preview} of the
+     *         evaluations
+     */
+    @Override
+    public String toString() {
+        return "Target " + quantity.name() + " = " + Decimals.format(target, quantity.unit()) + " (tolerance "
+                + Decimals.format(tolerance, quantity.unit()) + "): " + parameter.name() + " = "
+                + Decimals.format(value, parameter.unit())
+                + " gives " + Decimals.format(achieved, quantity.unit()) + " after " + evaluatedParameters.length
+                + (evaluatedParameters.length == 1 ? " evaluation" : " evaluations") + "\n" + preview(10);
     }
 }

@@ -71,7 +71,7 @@ public final class TemperatureSweep {
             at[i] = structure.withTemperature(t[i]);
         }
         Solution[] solutions = new Solution[t.length];
-        String[] failures = new String[t.length];
+        PointFailure.Reason[] failures = new PointFailure.Reason[t.length];
         Continuation.solveInOrder(solver, at, t, solutions, failures, "temperature sweep");
         return new TemperatureSweepResult(structure, t, solutions, failures);
     }

@@ -7,6 +7,7 @@ import java.util.Optional;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.Subband;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 
 /**
  * The result of a {@link TemperatureSweep}: per temperature the 2DEG sheet density, the gate
@@ -33,9 +34,10 @@ public final class TemperatureSweepResult implements CsvTable {
     private final int[] iterations;
     private final Solution[] solutions;
     private final String[] status;
+    private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
 
-    TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, String[] messages) {
+    TemperatureSweepResult(Structure structure, double[] temperature, Solution[] solutions, PointFailure.Reason[] reasons) {
         int n = temperature.length;
         this.structure = structure;
         this.temperature = temperature.clone();
@@ -46,6 +48,7 @@ public final class TemperatureSweepResult implements CsvTable {
         bottomGap = new double[n];
         iterations = new int[n];
         status = new String[n];
+        failureAt = new PointFailure[n];
         List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             Solution s = solutions[i];
@@ -55,8 +58,9 @@ public final class TemperatureSweepResult implements CsvTable {
                 groundSubband[i] = Double.NaN;
                 bottomGap[i] = Double.NaN;
                 iterations[i] = -1;
-                status[i] = "failed: " + messages[i];
-                f.add(new PointFailure(i, "temperature = " + temperature[i] + " K", messages[i]));
+                status[i] = "failed: " + reasons[i].message();
+                failureAt[i] = reasons[i].at(i, "temperature = " + temperature[i] + " K");
+                f.add(failureAt[i]);
                 continue;
             }
             sheet[i] = s.sheetDensityPerCm2();
@@ -126,6 +130,22 @@ public final class TemperatureSweepResult implements CsvTable {
 
     /**
      * @param i point index
+     * @return true if point i was computed (the one verb of every workflow result)
+     */
+    public boolean succeeded(int i) {
+        return failureAt[i] == null;
+    }
+
+    /**
+     * @param i point index
+     * @return why point i failed (with the kind of failure), or empty
+     */
+    public Optional<PointFailure> failure(int i) {
+        return Optional.ofNullable(failureAt[i]);
+    }
+
+    /**
+     * @param i point index
      * @return the solution there, empty for a failed point
      */
     public Optional<Solution> solution(int i) {
@@ -152,5 +172,17 @@ public final class TemperatureSweepResult implements CsvTable {
         return List.of(CsvTable.cell(temperature[i]), CsvTable.cell(sheet[i]), CsvTable.cell(gateCharge[i]),
                 CsvTable.cell(groundSubband[i]), CsvTable.cell(bottomGap[i]),
                 iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+    }
+
+    /**
+     * @return a summary line (number of temperatures, their range, how many converged) and a
+     *         {@link #preview(int) preview} of the table
+     */
+    @Override
+    public String toString() {
+        return "Temperature sweep: " + temperature.length + " temperatures from " + Decimals.format(temperature[0], "K")
+                + " to " + Decimals.format(temperature[temperature.length - 1], "K") + ", "
+                + (temperature.length - failures.size()) + " converged"
+                + (failures.isEmpty() ? "" : ", " + failures.size() + " failed") + "\n" + preview(10);
     }
 }

@@ -1,6 +1,7 @@
 package org.wurtzkit.solvers.workflow;
 
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.units.Decimals;
 
 /**
  * How a threshold voltage is read off a computed n_s(V_g) curve. Both definitions are the HEMT
@@ -36,7 +37,13 @@ public sealed interface ThresholdDefinition permits ThresholdDefinition.Constant
 
         @Override
         public String describe() {
-            return "n_s = " + levelPerCm2 + " cm^-2";
+            return "n_s = " + Decimals.format(levelPerCm2, "cm^-2");
+        }
+
+        /** @return e.g. {@code "threshold at n_s = 1e11 cm^-2"} */
+        @Override
+        public String toString() {
+            return "threshold at " + describe();
         }
     }
 
@@ -50,6 +57,12 @@ public sealed interface ThresholdDefinition permits ThresholdDefinition.Constant
         @Override
         public String describe() {
             return "linear extrapolation at maximum slope";
+        }
+
+        /** @return {@code "threshold by linear extrapolation at maximum slope"} */
+        @Override
+        public String toString() {
+            return "threshold by " + describe();
         }
     }
 

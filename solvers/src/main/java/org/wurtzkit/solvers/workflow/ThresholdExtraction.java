@@ -4,6 +4,7 @@ import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Decimals;
 
 /**
  * How to obtain a threshold voltage from the full solver: a bias sweep over a grid and a
@@ -35,5 +36,12 @@ public record ThresholdExtraction(BiasGrid grid, ThresholdDefinition definition)
                     + r.failures().size() + " of " + r.size() + " failed, first: " + r.failures().get(0));
         }
         return r.thresholdVoltage(definition);
+    }
+
+    /** @return e.g. {@code "threshold at n_s = 1e11 cm^-2, over 41 gate biases from 0 V to -8 V"} */
+    @Override
+    public String toString() {
+        return definition + ", over " + grid.size() + " gate biases from " + Decimals.format(grid.get(0), "V") + " to "
+                + Decimals.format(grid.get(grid.size() - 1), "V");
     }
 }

@@ -12,11 +12,22 @@
  * thickness that meets a target n_s or V_th.</li>
  * <li>{@link org.wurtzkit.solvers.workflow.ParameterSetSpread}: one design solved with every
  * parameter set; min / median / max.</li>
+ * <li>{@link org.wurtzkit.solvers.workflow.ToleranceStudy}: Monte Carlo or Latin hypercube over growth
+ * tolerances and material constants ({@link org.wurtzkit.solvers.workflow.Tolerance}); mean,
+ * standard deviation, quantiles and Sobol indices; every sample reproducible alone from the seed, so
+ * the same study can run on a distributed engine (see the examples module).</li>
  * </ul>
  *
  * <p>Every workflow returns an immutable result that writes itself as CSV
  * ({@link org.wurtzkit.solvers.workflow.CsvTable}); column headers carry their units. Failed
  * points are kept in the results with their reason, never dropped. Quantities are SI inside;
  * accessors in other units say so in their names.
+ *
+ * <p>A point fails only by a library exception ({@code InvalidParameterException} or
+ * {@code WurtzkitException}); anything else is a defect and propagates. Every long workflow (sweeps,
+ * design maps, spreads, tolerance studies, target searches) checks its thread's interrupt flag
+ * before each point and then stops with a {@link java.util.concurrent.CancellationException} (not
+ * part of the library's exception family: nothing failed, the caller asked to stop) that says how
+ * many points were done; the interrupt flag stays set.
  */
 package org.wurtzkit.solvers.workflow;

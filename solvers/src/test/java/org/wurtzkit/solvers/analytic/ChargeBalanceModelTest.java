@@ -8,12 +8,11 @@ import static org.wurtzkit.units.Units.NM;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.wurtzkit.bands.BandAlignment;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
-import org.wurtzkit.solvers.sp.BandAlignment;
-import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Dopant;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
@@ -24,8 +23,9 @@ import org.wurtzkit.units.Constants;
 /** The set-fed variant of the charge-balance model ({@link ChargeBalanceModel#fromStructure}). */
 class ChargeBalanceModelTest {
     /** A00's rule dE_c = 0.7 dE_g (Ambacher et al., J. Appl. Phys. 87, 334 (2000), from memory). */
-    private static final SolverOptions A00_LINEUP = SolverOptions.defaults()
-            .withBandAlignment(BandAlignment.conductionBandFraction(0.7));
+    private static Structure a00Lineup(Structure s) {
+        return s.toBuilder().bandAlignment(BandAlignment.conductionBandFraction(0.7)).build();
+    }
 
     private static Structure a00Hemt(double x, double dNm, double capNm, double phiB) {
         Structure.Builder b = Structure.builder(A00TestSet.INSTANCE)
@@ -54,7 +54,7 @@ class ChargeBalanceModelTest {
             "0.30, 5, 0.582", "0.30, 10, 1.056", "0.30, 20, 1.346", "0.30, 50, 1.540"})
     void setFedModelWithA00ConstantsReproducesTable(double x, double dNm, double expected1e13) {
         Structure s = a00Hemt(x, dNm, 0, Ambacher2000.schottkyBarrierEv(x));
-        ChargeBalanceModel m = ChargeBalanceModel.fromStructure(s, A00_LINEUP);
+        ChargeBalanceModel m = ChargeBalanceModel.fromStructure(a00Lineup(s));
         double ns = m.sheetDensityPerCm2() * 1e-13;
         // half a unit of the table's last digit, the 2.7e-3 of the permittivity choice, the gap shortfall
         double gapTerm = m.gateCapacitance() * 1.4e-3 / Constants.ELEMENTARY_CHARGE * 1e-4 * 1e-13;
@@ -74,7 +74,7 @@ class ChargeBalanceModelTest {
     @ParameterizedTest(name = "t_c = {0} nm")
     @CsvSource({"2, 1.226", "5, 1.089", "10, 0.918"})
     void setFedCapStructureReproducesCapTable(double capNm, double expected1e13) {
-        ChargeBalanceModel m = ChargeBalanceModel.fromStructure(a00Hemt(0.3, 20, capNm, 0.84), A00_LINEUP);
+        ChargeBalanceModel m = ChargeBalanceModel.fromStructure(a00Lineup(a00Hemt(0.3, 20, capNm, 0.84)));
         assertEquals(2, m.layers().size());
         assertEquals(0.0, m.layers().get(0).chargeBelow(), 1e-12, "GaN cap carries the channel's polarization");
         assertEquals(0.0, m.surfaceOffsetEv(), 1e-12);
@@ -111,8 +111,8 @@ class ChargeBalanceModelTest {
     void gateBiasShiftsLikeTheBarrier() {
         Structure biased = a00Hemt(0.25, 25, 0, 1.0).withTop(TopBoundary.schottky(1.0, -1.5));
         Structure lowered = a00Hemt(0.25, 25, 0, 2.5);
-        ChargeBalanceModel a = ChargeBalanceModel.fromStructure(biased, A00_LINEUP);
-        ChargeBalanceModel b = ChargeBalanceModel.fromStructure(lowered, A00_LINEUP);
+        ChargeBalanceModel a = ChargeBalanceModel.fromStructure(a00Lineup(biased));
+        ChargeBalanceModel b = ChargeBalanceModel.fromStructure(a00Lineup(lowered));
         assertEquals(-1.5, a.gateBiasV());
         assertEquals(b.sheetDensity(), a.sheetDensity(), 1e-12 * b.sheetDensity());
     }

@@ -11,6 +11,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
 import org.ejml.data.DMatrixRMaj;
+import org.wurtzkit.errors.ErrorKind;
 
 /**
  * Checks {@link SparseLanczosEigen} against {@link SymmetricTridiagonalEigen} on tridiagonal
@@ -181,9 +182,10 @@ class SparseLanczosEigenTest {
         SymmetricTridiagonalMatrix t = SymmetricTridiagonalMatrix.of(
                 TestMatrices.make(TestMatrices.Kind.LAPLACIAN_POTENTIAL, 400, 5L)[0],
                 TestMatrices.make(TestMatrices.Kind.LAPLACIAN_POTENTIAL, 400, 5L)[1]);
-        ArithmeticException ex = assertThrows(ArithmeticException.class,
+        EigenSolverException ex = assertThrows(EigenSolverException.class,
                 () -> new SparseLanczosEigen(1e-12, 6).lowest(t, 3));
         assertTrue(ex.getMessage().contains("maxKrylovDimension"), ex.getMessage());
+        assertEquals(ErrorKind.EIGEN_SOLVER_FAILED, ex.kind());
     }
 
     static SparseSymmetricMatrix randomBanded(int n, int band, long seed) {

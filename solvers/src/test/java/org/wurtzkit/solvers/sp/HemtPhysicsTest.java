@@ -5,12 +5,14 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.wurtzkit.units.Units.NM;
 
+import java.util.List;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
+import org.wurtzkit.bands.BandAlignment;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
@@ -284,10 +286,10 @@ class HemtPhysicsTest {
                 .grow(Layer.of("channel", Composition.GAN, 150 * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(0.25), 20 * NM))
                 .top(GATE).build();
-        double[][] w = SOLVER.solve(s).quantumWindows();
-        assertEquals(3, w.length, java.util.Arrays.deepToString(w));
-        assertEquals(0.0, w[0][0], 1e-12);
-        assertEquals(60 * NM, w[0][1], 0.5 * NM);
+        List<DepthRange> w = SOLVER.solve(s).quantumWindows();
+        assertEquals(3, w.size(), w.toString());
+        assertEquals(0.0, w.get(0).top(), 1e-12);
+        assertEquals(60 * NM, w.get(0).bottom(), 0.5 * NM);
     }
 
     @Test
@@ -351,9 +353,9 @@ class HemtPhysicsTest {
         // node, through the charge model) integrated over the quantum window holds the same electrons;
         // the window's two end nodes are classical and add a small share (1.1e-5 of the total here),
         // hence 1e-4; a spin, degeneracy or normalisation error would be of order one
-        double[][] windows = s.quantumWindows();
-        assertEquals(1, windows.length);
-        double inWindow = s.electronSheetDensityBetween(windows[0][0], windows[0][1]);
+        List<DepthRange> windows = s.quantumWindows();
+        assertEquals(1, windows.size());
+        double inWindow = s.electronSheetDensityBetween(windows.get(0).top(), windows.get(0).bottom());
         assertEquals(total, inWindow, 1e-4 * total);
     }
 }

@@ -15,6 +15,7 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
@@ -199,7 +200,7 @@ class BiasSweepTest {
                 .top(TopBoundary.schottky(1, 0)).build();
         BiasSweepResult r = new BiasSweep(new SelfConsistentSolver(
                 org.wurtzkit.solvers.sp.SolverOptions.defaults().withMaxIterations(3))).run(s, -8, -7.9, 0, 0.05, 0.1);
-        assertTrue(r.converged(0) && r.converged(1), () -> r.failures().toString());
+        assertTrue(r.succeeded(0) && r.succeeded(1), () -> r.failures().toString());
         assertEquals(3, r.failures().size(), () -> r.failures().toString());
         String first = r.failures().get(0).message();
         assertTrue(first.startsWith("continued: NotConvergedException") && first.contains("; cold start: "), first);
@@ -218,7 +219,9 @@ class BiasSweepTest {
         assertEquals(3, r.failures().size());
         assertEquals(3, r.size());
         for (int i = 0; i < 3; i++) {
-            assertFalse(r.converged(i));
+            assertFalse(r.succeeded(i));
+            assertEquals(ErrorKind.NOT_CONVERGED, r.failure(i).orElseThrow().kind());
+            assertEquals(r.failures().get(i), r.failure(i).orElseThrow());
             assertTrue(Double.isNaN(r.sheetDensityPerCm2()[i]));
             assertTrue(r.failures().get(i).message().contains("NotConvergedException"), r.failures().get(i).message());
             assertTrue(r.row(i).get(5).startsWith("failed: "));

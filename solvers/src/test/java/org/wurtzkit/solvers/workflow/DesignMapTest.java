@@ -14,6 +14,7 @@ import java.util.Collections;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 
@@ -86,7 +87,8 @@ class DesignMapTest {
         assertTrue(r.succeeded(0));
         assertFalse(r.succeeded(1));
         assertEquals(1, r.failures().size());
-        String why = r.failure(1).orElseThrow();
+        assertEquals(ErrorKind.INVALID_PARAMETER, r.failure(1).orElseThrow().kind());
+        String why = r.failure(1).orElseThrow().message();
         assertTrue(why.startsWith("InvalidParameterException: Al fraction x = 1.5"), why);
         assertTrue(r.failures().get(0).where().contains("al_fraction = 1.5"), r.failures().get(0).where());
         assertTrue(Double.isNaN(r.value(1, 0)));
@@ -102,7 +104,8 @@ class DesignMapTest {
                 .axis(Axis.of("al_fraction", "", 0.2, 0.3)).axis(Axis.of("barrier_thickness", "nm", 25))
                 .solver(new SelfConsistentSolver(Hemts.COARSE.withMaxIterations(1))).threads(2).build().run();
         assertEquals(2, starved.failures().size());
-        assertTrue(starved.failure(0).orElseThrow().startsWith("NotConvergedException"));
+        assertTrue(starved.failure(0).orElseThrow().message().startsWith("NotConvergedException"));
+        assertEquals(ErrorKind.NOT_CONVERGED, starved.failure(0).orElseThrow().kind());
     }
 
     /** The threshold evaluator of a map equals a direct extraction, bit for bit. */

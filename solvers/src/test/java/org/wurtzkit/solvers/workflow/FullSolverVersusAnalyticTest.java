@@ -6,10 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.wurtzkit.bands.BandAlignment;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.solvers.analytic.Ambacher2000;
 import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
-import org.wurtzkit.solvers.sp.BandAlignment;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Structure;
@@ -47,7 +47,7 @@ class FullSolverVersusAnalyticTest {
     @CsvSource({"0.20, 20", "0.20, 30", "0.30, 20", "0.30, 30"})
     void thresholdAgreesWithAnalyticForTheDefaultSet(double x, double dNm) {
         Structure s = Hemts.hemt(Hemts.DEFAULT_SET, x, dNm, 1.0);
-        double analytic = ChargeBalanceModel.fromStructure(s, Hemts.COARSE).thresholdVoltage();
+        double analytic = ChargeBalanceModel.fromStructure(s).thresholdVoltage();
         BiasSweepResult r = sweepThroughThreshold(Hemts.SOLVER, s, analytic);
         double level = r.thresholdVoltage(LEVEL);
         double lin = r.thresholdVoltage(EXTRAPOLATION);
@@ -67,9 +67,10 @@ class FullSolverVersusAnalyticTest {
     @CsvSource({"0.20, 20", "0.25, 25", "0.30, 30"})
     void thresholdAgreesWithA00Expressions(double x, double dNm) {
         ParameterSet set = A00TestSet.INSTANCE;
-        SolverOptions options = Hemts.COARSE.withBandAlignment(BandAlignment.conductionBandFraction(0.7));
+        SolverOptions options = Hemts.COARSE;
         double phi = Ambacher2000.schottkyBarrierEv(x);
-        Structure s = Hemts.hemt(set, x, dNm, phi);
+        Structure s = Hemts.hemt(set, x, dNm, phi).toBuilder()
+                .bandAlignment(BandAlignment.conductionBandFraction(0.7)).build();
         double analytic = Ambacher2000.model(x, dNm * 1e-9).thresholdVoltage();
         BiasSweepResult r = sweepThroughThreshold(new SelfConsistentSolver(options), s, analytic);
         double level = r.thresholdVoltage(LEVEL);
@@ -104,7 +105,7 @@ class FullSolverVersusAnalyticTest {
         double[] rel = new double[thickness.length];
         for (int i = 0; i < thickness.length; i++) {
             Structure s = Hemts.hemt(Hemts.DEFAULT_SET, 0.25, thickness[i], 1.0);
-            ChargeBalanceModel m = ChargeBalanceModel.fromStructure(s, Hemts.COARSE);
+            ChargeBalanceModel m = ChargeBalanceModel.fromStructure(s);
             double analytic = m.sheetDensityPerCm2();
             double full = Hemts.SOLVER.solve(s).sheetDensityPerCm2();
             rel[i] = full / analytic - 1;

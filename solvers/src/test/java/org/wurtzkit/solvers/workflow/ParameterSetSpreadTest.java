@@ -10,7 +10,9 @@ import java.util.List;
 import java.util.function.Function;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.structure.Structure;
@@ -88,12 +90,19 @@ class ParameterSetSpreadTest {
         String failing = ParameterSets.all().get(0).name();
         SpreadResult r = SPREAD.withThreads(1).run(set -> {
             if (set.name().equals(failing)) {
-                throw new IllegalStateException("no structure for " + set.name());
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "no structure for " + set.name());
             }
             return HEMT.apply(set);
         });
         assertEquals(1, r.failures().size());
-        assertTrue(r.member(failing).orElseThrow().failure().contains("no structure for " + failing));
+        PointFailure why = r.member(failing).orElseThrow().failure();
+        assertTrue(why.message().contains("no structure for " + failing), why.message());
+        assertEquals(ErrorKind.INVALID_STRUCTURE, why.kind());
+
+        // a programming error in the caller's factory is not a point failure: it propagates
+        assertThrows(NullPointerException.class, () -> SPREAD.withThreads(1).run(set -> {
+            throw new NullPointerException("a defect in the caller's factory");
+        }));
         assertEquals(ParameterSets.all().size() - 1, r.sheetDensityPerCm2().count());
     }
 

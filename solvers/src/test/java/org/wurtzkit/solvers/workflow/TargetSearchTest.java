@@ -35,7 +35,7 @@ class TargetSearchTest {
         assertEquals(ns, r.achieved());
         assertEquals(r.value() * NM, r.structure().layersTopDown().get(0).thickness(), 1e-15);
         // the analytic model of the same set: n_s = 1e13 cm^-2 needs a barrier within 10 % of the found one
-        ChargeBalanceModel m = ChargeBalanceModel.fromStructure(Hemts.standard(), Hemts.COARSE);
+        ChargeBalanceModel m = ChargeBalanceModel.fromStructure(Hemts.standard());
         double lo = 10;
         double hi = 50;
         for (int i = 0; i < 60; i++) { // bisection on the monotone analytic n_s(d)

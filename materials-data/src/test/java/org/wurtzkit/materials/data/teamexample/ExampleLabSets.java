@@ -11,15 +11,15 @@ import org.wurtzkit.materials.data.JsonParameterSetReader;
  * {@code META-INF/services/org.wurtzkit.material.ParameterSetProvider}.
  */
 public final class ExampleLabSets implements ParameterSetProvider {
-    private static final ParameterSet LAB = JsonParameterSetReader.readResource(ExampleLabSets.class,
-            "/org/wurtzkit/materials/data/example-lab-2025.json");
-
     /** Public no-argument constructor for the service loader. */
     public ExampleLabSets() {
     }
 
     @Override
     public List<ParameterSet> parameterSets() {
-        return List.of(LAB);
+        // read on each call (lazily): a typo in the file is then reported when the set is named,
+        // instead of failing the class's initialization and with it every later lookup
+        return List.of(JsonParameterSetReader.readResource(ExampleLabSets.class,
+                "/org/wurtzkit/materials/data/example-lab-2025.json"));
     }
 }
