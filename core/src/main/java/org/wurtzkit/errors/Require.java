@@ -1,5 +1,7 @@
 package org.wurtzkit.errors;
 
+import java.util.List;
+
 /**
  * Argument checks that throw {@link InvalidParameterException} with the parameter, the value and
  * the allowed range in the message. Nothing is ever clamped.
@@ -88,6 +90,25 @@ public final class Require {
             throw new InvalidParameterException(name, "null", "(non-null)");
         }
         return value;
+    }
+
+    /**
+     * An unmodifiable copy of a list that must be non-null and hold no null element.
+     *
+     * @param name  parameter name, e.g. "dopants of layer \"barrier\""
+     * @param value the list
+     * @param <T>   element type
+     * @return an unmodifiable copy
+     * @throws InvalidParameterException naming the list, or the index of its first null element
+     */
+    public static <T> List<T> nonNullElements(String name, List<T> value) {
+        nonNull(name, value);
+        for (int i = 0; i < value.size(); i++) {
+            if (value.get(i) == null) {
+                throw invalid(name + "[" + i + "]", "null", "(non-null)");
+            }
+        }
+        return List.copyOf(value);
     }
 
     /**

@@ -6,6 +6,8 @@
  * failure is a {@link org.wurtzkit.errors.WurtzkitException} that answers which
  * {@link org.wurtzkit.errors.ErrorKind} it is, so that callers branch on the kind instead of parsing
  * messages; a failed solve adds what it computed (see the solvers' {@code NotConvergedException}).
- * All exceptions are unchecked and their messages are in English.
+ * All exceptions are unchecked and their messages are in English. A workflow whose thread is
+ * interrupted stops with the JDK's {@link java.util.concurrent.CancellationException}, which is
+ * not a failure and so not part of this family.
  */
 package org.wurtzkit.errors;

@@ -19,8 +19,8 @@ import org.wurtzkit.units.Decimals;
  *
  * @param name       a name for reports (need not be unique)
  * @param material   what the layer is made of
- * @param thickness  thickness (m), &gt; 0 and at most 1 mm
- * @param dopants    shallow dopants (uniform)
+ * @param thickness  thickness (m), at least {@link #MIN_THICKNESS} (1 pm) and at most 1 mm
+ * @param dopants    shallow dopants (uniform); the lists are non-null and hold no null element
  * @param deepLevels deep levels (uniform)
  * @param deltaSheets delta-doping sheets inside the layer
  * @param relaxation relaxation r in [0, 1] with respect to the layer below (0 = pseudomorphic)
@@ -30,6 +30,12 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
 
     /** Largest accepted layer thickness (m). */
     public static final double MAX_THICKNESS = 1e-3;
+    /**
+     * Smallest accepted layer thickness (m): 1 pm, far below one monolayer (c/2 = 0.26 nm in GaN);
+     * a thinner value is a unit slip, and below it the depths of the interfaces can no longer be
+     * told apart in a millimetre-thick stack.
+     */
+    public static final double MIN_THICKNESS = 1e-12;
 
     /**
      * Creates the record and checks and copies the lists.
@@ -51,9 +57,13 @@ public record Layer(String name, LayerMaterial material, double thickness, List<
             throw new InvalidParameterException("thickness of layer \"" + name + "\" (m)", Double.toString(thickness),
                     "(0, " + MAX_THICKNESS + "]");
         }
-        dopants = List.copyOf(dopants);
-        deepLevels = List.copyOf(deepLevels);
-        deltaSheets = List.copyOf(deltaSheets);
+        if (thickness < MIN_THICKNESS) {
+            throw new InvalidParameterException("thickness of layer \"" + name + "\" (m)", Double.toString(thickness),
+                    "[" + MIN_THICKNESS + ", " + MAX_THICKNESS + "] (below 1 pm: a unit slip?)");
+        }
+        dopants = Require.nonNullElements("dopants of layer \"" + name + "\"", dopants);
+        deepLevels = Require.nonNullElements("deep levels of layer \"" + name + "\"", deepLevels);
+        deltaSheets = Require.nonNullElements("delta sheets of layer \"" + name + "\"", deltaSheets);
         for (DeltaDoping d : deltaSheets) {
             if (d.offsetFromLayerTop() > thickness) {
                 throw new InvalidParameterException("delta sheet offset in layer \"" + name + "\" (m)",

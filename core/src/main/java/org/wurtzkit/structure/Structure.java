@@ -68,6 +68,8 @@ public final class Structure {
     public static final double WARN_TEMPERATURE_BELOW_K = 20;
     /** Above this temperature (K) a structure gets a {@link WarningKind#TEMPERATURE_OUT_OF_RANGE} warning. */
     public static final double WARN_TEMPERATURE_ABOVE_K = 1000;
+    /** Bottom depth of every layer, top-down, for the binary search of {@link #layerIndexAt}. */
+    private final double[] bottoms;
 
     private Structure(Builder b) {
         this.parameters = b.parameters;
@@ -90,6 +92,10 @@ public final class Structure {
         this.totalThickness = t;
         this.states = resolveStates();
         this.criticalThicknessModel = b.criticalThicknessModel;
+        this.bottoms = new double[states.size()];
+        for (int i = 0; i < bottoms.length; i++) {
+            bottoms[i] = states.get(i).depthBottom();
+        }
         this.warnings = collectWarnings();
     }
 
@@ -348,16 +354,23 @@ public final class Structure {
 
     /**
      * @param depth a depth in [0, total thickness] (m)
-     * @return the index from the top of the layer containing it (the upper layer at an interface)
+     * @return the index from the top of the layer containing it (the upper layer at an interface);
+     *         O(log layers) by binary search
      */
     public int layerIndexAt(double depth) {
         Require.inRange("depth (m)", depth, 0, totalThickness);
-        for (int i = 0; i < states.size(); i++) {
-            if (depth <= states.get(i).depthBottom()) {
-                return i;
+        // the first layer whose bottom is at or below the depth; bottoms never decrease
+        int lo = 0;
+        int hi = bottoms.length - 1;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (depth <= bottoms[mid]) {
+                hi = mid;
+            } else {
+                lo = mid + 1;
             }
         }
-        return states.size() - 1;
+        return lo;
     }
 
     /**

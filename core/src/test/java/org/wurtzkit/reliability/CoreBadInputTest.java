@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.wurtzkit.reliability.BadInput.row;
 import static org.wurtzkit.units.Units.NM;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Tag;
@@ -323,7 +324,25 @@ class CoreBadInputTest {
                         "(non-null)"),
                 row("null name", () -> Layer.of(null, Composition.GAN, 10 * NM), "layer name", "null", "(non-null)"),
                 row("delta sheet below its layer", () -> ok.withDeltaDoping(DeltaDoping.donorsPerCm2(1e12, 0.02).atOffset(11 * NM)),
-                        "delta sheet offset in layer \"b\" (m)", 11 * NM, "[0, " + 10 * NM + "] (the layer's thickness)"));
+                        "delta sheet offset in layer \"b\" (m)", 11 * NM, "[0, " + 10 * NM + "] (the layer's thickness)"),
+                // issue #14: the canonical constructor threw a NullPointerException from List.copyOf
+                row("null dopant list", () -> new Layer("b", ok.material(), 10 * NM, null, List.of(), List.of(), 0),
+                        "dopants of layer \"b\"", "null", "(non-null)"),
+                row("null deep-level list", () -> new Layer("b", ok.material(), 10 * NM, List.of(), null, List.of(), 0),
+                        "deep levels of layer \"b\"", "null", "(non-null)"),
+                row("null delta-sheet list", () -> new Layer("b", ok.material(), 10 * NM, List.of(), List.of(), null, 0),
+                        "delta sheets of layer \"b\"", "null", "(non-null)"),
+                row("null dopant in the list", () -> new Layer("b", ok.material(), 10 * NM,
+                        Arrays.asList(Dopant.donorsPerCm3(1e17, 0.02), null), List.of(), List.of(), 0),
+                        "dopants of layer \"b\"[1]", "null", "(non-null)"),
+                row("null deep level in the list", () -> new Layer("b", ok.material(), 10 * NM, List.of(),
+                        Arrays.asList((DeepLevel) null), List.of(), 0), "deep levels of layer \"b\"[0]", "null",
+                        "(non-null)"),
+                // issue #14: a top layer of Double.MIN_VALUE m failed inside the mesh with a negative breakpoint
+                row("thickness Double.MIN_VALUE", () -> Layer.of("b", Composition.GAN, Double.MIN_VALUE), th,
+                        Double.MIN_VALUE, "[1.0E-12, 0.001] (below 1 pm: a unit slip?)"),
+                row("thickness 0.5 pm", () -> ok.withThickness(0.5e-12), th, 0.5e-12,
+                        "[1.0E-12, 0.001] (below 1 pm: a unit slip?)"));
     }
 
     @ParameterizedTest(name = "{0}")

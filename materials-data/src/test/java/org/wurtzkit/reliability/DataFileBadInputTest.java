@@ -175,6 +175,64 @@ class DataFileBadInputTest {
         DataFiles.assertNamesFileAndLine(e, FILE, lineOfKey(text, "GaN", "C13"));
     }
 
+    /**
+     * An endless stream that starts a parameter set whose description is {@code opening} followed
+     * by {@code unit} repeated for ever; counts the bytes the reader takes.
+     */
+    private static final class EndlessDescription extends java.io.InputStream {
+        private final byte[] head;
+        private final byte[] unit;
+        private long pos;
+
+        EndlessDescription(String opening, String unit) {
+            this.head = ("{\n  \"formatVersion\": 1,\n  \"name\": \"huge\",\n  \"description\": " + opening)
+                    .getBytes(StandardCharsets.UTF_8);
+            this.unit = unit.getBytes(StandardCharsets.UTF_8);
+        }
+
+        @Override
+        public int read() {
+            long p = pos++;
+            return (p < head.length ? head[(int) p] : unit[(int) ((p - head.length) % unit.length)]) & 0xff;
+        }
+
+        long bytesRead() {
+            return pos;
+        }
+    }
+
+    /**
+     * Issue #14: a 50 MB file whose description is a huge array exhausted the heap before it was
+     * validated. The reader now stops at {@link JsonParameterSetReader#MAX_JSON_VALUES} values, long
+     * before the limit on the file size, having read a few hundred kilobytes of an endless stream.
+     */
+    @Test
+    void hugeArrayIsRefusedByItsElementCount() {
+        EndlessDescription in = new EndlessDescription("[", "0, ");
+        ParameterSetFormatException e = assertThrows(ParameterSetFormatException.class,
+                () -> JsonParameterSetReader.read(() -> in, FILE));
+        assertEquals(ErrorKind.MALFORMED_DATA, e.kind());
+        assertTrue(e.getMessage().contains(FILE) && e.getMessage().contains("more than "
+                + JsonParameterSetReader.MAX_JSON_VALUES + " JSON values"), e.getMessage());
+        assertTrue(in.bytesRead() < JsonParameterSetReader.MAX_FILE_BYTES, "read " + in.bytesRead() + " bytes");
+    }
+
+    /**
+     * Issue #14: the same with one endless string: refused by Jackson's stream-read constraints once
+     * {@link JsonParameterSetReader#MAX_FILE_BYTES} are read, with the limit in the message.
+     */
+    @Test
+    void hugeStringIsRefusedByTheFileSizeLimit() {
+        EndlessDescription in = new EndlessDescription("\"", "Tarnwick Nitride Lab, invented. ");
+        ParameterSetFormatException e = assertThrows(ParameterSetFormatException.class,
+                () -> JsonParameterSetReader.read(() -> in, FILE));
+        assertEquals(ErrorKind.MALFORMED_DATA, e.kind());
+        assertTrue(e.getMessage().contains(FILE) && e.getMessage().contains("exceeds the reader's limits (at most "
+                + JsonParameterSetReader.MAX_FILE_BYTES + " bytes"), e.getMessage());
+        // Jackson reads in buffers of a few kilobytes: at most one buffer beyond the limit
+        assertTrue(in.bytesRead() < 2 * JsonParameterSetReader.MAX_FILE_BYTES, "read " + in.bytesRead() + " bytes");
+    }
+
     @Test
     void readFailureIsReportedWithoutALine() {
         ParameterSetFormatException e = assertThrows(ParameterSetFormatException.class,

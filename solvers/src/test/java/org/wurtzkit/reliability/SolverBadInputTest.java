@@ -1,5 +1,6 @@
 package org.wurtzkit.reliability;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -20,6 +21,7 @@ import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
+import org.wurtzkit.solvers.mesh.Mesh;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
 import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
 import org.wurtzkit.solvers.sp.HoleFermiLevel;
@@ -161,6 +163,47 @@ class SolverBadInputTest {
         BadInput.check(c);
     }
 
+    /**
+     * Issue #14: 1000 layers of 1 mm (20 million nodes) or a 1 pm mesh on a 100 um layer ended in an
+     * OutOfMemoryError after minutes. The mesh counts its nodes before it allocates them and refuses
+     * more than {@link Mesh#MAX_NODES}, naming the count, the stack and the policy. (The preemptive
+     * timeout guards against a hang, it measures nothing.)
+     */
+    @Test
+    void meshBeyondItsNodeLimitIsRefusedBeforeItIsBuilt() {
+        Structure.Builder b = Structure.builder(SET);
+        for (int i = 0; i < 1000; i++) {
+            b.grow(Layer.of("L" + i, i % 2 == 0 ? Composition.GAN : Composition.alGaN(0.1), Layer.MAX_THICKNESS));
+        }
+        Structure thick = b.top(TopBoundary.schottky(1, 0)).build();
+        SelfConsistentSolver classical = new SelfConsistentSolver(D.withQuantumWindows(QuantumWindows.none()));
+        InvalidParameterException e = assertTimeoutPreemptively(Duration.ofSeconds(20),
+                () -> assertThrows(InvalidParameterException.class, () -> classical.solve(thick)));
+        assertTrue(e.parameter().equals("mesh node count") && e.getMessage().contains("[3, " + Mesh.MAX_NODES + "]")
+                && e.getMessage().contains("a stack of 1.000 m") && e.getMessage().contains("mesh policy"), e.getMessage());
+
+        Structure wide = Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 100e-6))
+                .top(TopBoundary.schottky(1, 0)).build();
+        SelfConsistentSolver fine = new SelfConsistentSolver(D.withQuantumWindows(QuantumWindows.none())
+                .withMesh(new MeshPolicy(1e-12, 1.06, 1e-12)));
+        InvalidParameterException f = assertTimeoutPreemptively(Duration.ofSeconds(20),
+                () -> assertThrows(InvalidParameterException.class, () -> fine.solve(wide)));
+        assertTrue(f.parameter().equals("mesh node count") && f.getMessage().contains("maximum spacing 1.00e-12 m"),
+                f.getMessage());
+    }
+
+    /** The limit is exact: a mesh of just fewer nodes than the limit is built, one of more is not. */
+    @Test
+    void meshNodeLimitIsExact() {
+        MeshPolicy uniform = new MeshPolicy(1e-9, 1.06, 1e-9);
+        // with h0 = hMax every cell is 1 nm: a segment of k nm has k cells and the mesh k + 1 nodes
+        double[] justBelow = {0, (Mesh.MAX_NODES - 1) * 1e-9};
+        assertEquals(Mesh.MAX_NODES, Mesh.generate(justBelow, uniform).size());
+        double[] justAbove = {0, Mesh.MAX_NODES * 1e-9};
+        InvalidParameterException e = assertThrows(InvalidParameterException.class, () -> Mesh.generate(justAbove, uniform));
+        assertEquals("mesh node count", e.parameter());
+    }
+
     static Stream<Arguments> quantumWindowsCases() {
         String ext = "quantum window extension around an interface (m)";
         String extr = "[1.0E-9, 1.0E-6]";
@@ -182,6 +225,10 @@ class SolverBadInputTest {
                         "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
                 row("window upside down", () -> new QuantumWindows.Window(5e-9, 4e-9), bot, 4e-9,
                         "[" + (5e-9 + 1e-9) + ", ...) (at least 1 nm below its top)"),
+                // issue #14: NullPointerException from List.copyOf
+                row("windows list null", () -> new QuantumWindows.Explicit(null), "quantum windows", "null", "(non-null)"),
+                row("a null window", () -> new QuantumWindows.Explicit(java.util.Arrays.asList(
+                        QuantumWindows.Window.nm(0, 20), null)), "quantum windows[1]", "null", "(non-null)"),
                 row("no windows", () -> QuantumWindows.explicit(), "number of quantum windows", "0",
                         "[1, ...) (use QuantumWindows.none())"),
                 row("overlapping windows", () -> QuantumWindows.explicit(QuantumWindows.Window.nm(0, 20),
@@ -251,6 +298,15 @@ class SolverBadInputTest {
                         "initial guess depth[1] (m)", NAN, "(finite)"),
                 row("guess potential +inf", () -> solver.solve(hemt(), z, new double[] {0, INF, 0}),
                         "initial guess potential[1] (V)", INF, "(finite)"),
+                // issue #14: a finite but absurd guess was refused inside as "potentialEv[1] = Infinity"
+                row("guess potential 1.7e308 V", () -> solver.solve(hemt(), z, new double[] {0, 1.7e308, 0}),
+                        "initial guess potential[1] (V)", 1.7e308, "[-1000, 1000]"),
+                row("guess potential -1.7e308 V", () -> solver.solve(hemt(), z, new double[] {0, 0, -1.7e308}),
+                        "initial guess potential[2] (V)", -1.7e308, "[-1000, 1000]"),
+                // issue #14: 1e-300 K ended in an internal NaN reported as non-convergence
+                row("temperature 1e-300 K", () -> solver.solve(Structure.builder(SET).temperature(1e-300)
+                        .grow(Layer.of("buffer", Composition.GAN, 1000 * NM)).top(TopBoundary.schottky(1, 0)).build()),
+                        "temperature of the structure (K)", 1e-300, "[1.0, 2000] (the solver's range)"),
                 row("guess potential without depths", () -> solver.solve(hemt(), null, v), "initial guess",
                         "null depths, 3 potentials", "both null, or arrays of equal length"),
                 row("guess of unequal lengths", () -> solver.solve(hemt(), z, new double[] {0, 0}), "initial guess",
@@ -272,6 +328,11 @@ class SolverBadInputTest {
                 row("extrapolation parameter infinite", () -> PotentialPredictor.extrapolate(
                         new double[] {0.0, INF}, new Solution[] {solved(), solved()}, -0.1),
                         "extrapolation parameter 1", INF, "(finite)"),
+                // issue #14: returned an array of NaN; the Lagrange weights overflow
+                row("extrapolation from two points 1e-300 apart", () -> PotentialPredictor.extrapolate(
+                        new double[] {0, 1e-300}, new Solution[] {solved(), solved()}, 1e9),
+                        "extrapolation target parameter", 1e9, "a value whose Lagrange weights through the parameters "
+                                + "[0.0, 1.0E-300] are finite (it lies too many parameter spacings away)"),
                 row("extrapolation parameter repeated", () -> PotentialPredictor.extrapolate(
                         new double[] {-0.1, -0.1}, new Solution[] {solved(), solved()}, -0.2),
                         "extrapolation parameter 1", -0.1, "distinct from the other parameters"));

@@ -23,7 +23,7 @@ import org.wurtzkit.structure.TopBoundary;
  * @param setName     parameter set
  * @param polarity    polarity
  * @param temperature temperature (K)
- * @param layers      layers in growth order, the first (bottom) one the GaN buffer
+ * @param layers      layers in growth order, the first (bottom) one the buffer
  * @param schottky    true for a Schottky gate, false for a free surface
  * @param top1        phi_B (eV) or surface donor energy below E_c (eV)
  * @param top2        gate bias (V) or surface donor density (cm^-2)
@@ -46,9 +46,18 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
      * @param deepAcceptorLike acceptor-like (true) or donor-like deep level
      * @param deepEnergy  deep level E_c - E_T (eV)
      * @param deltaDonors delta donor sheet at mid-layer (cm^-2), 0 for none
+     * @param relaxation  in-plane relaxation in [0, 1], 0 for pseudomorphic
      */
     record LayerSpec(String name, Composition bottom, Composition top, double thicknessNm, double donors,
-            double acceptors, double deepDensity, boolean deepAcceptorLike, double deepEnergy, double deltaDonors) {
+            double acceptors, double deepDensity, boolean deepAcceptorLike, double deepEnergy, double deltaDonors,
+            double relaxation) {
+
+        /** A pseudomorphic layer. */
+        LayerSpec(String name, Composition bottom, Composition top, double thicknessNm, double donors,
+                double acceptors, double deepDensity, boolean deepAcceptorLike, double deepEnergy, double deltaDonors) {
+            this(name, bottom, top, thicknessNm, donors, acceptors, deepDensity, deepAcceptorLike, deepEnergy, deltaDonors,
+                    0);
+        }
 
         Layer build() {
             Layer l = bottom.equals(top) ? Layer.of(name, bottom, thicknessNm * NM)
@@ -65,6 +74,9 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
             }
             if (deltaDonors > 0) {
                 l = l.withDeltaDoping(DeltaDoping.donorsPerCm2(deltaDonors, 0.02).atOffset(0.5 * thicknessNm * NM));
+            }
+            if (relaxation > 0) {
+                l = l.withRelaxation(relaxation);
             }
             return l;
         }
@@ -90,6 +102,9 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
             if (deltaDonors > 0) {
                 sb.append(".withDeltaDoping(DeltaDoping.donorsPerCm2(").append(num(deltaDonors)).append(", 0.02).atOffset(")
                         .append(num(0.5 * thicknessNm)).append(" * NM))");
+            }
+            if (relaxation > 0) {
+                sb.append(".withRelaxation(").append(num(relaxation)).append(")");
             }
             return sb.toString();
         }
@@ -146,6 +161,12 @@ record StackSpec(String setName, Polarity polarity, double temperature, List<Lay
     static String comp(Composition c) {
         if (c.equals(Composition.GAN)) {
             return "Composition.GAN";
+        }
+        if (c.equals(Composition.ALN)) {
+            return "Composition.ALN";
+        }
+        if (c.equals(Composition.INN)) {
+            return "Composition.INN";
         }
         if (c.indium() == 0) {
             return "Composition.alGaN(" + num(c.aluminium()) + ")";

@@ -82,6 +82,17 @@ class WorkflowBadInputTest {
         BadInput.check(c);
     }
 
+    /** Issue #14: a linear grid between finite biases whose difference overflows is finite and exact at the ends. */
+    @Test
+    void linearGridAcrossTheWholeDoubleRangeIsFinite() {
+        double[] v = BiasGrid.linear(-1e308, 1e308, 3).values();
+        org.junit.jupiter.api.Assertions.assertArrayEquals(new double[] {-1e308, 0, 1e308}, v, 0.0);
+        double[] w = BiasGrid.linear(1.7e308, -1.7e308, 5).values();
+        for (int i = 1; i < w.length; i++) {
+            assertTrue(Double.isFinite(w[i]) && w[i] < w[i - 1], java.util.Arrays.toString(w));
+        }
+    }
+
     static Stream<Arguments> sweeps() {
         BiasSweep sweep = new BiasSweep();
         TemperatureSweep tSweep = new TemperatureSweep();
@@ -92,6 +103,10 @@ class WorkflowBadInputTest {
                         "a Schottky gate (a bias sweep needs a gate)"),
                 row("bias beyond the gate's range", () -> sweep.run(hemt(), -150, 0), "gate bias (V)", -150.0,
                         "[-100, 20]"),
+                // issue #14: BiasGrid.linear(-1e308, 1e308, 3) reported NaN for finite inputs; the grid is
+                // now {-1e308, 0, 1e308} and the sweep refuses its first bias by the gate's range
+                row("bias grid spanning the doubles", () -> sweep.run(hemt(), BiasGrid.linear(-1e308, 1e308, 3)),
+                        "gate bias (V)", -1e308, "[-100, 20]"),
                 row("null grid", () -> sweep.run(hemt(), (BiasGrid) null), "bias grid", "null", "(non-null)"),
                 row("null solver", () -> new BiasSweep(null), "solver", "null", "(non-null)"),
                 row("no temperatures", () -> tSweep.run(hemt()), "number of temperatures", "0", "[1, ...)"),
@@ -185,6 +200,10 @@ class WorkflowBadInputTest {
                 row("column name with a comma", () -> Column.of("a,b", ""), "column name", "\"a,b\"",
                         "non-blank text without commas, quotes or line breaks"),
                 row("null factory", () -> DesignMap.builder(null), "structure factory", "null", "(non-null)"),
+                // issue #14: a null element gave a NullPointerException from List.copyOf
+                row("spread over a null set", () -> spread.run(ReliabilityStructures::forSet,
+                        java.util.Arrays.asList(ParameterSets.defaultSet(), null)), "parameter sets[1]", "null",
+                        "(non-null)"),
                 row("spread over no sets", () -> spread.run(ReliabilityStructures::forSet, List.of()),
                         "number of parameter sets", "0", "[1, ...) (is wurtzkit-materials-data on the class path?)"),
                 row("spread with no threads", () -> spread.withThreads(0), "thread count", "0", "[1, 1024]"));

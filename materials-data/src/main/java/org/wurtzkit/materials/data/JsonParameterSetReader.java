@@ -2,6 +2,7 @@ package org.wurtzkit.materials.data;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.StreamReadConstraints;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
@@ -108,8 +109,25 @@ public final class JsonParameterSetReader {
     /** The only format version this reader understands. */
     public static final int FORMAT_VERSION = 1;
 
-    /** Default JSON: no comments, no NaN/Infinity literals, no single quotes. */
-    private static final JsonFactory FACTORY = JsonFactory.builder().build();
+    /**
+     * Largest parameter-set file read (bytes): 1 MiB, some 40 times the built-in sets (about 25 kB).
+     * A larger file is refused while it is read, before it can fill the heap.
+     */
+    public static final long MAX_FILE_BYTES = 1L << 20;
+    /**
+     * Most JSON values (objects, arrays, strings, numbers, literals) a parameter-set file may hold:
+     * 20 000, some 40 times the built-in sets (under 500 each).
+     */
+    public static final int MAX_JSON_VALUES = 20_000;
+
+    /**
+     * Default JSON (no comments, no NaN/Infinity literals, no single quotes), with Jackson's stream
+     * read constraints bounding the document length, string length and nesting.
+     */
+    private static final JsonFactory FACTORY = JsonFactory.builder()
+            .streamReadConstraints(StreamReadConstraints.builder().maxDocumentLength(MAX_FILE_BYTES)
+                    .maxStringLength((int) MAX_FILE_BYTES).maxNestingDepth(64).build())
+            .build();
 
     private static final String[] ROOT_KEYS = {"formatVersion", "name", "description",
         "recommendedPolarizationModel", "conductionBandOffsetFraction", "sources", "binaries", "alloyScattering", "bowing"};

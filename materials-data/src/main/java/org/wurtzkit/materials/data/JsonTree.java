@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import java.io.IOException;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
@@ -11,6 +12,7 @@ import java.util.Collections;
 import java.util.Deque;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 /**
@@ -167,6 +169,7 @@ final class JsonTree {
         private final Deque<String> stack = new ArrayDeque<>();
         private Obj root;
         private Duplicate firstDuplicate;
+        private int values;
 
         TreeBuilder(JsonParser p) {
             this.p = p;
@@ -185,6 +188,10 @@ final class JsonTree {
                             "unexpected content after the end of the top-level value", null);
                 }
                 return new Parsed(n, firstDuplicate);
+            } catch (StreamConstraintsException e) {
+                throw new SyntaxFailure(root, path(stack), Math.max(1, lineNow()), String.format(Locale.ROOT,
+                        "the file exceeds the reader's limits (at most %d bytes, strings and nesting within them): %s",
+                        JsonParameterSetReader.MAX_FILE_BYTES, e.getOriginalMessage().replace('\n', ' ')), e);
             } catch (JsonProcessingException e) {
                 JsonLocation loc = e.getLocation();
                 int line = loc != null && loc.getLineNr() > 0 ? loc.getLineNr() : Math.max(1, lineNow());
@@ -205,6 +212,11 @@ final class JsonTree {
 
         private Node value(JsonToken t) throws IOException, SyntaxFailure {
             int line = tokenLine();
+            if (++values > JsonParameterSetReader.MAX_JSON_VALUES) {
+                throw new SyntaxFailure(root, path(stack), line, String.format(Locale.ROOT,
+                        "the file holds more than %d JSON values (a built-in parameter set has under 500)",
+                        JsonParameterSetReader.MAX_JSON_VALUES), null);
+            }
             switch (t) {
                 case START_OBJECT:
                     return object(line);

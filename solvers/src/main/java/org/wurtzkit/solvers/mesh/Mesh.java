@@ -1,6 +1,7 @@
 package org.wurtzkit.solvers.mesh;
 
 import java.util.Arrays;
+import java.util.Locale;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 
@@ -9,6 +10,14 @@ import org.wurtzkit.errors.Require;
  * Interfaces and other required points are nodes of the mesh.
  */
 public final class Mesh {
+    /**
+     * Most nodes a generated mesh may have: 500 000, e.g. a 1 mm stack at 2 nm everywhere (the
+     * default policy gives a 1 mm layer 20 000 nodes). A solve keeps some 30 arrays of this length,
+     * about 120 MB at the limit; {@link #generate} counts the nodes before it allocates them and
+     * refuses a larger mesh.
+     */
+    public static final int MAX_NODES = 500_000;
+
     private final double[] nodes;
 
     private Mesh(double[] nodes) {
@@ -41,6 +50,9 @@ public final class Mesh {
      *                    total thickness (m)
      * @param policy      the spacing policy
      * @return the mesh
+     * @throws InvalidParameterException if the breakpoints are not strictly increasing from 0, or the
+     *                                   mesh would have more than {@link #MAX_NODES} nodes (counted
+     *                                   before any is allocated)
      */
     public static Mesh generate(double[] breakpoints, MeshPolicy policy) {
         Require.nonNull("mesh policy", policy);
@@ -51,9 +63,8 @@ public final class Mesh {
         double h0 = policy.interfaceSpacing();
         double c = policy.growthRatio() - 1;
         double hMax = policy.maxSpacing();
-        double[] buf = new double[64];
-        int n = 0;
-        buf[n++] = 0;
+        // count first, allocate after: a mesh beyond MAX_NODES is refused before it exhausts the heap
+        double count = 1;
         for (int s = 0; s + 1 < breakpoints.length; s++) {
             double a = breakpoints[s];
             double len = breakpoints[s + 1] - a;
@@ -61,6 +72,21 @@ public final class Mesh {
                 throw new InvalidParameterException("mesh breakpoint " + (s + 1) + " (m)",
                         Double.toString(breakpoints[s + 1]), "(" + a + ", ...) (strictly increasing)");
             }
+            count += Math.max(2, Math.ceil(2 * phiHalf(len / 2, h0, c, hMax)));
+        }
+        if (count > MAX_NODES) {
+            throw new InvalidParameterException("mesh node count", String.format(Locale.ROOT, "%.4g", count),
+                    String.format(Locale.ROOT, "[3, %d] (a stack of %.4g m with %d breakpoints, mesh policy: "
+                            + "interface spacing %.3g m, growth ratio %.3g, maximum spacing %.3g m; use fewer or thinner "
+                            + "layers or a coarser policy)", MAX_NODES, breakpoints[breakpoints.length - 1],
+                            breakpoints.length, h0, policy.growthRatio(), hMax));
+        }
+        double[] buf = new double[(int) count];
+        int n = 0;
+        buf[n++] = 0;
+        for (int s = 0; s + 1 < breakpoints.length; s++) {
+            double a = breakpoints[s];
+            double len = breakpoints[s + 1] - a;
             double total = 2 * phiHalf(len / 2, h0, c, hMax);
             // uniform: len / h0 may land a round-off above an integer, which is not one more cell
             int cells = Math.max(2, (int) Math.ceil(c == 0 ? total * (1 - 1e-12) : total));

@@ -14,14 +14,18 @@ import org.wurtzkit.solvers.linalg.Tridiagonal;
  * F_i = D_{i+1/2} - D_{i-1/2} - Q_i(phi_i) with D_k = -eps_k (phi_{k+1} - phi_k)/h_k + P_k (box
  * integration, S. Selberherr, Analysis and Simulation of Semiconductor Devices, Springer 1984), and
  * F = phi - phi_D on Dirichlet rows; its Jacobian is tridiagonal, so each step is one O(N) solve.
- * The step is first limited so that no node moves more than the option's maximum step, then halved
- * until the residual norm shows sufficient decrease (backtracking line search with the Armijo
- * condition, J. E. Dennis and R. B. Schnabel, Numerical Methods for Unconstrained Optimization and
- * Nonlinear Equations, SIAM 1996, sec. 6.3), which keeps the iteration convergent where the
- * Jacobian is nearly singular (e.g. a free surface whose states are all full or all empty). With
- * both boundaries free, the uniform level of phi is fixed only by global neutrality: it is restored
- * by a scalar root search (Brent) before the first step and after every step that the maximum step
- * limited, so that Newton need not find it.
+ * A step that would move some node by more than the option's maximum step is first tried with each
+ * node's change clamped to that maximum (componentwise damping of the potential update, common
+ * practice in device simulation, no source) and kept if it lowers the residual norm; otherwise it
+ * is scaled so that no node moves more than the maximum, then halved until the residual norm shows
+ * sufficient decrease (backtracking line search with the Armijo condition, J. E. Dennis and
+ * R. B. Schnabel, Numerical Methods for Unconstrained Optimization and Nonlinear Equations, SIAM
+ * 1996, sec. 6.3), which keeps the iteration convergent where the Jacobian is nearly singular (e.g.
+ * a free surface whose states are all full or all empty). With both boundaries free, the uniform
+ * level of phi is fixed only by global neutrality: it is restored by a scalar root search (Brent)
+ * before the first step and after every step that the maximum step limited, so that Newton need not
+ * find it; after the first step a shift that would raise the residual norm is not taken (it would
+ * undo the uniform part of the step, and Newton and the root search would cycle).
  *
  * <p>One instance per solve: it owns the scratch arrays, so repeated solves allocate nothing.
  * Not thread-safe.
@@ -101,15 +105,43 @@ final class NewtonPoisson {
      *                 out; phi then holds the last iterate
      */
     int solve(double[] phi, double[] ref, QuantumStates qs, double tolerance) {
+        return solve(phi, ref, qs, tolerance, maxSteps);
+    }
+
+    /**
+     * As {@link #solve(double[], double[], QuantumStates, double)}, with its own step budget (the
+     * cold start's budget grows with the potential it must carry).
+     *
+     * @param phi       start (Dirichlet values already set); the solution on return (V)
+     * @param ref       potential at which the subbands were computed (V), or null without subbands
+     * @param qs        the subbands, or null for classical electrons everywhere
+     * @param tolerance on max |delta phi| of a Newton step (V)
+     * @param budget    Newton steps allowed
+     * @return the number of Newton steps taken
+     * @throws Failure as the four-argument form
+     */
+    int solve(double[] phi, double[] ref, QuantumStates qs, double tolerance, int budget) {
         int n = d.n;
         int steps = 0;
         boolean limited = true;
         charges.evaluate(phi, ref, qs, q, dq, cell);
         double norm = residual(phi);
-        for (int it = 0; it < maxSteps; it++) {
-            if (floating && limited && neutralityShift(phi, ref, qs)) {
-                charges.evaluate(phi, ref, qs, q, dq, cell);
-                norm = residual(phi);
+        for (int it = 0; it < budget; it++) {
+            if (floating && limited) {
+                System.arraycopy(phi, 0, backup, 0, n);
+                if (neutralityShift(phi, ref, qs)) {
+                    charges.evaluate(phi, ref, qs, q, dq, cell);
+                    double shifted = residual(phi);
+                    if (it == 0 || shifted <= norm) {
+                        norm = shifted;
+                    } else {
+                        // the shift would undo the last step's uniform part and raise |F|: Newton and
+                        // the neutrality root then cycle; keep the step instead
+                        System.arraycopy(backup, 0, phi, 0, n);
+                        charges.evaluate(phi, ref, qs, q, dq, cell);
+                        norm = residual(phi);
+                    }
+                }
             }
             jacobian();
             if (floating) {
@@ -134,8 +166,22 @@ final class NewtonPoisson {
             System.arraycopy(phi, 0, backup, 0, n);
             limited = big > maxStep;
             double t = limited ? maxStep / big : 1;
-            double trialNorm;
-            while (true) {
+            double trialNorm = Double.NaN;
+            boolean clamped = false;
+            if (limited) {
+                // where the Newton step would move some nodes by far more than the maximum (no charge
+                // responds there in the linear model, e.g. frozen-out dopants at a few kelvin, or a
+                // gate 30 V away from the start), scaling the whole step to the maximum leaves the
+                // rest of the stack nearly where it was: try the step with each node's change clamped
+                // to the maximum first, and keep it if it lowers |F|
+                for (int i = 0; i < n; i++) {
+                    phi[i] = backup[i] + Math.max(-maxStep, Math.min(maxStep, delta[i]));
+                }
+                charges.evaluate(phi, ref, qs, q, dq, cell);
+                trialNorm = residual(phi);
+                clamped = trialNorm < norm;
+            }
+            while (!clamped) {
                 for (int i = 0; i < n; i++) {
                     phi[i] = backup[i] + t * delta[i];
                 }
@@ -152,7 +198,7 @@ final class NewtonPoisson {
             }
         }
         throw new Failure(String.format(Locale.ROOT, "Newton-Poisson not converged in %d steps (tolerance %.3g V)",
-                maxSteps, tolerance), steps, lastIterate(phi), null);
+                budget, tolerance), steps, lastIterate(phi), null);
     }
 
     /**

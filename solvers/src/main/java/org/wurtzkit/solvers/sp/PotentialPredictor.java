@@ -48,7 +48,9 @@ public final class PotentialPredictor {
      * @param target     the parameter of the point to predict, finite
      * @return the predicted potential on the latest solution's mesh (V)
      * @throws org.wurtzkit.errors.InvalidParameterException on a count out of range, mismatched lengths,
-     *                                                      or non-finite or repeated parameters
+     *                                                      non-finite or repeated parameters, or a target
+     *                                                      so far from closely spaced parameters that the
+     *                                                      extrapolation overflows
      */
     public static double[] extrapolate(double[] parameters, Solution[] solutions, double target) {
         Require.nonNull("extrapolation parameters", parameters);
@@ -86,6 +88,11 @@ public final class PotentialPredictor {
                 }
             }
             weight[j] = l;
+            if (!Double.isFinite(l)) {
+                throw new org.wurtzkit.errors.InvalidParameterException("extrapolation target parameter",
+                        Double.toString(target), "a value whose Lagrange weights through the parameters "
+                                + Arrays.toString(parameters) + " are finite (it lies too many parameter spacings away)");
+            }
         }
         for (int i = 0; i < out.length; i++) {
             out[i] *= weight[m - 1];
@@ -94,6 +101,14 @@ public final class PotentialPredictor {
             double[] pj = solutions[j].potential();
             for (int i = 0; i < out.length; i++) {
                 out[i] += weight[j] * pj[i];
+            }
+        }
+        for (int i = 0; i < out.length; i++) {
+            if (!Double.isFinite(out[i])) {
+                throw new org.wurtzkit.errors.InvalidParameterException("extrapolation target parameter",
+                        Double.toString(target), "a value whose extrapolated potential through the parameters "
+                                + Arrays.toString(parameters) + " is finite (the weights overflow the potential at node "
+                                + i + ")");
             }
         }
         return out;

@@ -87,7 +87,7 @@ public sealed interface QuantumWindows permits QuantumWindows.Automatic, Quantum
          *         finite or outside its documented range
          */
         public Explicit {
-            windows = List.copyOf(windows);
+            windows = Require.nonNullElements("quantum windows", windows);
             if (windows.isEmpty()) {
                 throw new InvalidParameterException("number of quantum windows", "0", "[1, ...) (use QuantumWindows.none())");
             }

@@ -19,13 +19,23 @@ import org.wurtzkit.structure.Structure;
  * Semiconductor Devices, Springer 1984): the polarization sheet charges appear where P changes, at
  * interface nodes, and inside graded layers. It is solved by damped Newton iteration with a
  * backtracking line search ({@code NewtonPoisson}); each step is one O(N) tridiagonal solve.</li>
- * <li>A classical solve (Fermi-Dirac electrons everywhere) gives the starting potential.</li>
+ * <li>A classical solve (Fermi-Dirac electrons everywhere) gives the starting potential. It starts
+ * from flat bands at the bottom level; its Newton budget is the option's plus
+ * {@value #COLD_START_STEPS_PER_MAX_STEP} steps per maximum step of the potential between that start
+ * and a Dirichlet contact beyond {@value #COLD_START_FREE_CARRY} V, so that a gate at -100 V gets the
+ * steps it needs to be reached.</li>
  * <li>The outer loop is the predictor-corrector scheme of A. Trellakis, A. T. Galick, A. Pacelli
  * and U. Ravaioli, J. Appl. Phys. 81, 7880 (1997): the subbands of each quantum window are computed
  * for the current potential (BenDaniel-Duke effective-mass equation, lowest states by Sturm
  * bisection and inverse iteration, O(N k)); then Poisson is solved by Newton with the subband
  * density's first-order dependence on the potential; repeated until max |delta phi| falls below
- * the tolerance.</li>
+ * the tolerance. From the first iteration (after the third) where the change shrinks by less than
+ * a factor 0.7, the next input is given by Anderson mixing (D. G. Anderson, J. ACM 12, 547 (1965);
+ * H. F. Walker and P. Ni, SIAM J. Numer. Anal. 49, 1715 (2011)) of depth
+ * {@value #ANDERSON_DEPTH} and mixing parameter {@value #ANDERSON_BETA}, restarted when the change
+ * grows. A converged solve returns the Newton-Poisson solution of its last iteration, never a mixed
+ * potential, so Gauss's law holds to the Newton tolerance and the change it reports is that of the
+ * potential it returns.</li>
  * </ol>
  *
  * <p>Every failure inside a solve (a Newton-Poisson solve that does not converge or meets a singular
@@ -39,16 +49,43 @@ public final class SelfConsistentSolver {
     private static final double CLASSICAL_START_TOLERANCE = 1e-4;
     /** Newton tolerance of the first Schroedinger-Poisson iteration (V). */
     private static final double INITIAL_INNER_TOLERANCE = 1e-4;
-    /** Outer iteration from which a stalled change triggers under-relaxation. */
+    /** Outer iteration from which a stalled change switches on Anderson mixing. */
     private static final int STAGNATION_START = 3;
     /** A change that shrinks by less than this factor counts as stalled. */
     private static final double STAGNATION_RATIO = 0.7;
-    /** Smallest under-relaxation factor of the outer update. */
-    private static final double MIN_MIXING = 0.05;
-    /** Factor applied to the under-relaxation each time the outer change stalls. */
-    private static final double MIXING_REDUCTION = 0.5;
+    /**
+     * Differences kept by the Anderson mixing of the outer loop: a small history, restarted on
+     * failure. Measured on the wide fuzz of issue #14 and its stalling reproducer: depths 3-6 and
+     * beta 0.3-0.5 all converge; depth 3 with beta 0.5 took the fewest iterations.
+     */
+    static final int ANDERSON_DEPTH = 3;
+    /** Mixing parameter beta of the Anderson update: half of the new residual enters each step. */
+    static final double ANDERSON_BETA = 0.5;
+    /**
+     * Potential the cold start's plain Newton budget carries between its flat start and a Dirichlet
+     * contact (V): with steps clamped to the 0.5 V default, a -30 V gate takes about 60 of the 200
+     * default steps, so the first 10 V need no extra steps.
+     */
+    static final double COLD_START_FREE_CARRY = 10;
+    /**
+     * Extra cold-start Newton steps per maximum step of carry beyond {@link #COLD_START_FREE_CARRY}:
+     * two, one to move and one for a step the line search halves.
+     */
+    static final double COLD_START_STEPS_PER_MAX_STEP = 2;
     /** Inner tolerance as a fraction of the previous outer change of the potential. */
     private static final double INNER_TOLERANCE_FACTOR = 1e-3;
+
+    /**
+     * Largest |potential| accepted in an initial guess (V): gate biases are within [-100, 20] V and
+     * band offsets a few eV, so a potential beyond 1000 V is no guess of any stack.
+     */
+    public static final double MAX_GUESS_POTENTIAL = 1000;
+    /**
+     * Lowest temperature the solver accepts (K). Solves are checked down to 4 K by the fuzz and at
+     * 1 K on a HEMT with a gate and with a free surface; far below, kT (86 ueV at 1 K) vanishes
+     * against the band energies it divides (at 1e-300 K it underflows and the statistics turn NaN).
+     */
+    public static final double MIN_TEMPERATURE = 1;
 
     private final SolverOptions options;
 
@@ -97,12 +134,17 @@ public final class SelfConsistentSolver {
      *
      * @param structure the stack
      * @param depth     depths of the guess (m), increasing, or null for a cold start
-     * @param potential potential of the guess at those depths (V), finite, or null for a cold start
+     * @param potential potential of the guess at those depths (V), within +-{@link #MAX_GUESS_POTENTIAL},
+     *                  or null for a cold start
      * @return the converged solution
      * @throws NotConvergedException with the convergence record and the last iterate
      */
     public Solution solve(Structure structure, double[] depth, double[] potential) {
         Require.nonNull("structure", structure);
+        if (!(structure.temperatureK() >= MIN_TEMPERATURE)) {
+            throw new org.wurtzkit.errors.InvalidParameterException("temperature of the structure (K)",
+                    Double.toString(structure.temperatureK()), "[" + MIN_TEMPERATURE + ", 2000] (the solver's range)");
+        }
         if ((depth == null) != (potential == null) || (depth != null && depth.length != potential.length)) {
             throw new org.wurtzkit.errors.InvalidParameterException("initial guess",
                     (depth == null ? "null" : depth.length) + " depths, " + (potential == null ? "null" : potential.length)
@@ -115,6 +157,8 @@ public final class SelfConsistentSolver {
             }
             for (int i = 0; i < depth.length; i++) {
                 Require.finite("initial guess potential[" + i + "] (V)", potential[i]);
+                Require.inRange("initial guess potential[" + i + "] (V)", potential[i], -MAX_GUESS_POTENTIAL,
+                        MAX_GUESS_POTENTIAL);
                 Require.finite("initial guess depth[" + i + "] (m)", depth[i]);
                 if (i > 0 && !(depth[i] > depth[i - 1])) {
                     throw new org.wurtzkit.errors.InvalidParameterException("initial guess depth[" + i + "] (m)",
@@ -134,7 +178,11 @@ public final class SelfConsistentSolver {
         if (cold || nw == 0) {
             // classical start: Fermi-Dirac electrons everywhere
             double tolerance = nw == 0 ? options.newtonTolerance() : CLASSICAL_START_TOLERANCE;
-            newtonSteps += poisson(d, poisson, phi, null, null, tolerance, 0, newtonSteps, history);
+            int budget = options.maxNewtonIterations();
+            if (cold) {
+                budget = coldStartBudget(d, phi, budget, options.maxNewtonStep());
+            }
+            newtonSteps += poisson(d, poisson, phi, null, null, tolerance, budget, 0, newtonSteps, history);
         }
         if (nw == 0) {
             ConvergenceRecord rec = new ConvergenceRecord(true, 0, newtonSteps, new double[0],
@@ -143,7 +191,8 @@ public final class SelfConsistentSolver {
         }
         QuantumStates qs = new QuantumStates(d);
         double[] ref = new double[d.n];
-        double mixing = 1;
+        int mixingFrom = -1;
+        AndersonMixing mixing = null;
         for (int it = 0; it < options.maxIterations(); it++) {
             // 1. subbands of every window for the current potential
             try {
@@ -158,33 +207,37 @@ public final class SelfConsistentSolver {
             // iterations are solved to the full Newton tolerance
             double inner = it == 0 ? INITIAL_INNER_TOLERANCE
                     : Math.max(options.newtonTolerance(), INNER_TOLERANCE_FACTOR * history[it - 1]);
-            newtonSteps += poisson(d, poisson, phi, ref, qs, Math.min(inner, INITIAL_INNER_TOLERANCE), it, newtonSteps,
-                    history);
-            // 3. the outer change, under-relaxed when it stalls
+            newtonSteps += poisson(d, poisson, phi, ref, qs, Math.min(inner, INITIAL_INNER_TOLERANCE),
+                    options.maxNewtonIterations(), it, newtonSteps, history);
+            // 3. the outer change G(ref) - ref
             double delta = 0;
             for (int i = 0; i < d.n; i++) {
                 delta = Math.max(delta, Math.abs(phi[i] - ref[i]));
             }
             history[it] = delta;
-            if (it >= STAGNATION_START && delta > STAGNATION_RATIO * history[it - 1]) {
-                // charge sloshing between coupled wells: the predictor over-corrects; under-relax
-                // the outer update, more each time the change fails to shrink
-                mixing = Math.max(MIN_MIXING, MIXING_REDUCTION * mixing);
-            }
-            if (mixing < 1) {
-                for (int i = 0; i < d.n; i++) {
-                    phi[i] = ref[i] + mixing * (phi[i] - ref[i]);
-                }
-            }
-            // 4. converged when the potential no longer moves
+            // 4. converged when the potential no longer moves; phi is then the unmixed Newton-Poisson
+            // solution for the subbands at ref, so it satisfies Gauss's law to the Newton tolerance
             if (delta < options.tolerance()) {
                 // the subbands of the last iteration, with the predictor's first-order shift to phi,
                 // are the converged density: no further Schroedinger solve is needed
                 ConvergenceRecord rec = new ConvergenceRecord(true, it + 1, newtonSteps,
                         Arrays.copyOf(history, it + 1), String.format(Locale.ROOT,
-                                "converged: max |delta phi| = %.3g V < %.3g V after %d iterations", delta,
-                                options.tolerance(), it + 1));
+                                "converged: max |delta phi| = %.3g V < %.3g V after %d iterations%s", delta,
+                                options.tolerance(), it + 1, mixing == null ? ""
+                                        : String.format(Locale.ROOT, " (Anderson mixing from iteration %d)",
+                                                mixingFrom + 1)));
                 return new Solution(d, phi, ref, qs, charges.report(phi, ref, qs), rec, cold);
+            }
+            // 5. a change that stalls (charge sloshing between coupled wells, or a degenerate gas in
+            // many subbands, where the predictor over- or under-corrects) switches on Anderson mixing
+            // for the rest of the solve; it replaces phi by the next input
+            if (mixing == null && it >= STAGNATION_START && delta > STAGNATION_RATIO * history[it - 1]) {
+                mixing = new AndersonMixing(d.n, ANDERSON_DEPTH, ANDERSON_BETA);
+                mixingFrom = it;
+            }
+            if (mixing != null) {
+                mixing.next(ref, phi);
+                applyDirichlet(d, phi);
             }
         }
         int m = options.maxIterations();
@@ -201,9 +254,9 @@ public final class SelfConsistentSolver {
      * @throws NotConvergedException when it fails, with the record so far and the last iterate
      */
     private static int poisson(Device d, NewtonPoisson poisson, double[] phi, double[] ref, QuantumStates qs, double tolerance,
-            int outer, int stepsBefore, double[] history) {
+            int budget, int outer, int stepsBefore, double[] history) {
         try {
-            return poisson.solve(phi, ref, qs, tolerance);
+            return poisson.solve(phi, ref, qs, tolerance, budget);
         } catch (NewtonPoisson.Failure f) {
             ConvergenceRecord rec = new ConvergenceRecord(false, outer, stepsBefore + f.steps,
                     Arrays.copyOf(history, outer), f.getMessage());
@@ -238,6 +291,25 @@ public final class SelfConsistentSolver {
         double[] phi = new double[d.n];
         Arrays.fill(phi, level);
         return phi;
+    }
+
+    /**
+     * The Newton budget of the cold start: the option's budget plus
+     * {@link #COLD_START_STEPS_PER_MAX_STEP} steps per maximum step of the carry beyond
+     * {@link #COLD_START_FREE_CARRY}, the carry being the potential between the flat start and the
+     * farther Dirichlet contact. A gate at -100 V (the bottom of its range) is about 100 V away from
+     * the flat start and needs some 200 steps of 0.5 V; the plain default budget is 200.
+     */
+    static int coldStartBudget(Device d, double[] phi, int budget, double maxStep) {
+        double carry = 0;
+        if (d.topDirichlet) {
+            carry = Math.max(carry, Math.abs(d.phiTop - phi[1]));
+        }
+        if (d.bottomDirichlet) {
+            carry = Math.max(carry, Math.abs(d.phiBottom - phi[d.n - 2]));
+        }
+        double extra = Math.ceil(COLD_START_STEPS_PER_MAX_STEP * Math.max(0, carry - COLD_START_FREE_CARRY) / maxStep);
+        return (int) Math.min(Integer.MAX_VALUE, budget + extra);
     }
 
     private static double[] interpolate(double[] z, double[] v, Device d) {

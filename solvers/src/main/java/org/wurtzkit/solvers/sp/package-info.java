@@ -16,14 +16,17 @@
  * derivative; each Newton step one O(N) tridiagonal solve). The damped Newton-Poisson solver
  * (residual, Jacobian, backtracking line search, neutrality shift, every threshold named) is the
  * package-private {@code NewtonPoisson}; it returns its step count or fails with the last finite
- * iterate.</li>
+ * iterate. Its budget grows with the potential it must carry from the flat start to a gate
+ * (issue #14: -30 V), and a step limited to the maximum is first tried clamped node by node.</li>
  * <li><b>Outer loop</b> (A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81,
  * 7880 (1997)): {@code QuantumStates} solves the BenDaniel-Duke equation in every quantum window
  * ({@link org.wurtzkit.solvers.sp.QuantumWindows}) for the lowest subbands, O(N k); then Newton-Poisson
  * runs with the predictor density g<sub>k</sub> ln(1 + e<sup>eta</sup>) |psi<sub>k</sub>|<sup>2</sup>,
- * whose one home is {@code SubbandDensity}; repeat until max |delta phi| is below the tolerance. An
- * eigen-solver failure inside the loop ends the solve as a {@code NotConvergedException} with the
- * record so far.</li>
+ * whose one home is {@code SubbandDensity}; repeat until max |delta phi| is below the tolerance.
+ * Once the change stalls, {@code AndersonMixing} (package-private, D. G. Anderson, J. ACM 12, 547
+ * (1965)) gives the next input; a converged solve returns the unmixed Newton-Poisson solution, so
+ * the change it reports is that of the potential it returns. An eigen-solver failure inside the
+ * loop ends the solve as a {@code NotConvergedException} with the record so far.</li>
  * <li><b>Result or failure.</b> A converged solve returns a {@code Solution} (copies, no NaN); one
  * that runs out of budget throws {@link org.wurtzkit.solvers.sp.NotConvergedException} carrying its
  * record and last finite iterate.</li>

@@ -11,9 +11,13 @@ import org.wurtzkit.structure.TopBoundary;
  * A gate-bias sweep of the full self-consistent solver with continuation: the first bias is solved
  * from a cold start, every further bias starts from the solution of the previous one
  * ({@link SelfConsistentSolver#solve(Structure, Solution)}), which skips the classical pre-solve of
- * a cold start and keeps the iteration on the branch of its neighbour. If a continued solve fails, the point is retried from a cold start; if that
- * fails too, the point is recorded as failed ({@link BiasSweepResult#failures()}) and the sweep
- * goes on from the last converged solution.
+ * a cold start and keeps the iteration on the branch of its neighbour. If a continued solve right
+ * after a converged point fails, the point is retried from a cold start; if that fails too, or if
+ * the point before had failed as well (then one attempt only, so a stretch that does not converge
+ * costs one solve per point), the point is recorded as failed with what was tried and why
+ * ({@link BiasSweepResult#failures()}) and the sweep goes on from the last converged solution.
+ * The sweep stops with a {@link java.util.concurrent.CancellationException} before the next point
+ * once its thread is interrupted.
  *
  * <p>Stateless and thread-safe (the solver is).
  */
@@ -39,6 +43,7 @@ public final class BiasSweep {
      * @param structure a stack with a Schottky gate; its own bias is replaced by each grid value
      * @param biasesV   the biases (V), in solving order
      * @return the sweep
+     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted
      */
     public BiasSweepResult run(Structure structure, double... biasesV) {
         return run(structure, BiasGrid.of(biasesV));
@@ -52,6 +57,8 @@ public final class BiasSweep {
      * @param grid      the biases
      * @return the sweep
      * @throws InvalidParameterException if the top boundary is not a Schottky gate or a bias is out of range
+     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted (checked
+     *         before every point; its interrupt flag stays set)
      */
     public BiasSweepResult run(Structure structure, BiasGrid grid) {
         Require.nonNull("structure", structure);
@@ -67,7 +74,7 @@ public final class BiasSweep {
         }
         Solution[] solutions = new Solution[n];
         PointFailure.Reason[] failures = new PointFailure.Reason[n];
-        Continuation.solveInOrder(solver, at, grid.values(), solutions, failures);
+        Continuation.solveInOrder(solver, at, grid.values(), solutions, failures, "bias sweep");
         return new BiasSweepResult(structure, grid, solutions, failures, solver.options());
     }
 }

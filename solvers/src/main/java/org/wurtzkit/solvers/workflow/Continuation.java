@@ -1,6 +1,8 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.Arrays;
+import java.util.Locale;
+import java.util.concurrent.CancellationException;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
@@ -19,20 +21,31 @@ final class Continuation {
     /**
      * Solves the structures in order, each from a guess extrapolated through the last converged
      * solutions (the first cold; then linear from two, then quadratic from three,
-     * {@link PotentialPredictor#extrapolate(double[], Solution[], double)}); a failed continued
-     * solve is retried cold; a point that fails both ways gets a message in {@code failures} and a
-     * null solution, and the predictor restarts from the last success.
+     * {@link PotentialPredictor#extrapolate(double[], Solution[], double)}). A failed continued
+     * solve right after a converged point is retried cold once; a point after a failed one costs a
+     * single bounded attempt (continued from the last success), so a stretch of a sweep where the
+     * stack does not converge costs one solve per point, not two. A failed point gets a message in
+     * {@code failures} saying what was tried and why it failed, and a null solution; the predictor
+     * restarts from the last success. The calling thread's interrupt flag is checked before every
+     * point.
      *
      * @param solver    the solver
      * @param at        the structures, in solving order
      * @param parameter the sweep parameter of each structure (bias or temperature), distinct
      * @param solutions output: converged solutions (null where failed)
-     * @param failures  output: why each point failed (null where converged)
+     * @param failures  output: why each point failed, saying what was tried (null where converged)
+     * @param what      the sweep's name for the interruption message, e.g. "bias sweep"
+     * @throws CancellationException if the calling thread is interrupted (its flag stays set); the
+     *                               points before it are solved, the rest are not
      */
     static void solveInOrder(SelfConsistentSolver solver, Structure[] at, double[] parameter, Solution[] solutions,
-            PointFailure.Reason[] failures) {
+            PointFailure.Reason[] failures, String what) {
         Solution lastSuccess = null;
         for (int i = 0; i < at.length; i++) {
+            if (Thread.currentThread().isInterrupted()) {
+                throw new CancellationException(String.format(Locale.ROOT, "%s interrupted after %d of %d points", what,
+                        i, at.length));
+            }
             // the predictor uses the run of consecutive successes just before this point
             int held = 0;
             while (held < PREDICTOR_POINTS && i - 1 - held >= 0 && solutions[i - 1 - held] != null) {
@@ -51,6 +64,9 @@ final class Continuation {
             } catch (InvalidParameterException | WurtzkitException first) {
                 if (lastSuccess == null) {
                     failures[i] = PointFailure.Reason.of(first);
+                } else if (i > 0 && solutions[i - 1] == null) {
+                    failures[i] = new PointFailure.Reason(first.kind(), "continued from the last converged point: "
+                            + PointFailure.Reason.of(first).message() + " (no cold retry: the point before failed too)");
                 } else {
                     try {
                         solutions[i] = solver.solve(at[i]);

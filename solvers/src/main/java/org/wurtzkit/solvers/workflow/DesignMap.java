@@ -111,7 +111,10 @@ public final class DesignMap {
      * Runs the map. Blocks until every point is done.
      *
      * @return the map
-     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted
+     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted (with one
+     *         thread checked before every point; with several the wait ends at once and the workers are
+     *         interrupted; the flag stays set), or if a worker thread was interrupted, e.g. by an
+     *         evaluator that caught {@link InterruptedException} and restored the flag
      */
     public DesignMapResult run() {
         int n = size();

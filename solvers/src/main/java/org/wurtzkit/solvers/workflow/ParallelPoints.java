@@ -2,12 +2,14 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.ThreadFactory;
+import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.WurtzkitException;
@@ -43,6 +45,9 @@ final class ParallelPoints {
      * @param task     the computation
      * @param progress receives (done, total), serialized
      * @return one outcome per point
+     * @throws CancellationException if the calling thread is interrupted (checked before every point
+     *                               with one thread; with several, the wait ends at once and the
+     *                               workers are interrupted), or a worker thread was interrupted
      */
     static Outcome[] run(int count, int threads, Task task, ProgressListener progress) {
         Outcome[] out = new Outcome[count];
@@ -57,6 +62,9 @@ final class ParallelPoints {
         int workers = Math.min(threads, count);
         if (workers <= 1) {
             for (int i = 0; i < count; i++) {
+                if (Thread.currentThread().isInterrupted()) {
+                    throw interrupted(i, count, null);
+                }
                 out[i] = one(task, i);
                 tick.run();
             }
@@ -71,12 +79,23 @@ final class ParallelPoints {
         };
         ExecutorService exec = Executors.newFixedThreadPool(workers, factory);
         AtomicInteger next = new AtomicInteger();
+        AtomicBoolean stop = new AtomicBoolean();
         List<Future<?>> futures = new ArrayList<>(workers);
         try {
             for (int w = 0; w < workers; w++) {
                 futures.add(exec.submit(() -> {
-                    for (int i = next.getAndIncrement(); i < count; i = next.getAndIncrement()) {
+                    // the flag is checked before a point is claimed, so no claimed point is left
+                    // empty; a worker whose flag is set (a task restored it, or shutdownNow) stops
+                    // every worker before its next point, and the map reports the points not done
+                    while (true) {
                         if (Thread.currentThread().isInterrupted()) {
+                            stop.set(true);
+                        }
+                        if (stop.get()) {
+                            return;
+                        }
+                        int i = next.getAndIncrement();
+                        if (i >= count) {
                             return;
                         }
                         out[i] = one(task, i);
@@ -89,9 +108,11 @@ final class ParallelPoints {
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-            CancellationException c = new CancellationException("workflow interrupted");
-            c.initCause(e);
-            throw c;
+            int finished;
+            synchronized (lock) {
+                finished = done[0];
+            }
+            throw interrupted(finished, count, e);
         } catch (ExecutionException e) {
             Throwable cause = e.getCause();
             if (cause instanceof RuntimeException r) {
@@ -104,7 +125,31 @@ final class ParallelPoints {
         } finally {
             exec.shutdownNow();
         }
+        for (int i = 0; i < count; i++) {
+            if (out[i] == null) {
+                // a worker thread was interrupted (e.g. a task caught InterruptedException and
+                // restored the flag, as it should): the workflow was cancelled from inside
+                int finished;
+                synchronized (lock) {
+                    finished = done[0];
+                }
+                CancellationException c = new CancellationException(String.format(Locale.ROOT,
+                        "workflow interrupted: point %d of %d not computed because its worker thread was interrupted "
+                                + "(%d points done)", i, count, finished));
+                throw c;
+            }
+        }
         return out;
+    }
+
+    /** The exception of an interrupted workflow, with how far it got. */
+    private static CancellationException interrupted(int finished, int count, InterruptedException cause) {
+        CancellationException c = new CancellationException(String.format(Locale.ROOT,
+                "workflow interrupted after %d of %d points", finished, count));
+        if (cause != null) {
+            c.initCause(cause);
+        }
+        return c;
     }
 
     private static Outcome one(Task task, int i) {

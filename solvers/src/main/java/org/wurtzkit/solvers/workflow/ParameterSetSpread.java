@@ -75,10 +75,12 @@ public final class ParameterSetSpread {
      * @param factory the structure for a set; must be thread-safe
      * @param sets    the sets, at least one
      * @return the spread
+     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted, or a
+     *         worker thread was (the same rules as {@link DesignMap#run()})
      */
     public SpreadResult run(Function<ParameterSet, Structure> factory, List<ParameterSet> sets) {
         Require.nonNull("structure factory", factory);
-        Require.nonNull("parameter sets", sets);
+        Require.nonNullElements("parameter sets", sets);
         if (sets.isEmpty()) {
             throw new InvalidParameterException("number of parameter sets", "0",
                     "[1, ...) (is wurtzkit-materials-data on the class path?)");

@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.Arrays;
 import java.util.Locale;
+import java.util.concurrent.CancellationException;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.wurtzkit.errors.ErrorKind;
@@ -62,6 +63,8 @@ public final class TargetSearch {
      * @throws TargetOutOfReachException if the ends of the interval do not bracket the target
      * @throws WurtzkitException         of kind NOT_CONVERGED if a solve fails or the tolerance
      *                                   cannot be met within the evaluation budget
+     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted
+     *                                   (checked before every evaluation; the flag stays set)
      */
     public TargetResult sheetDensity(StructureFamily family, double lower, double upper, double targetPerCm2,
             double relativeTolerance) {
@@ -83,6 +86,8 @@ public final class TargetSearch {
      * @param extraction the bias sweep and threshold definition used at every evaluation
      * @return the result
      * @throws TargetOutOfReachException if the ends of the interval do not bracket the target
+     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted
+     *                                   (checked before every evaluation and every sweep point)
      */
     public TargetResult thresholdVoltage(StructureFamily family, double lower, double upper, double targetV,
             double toleranceV, ThresholdExtraction extraction) {
@@ -131,6 +136,10 @@ public final class TargetSearch {
                 if (p[i] == parameter) {
                     return i;
                 }
+            }
+            if (Thread.currentThread().isInterrupted()) {
+                throw new CancellationException(String.format(Locale.ROOT,
+                        "target search interrupted after %d evaluations", n));
             }
             Structure st = family.at(parameter);
             double value;

@@ -10,7 +10,9 @@ import org.wurtzkit.structure.Structure;
 /**
  * A temperature sweep of the full solver with continuation, like {@link BiasSweep}: the first
  * temperature is solved cold, each further one starts from the previous solution; a failed
- * continued solve is retried cold, and a point that fails both ways is recorded, not dropped.
+ * continued solve right after a converged point is retried cold (after a failed point, one attempt
+ * only), and a point that fails is recorded with what was tried and why, not dropped. An
+ * interrupted thread stops the sweep before its next point.
  *
  * <p>Each point is the structure at that temperature ({@link Structure#withTemperatureK(double)}):
  * the band gaps follow each material's Varshni law ({@link BandGap}) and the band edges, Fermi
@@ -38,6 +40,8 @@ public final class TemperatureSweep {
      *                     strictly monotonic
      * @return the sweep
      * @throws InvalidParameterException for an empty, non-monotonic or out-of-range list
+     * @throws java.util.concurrent.CancellationException if the calling thread is interrupted (checked
+     *         before every point; its interrupt flag stays set)
      */
     public TemperatureSweepResult run(Structure structure, double... temperatures) {
         Require.nonNull("structure", structure);
@@ -68,7 +72,7 @@ public final class TemperatureSweep {
         }
         Solution[] solutions = new Solution[t.length];
         PointFailure.Reason[] failures = new PointFailure.Reason[t.length];
-        Continuation.solveInOrder(solver, at, t, solutions, failures);
+        Continuation.solveInOrder(solver, at, t, solutions, failures, "temperature sweep");
         return new TemperatureSweepResult(structure, t, solutions, failures, solver.options());
     }
 }

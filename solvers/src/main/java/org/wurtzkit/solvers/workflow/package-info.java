@@ -22,5 +22,12 @@
  * ({@link org.wurtzkit.solvers.workflow.CsvTable}); column headers carry their units. Failed
  * points are kept in the results with their reason, never dropped. Quantities are SI inside;
  * accessors in other units say so in their names.
+ *
+ * <p>A point fails only by a library exception ({@code InvalidParameterException} or
+ * {@code WurtzkitException}); anything else is a defect and propagates. Every long workflow (sweeps,
+ * design maps, spreads, tolerance studies, target searches) checks its thread's interrupt flag
+ * before each point and then stops with a {@link java.util.concurrent.CancellationException} (not
+ * part of the library's exception family: nothing failed, the caller asked to stop) that says how
+ * many points were done; the interrupt flag stays set.
  */
 package org.wurtzkit.solvers.workflow;

@@ -186,6 +186,31 @@ class BiasSweepTest {
         assertTrue(e.getMessage().contains("threshold sheet-density level"), e.getMessage());
     }
 
+    /**
+     * Issue #14: in a stretch of a sweep that does not converge, each point costs one bounded attempt
+     * and says what was tried. With three outer iterations allowed, pinch-off (-8 V, no 2DEG)
+     * converges cold and -7.9 V continued; 0 V fails continued and cold (a cold HEMT solve needs
+     * five), and the points after it are tried once, continued from -7.9 V, without a cold retry.
+     */
+    @Test
+    void aFailingStretchCostsOneAttemptPerPointAndSaysWhy() {
+        Structure s = Structure.builder(org.wurtzkit.material.ParameterSets.defaultSet())
+                .grow(org.wurtzkit.structure.Layer.of("buffer", Composition.GAN, 1000 * NM))
+                .grow(org.wurtzkit.structure.Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
+                .top(TopBoundary.schottky(1, 0)).build();
+        BiasSweepResult r = new BiasSweep(new SelfConsistentSolver(
+                org.wurtzkit.solvers.sp.SolverOptions.defaults().withMaxIterations(3))).run(s, -8, -7.9, 0, 0.05, 0.1);
+        assertTrue(r.succeeded(0) && r.succeeded(1), () -> r.failures().toString());
+        assertEquals(3, r.failures().size(), () -> r.failures().toString());
+        String first = r.failures().get(0).message();
+        assertTrue(first.startsWith("continued: NotConvergedException") && first.contains("; cold start: "), first);
+        for (int i = 1; i < 3; i++) {
+            String m = r.failures().get(i).message();
+            assertTrue(m.startsWith("continued from the last converged point: NotConvergedException")
+                    && m.endsWith("(no cold retry: the point before failed too)") && !m.contains("cold start:"), m);
+        }
+    }
+
     /** A point that fails is kept with its reason; nothing is dropped (solver limited to one outer iteration). */
     @Test
     void failedPointsAreReported() {
