@@ -13,6 +13,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.wurtzkit.solvers.workflow.TradeoffPoint;
@@ -24,13 +25,23 @@ import org.wurtzkit.solvers.workflow.TradeoffResult;
  * the physics of the stack demands.
  */
 class TradeoffExampleTest {
-    private final ByteArrayOutputStream logBytes = new ByteArrayOutputStream();
-    private final PrintStream log = new PrintStream(logBytes, true, StandardCharsets.UTF_8);
+    private static final TradeoffExample.Settings QUICK = TradeoffExample.Settings.quick();
+    @TempDir
+    static Path out;
+    private static TradeoffExample.Result run;
+    private static String logText;
+
+    @BeforeAll
+    static void runOnce() throws IOException {
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        run = TradeoffExample.run(out, QUICK, new PrintStream(bytes, true, StandardCharsets.UTF_8));
+        logText = bytes.toString(StandardCharsets.UTF_8);
+    }
 
     @Test
-    void writesThePlotAndTheTable(@TempDir Path out) throws IOException {
-        TradeoffExample.Settings s = TradeoffExample.Settings.quick();
-        TradeoffExample.Result r = TradeoffExample.run(out, s, log);
+    void writesThePlotAndTheTable() throws IOException {
+        TradeoffExample.Settings s = QUICK;
+        TradeoffExample.Result r = run;
         TradeoffResult t = r.tradeoff();
         Outputs.assertPng(r.files().get(0), TradeoffExample.WIDTH, TradeoffExample.HEIGHT);
         assertEquals("tradeoff.png", r.files().get(0).getFileName().toString());
@@ -51,13 +62,13 @@ class TradeoffExampleTest {
         }
         assertFalse(t.front().isEmpty(), t::toString);
         assertTrue(String.join("\n", r.summary()).contains("invented demo data"));
-        assertTrue(logBytes.toString(StandardCharsets.UTF_8).contains("points"), "progress on the log");
+        assertTrue(logText.contains("points"), "progress on the log");
     }
 
     @Test
-    void capAndAluminiumMoveTheStackTheWayThePhysicsSays(@TempDir Path out) throws IOException {
-        TradeoffExample.Settings s = TradeoffExample.Settings.quick();
-        TradeoffResult t = TradeoffExample.run(out, s, log).tradeoff();
+    void capAndAluminiumMoveTheStackTheWayThePhysicsSays() {
+        TradeoffExample.Settings s = QUICK;
+        TradeoffResult t = run.tradeoff();
         int nx = s.alloy().length;
         int nb = s.barrierNm().length;
         for (int x = 0; x < nx; x++) {

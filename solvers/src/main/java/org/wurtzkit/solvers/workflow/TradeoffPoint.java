@@ -38,6 +38,24 @@ public record TradeoffPoint(int index, double[] design, double sheetDensityPerCm
         return design.clone();
     }
 
+    /** Equal when every component is equal, the design values compared element by element. */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof TradeoffPoint p && index == p.index && java.util.Arrays.equals(design, p.design)
+                && Double.compare(sheetDensityPerCm2, p.sheetDensityPerCm2) == 0
+                && Double.compare(thresholdVoltageV, p.thresholdVoltageV) == 0
+                && Double.compare(mobilityCm2PerVs, p.mobilityCm2PerVs) == 0
+                && Double.compare(sheetResistanceOhmPerSquare, p.sheetResistanceOhmPerSquare) == 0
+                && Double.compare(leakageAPerCm2, p.leakageAPerCm2) == 0 && inBand == p.inBand
+                && onFront == p.onFront && warnings.equals(p.warnings);
+    }
+
+    @Override
+    public int hashCode() {
+        return java.util.Objects.hash(index, java.util.Arrays.hashCode(design), sheetDensityPerCm2, thresholdVoltageV,
+                mobilityCm2PerVs, sheetResistanceOhmPerSquare, leakageAPerCm2, inBand, onFront, warnings);
+    }
+
     /** {@return |J| at the reverse bias (A/cm^2), the leakage objective of the front} */
     public double leakageMagnitudeAPerCm2() {
         return Math.abs(leakageAPerCm2);

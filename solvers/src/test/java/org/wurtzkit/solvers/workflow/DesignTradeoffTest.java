@@ -192,6 +192,36 @@ class DesignTradeoffTest {
     }
 
     @Test
+    void progressOncePerStackAndInterruptionStopsTheRun() {
+        List<Integer> done = new java.util.ArrayList<>();
+        TradeoffResult r = family().axis(Axis.of("spare", "", 1)).threads(2)
+                .progress((d, total) -> {
+                    assertEquals(4, total);
+                    done.add(d);
+                })
+                .build().run();
+        assertEquals(List.of(1, 2, 3, 4), done);
+        assertEquals(4, r.size());
+        // a caller interrupted while waiting for the workers gets a CancellationException, flag kept
+        DesignTradeoff t = family().threads(2).build();
+        Thread.currentThread().interrupt();
+        try {
+            assertThrows(java.util.concurrent.CancellationException.class, t::run);
+            assertTrue(Thread.currentThread().isInterrupted());
+        } finally {
+            Thread.interrupted();
+        }
+    }
+
+    @Test
+    void pointsCompareByValue() {
+        TradeoffPoint p = result.point(1);
+        assertEquals(p, result.point(1));
+        assertEquals(p.hashCode(), result.point(1).hashCode());
+        assertFalse(p.equals(result.point(2)));
+    }
+
+    @Test
     void badSetupIsRejectedWithTheParameter() {
         assertEquals("reverse gate bias (V)", assertThrows(InvalidParameterException.class,
                 () -> family().reverseBiasV(-1)).parameter());
