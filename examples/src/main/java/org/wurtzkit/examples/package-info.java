@@ -15,6 +15,9 @@
  * threshold voltage.</li>
  * <li>{@link org.wurtzkit.examples.ParameterSpreadExample}: how far n_s and V_th move between the
  * registered parameter sets.</li>
+ * <li>{@link org.wurtzkit.examples.TradeoffExample}: R_sh against gate leakage over a family of
+ * wafers (cap, Al fraction, barrier thickness), with the Pareto front at a V_th band (not part of
+ * {@link org.wurtzkit.examples.Demo}).</li>
  * <li>{@link org.wurtzkit.examples.Demo}: all five in one run.</li>
  * </ul>
  *

@@ -16,6 +16,8 @@
  * and median.</li>
  * <li>{@link org.wurtzkit.plot.TradeoffPlot}: several quantities against one design parameter,
  * stacked panels over a shared x axis.</li>
+ * <li>{@link org.wurtzkit.plot.ParetoPlot}: R_sh against gate leakage (log) over a family of stacks,
+ * the V_th band highlighted and the Pareto front drawn as a staircase.</li>
  * </ul>
  *
  * <p>Every label follows {@link org.wurtzkit.plot.Labels}: subscripts with an underscore

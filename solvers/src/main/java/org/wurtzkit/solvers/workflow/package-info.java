@@ -16,6 +16,10 @@
  * tolerances and material constants ({@link org.wurtzkit.solvers.workflow.Tolerance}); mean,
  * standard deviation, quantiles and Sobol indices; every sample reproducible alone from the seed, so
  * the same study can run on a distributed engine (see the examples module).</li>
+ * <li>{@link org.wurtzkit.solvers.workflow.DesignTradeoff}: over a family of stacks, n_s, V_th,
+ * mobility and R_sh at 0 V and the gate leakage at a reverse bias from one bias sweep per stack; the
+ * Pareto front ({@link org.wurtzkit.solvers.workflow.ParetoFront}) of R_sh against |J| among the
+ * stacks in a V_th band ({@link org.wurtzkit.solvers.workflow.TradeoffResult}).</li>
  * </ul>
  *
  * <p>Every workflow returns an immutable result that writes itself as CSV

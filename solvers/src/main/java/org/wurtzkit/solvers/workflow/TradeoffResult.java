@@ -1,0 +1,266 @@
+// SPDX-License-Identifier: Apache-2.0
+// Copyright 2026 The wurtzkit developers
+package org.wurtzkit.solvers.workflow;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import org.wurtzkit.units.Decimals;
+
+/**
+ * The result of a {@link DesignTradeoff}: one {@link TradeoffPoint} per stack (row-major, last axis
+ * fastest), which stacks are in the V<sub>th</sub> band, and the Pareto front of R<sub>sh</sub>
+ * against |J| among them ({@link ParetoFront}). Immutable.
+ *
+ * <p>CSV columns: one per axis ({@code name_unit}), {@code sheet_density_cm^-2},
+ * {@code threshold_voltage_V}, {@code model_threshold_voltage_V} (the closed-form estimate that placed
+ * the sweep; empty with a fixed sweep), {@code mobility_cm^2/Vs}, {@code sheet_resistance_Ohm/sq},
+ * {@code gate_leakage_A/cm^2} (signed, at the reverse bias), {@code in_vth_band} and
+ * {@code on_front} (true/false), {@code warnings} (joined by " | ", empty if none), {@code status}.
+ */
+public final class TradeoffResult implements CsvTable {
+    private final List<Axis> axes;
+    private final double reverseBiasV;
+    private final double bandTargetV;
+    private final double bandToleranceV;
+    private final String setup;
+    private final double[][] parameters;
+    private final double[][] values;
+    private final List<String>[] warnings;
+    private final boolean[] inBand;
+    private final boolean[] onFront;
+    private final int[] front;
+    private final PointFailure[] failureAt;
+    private final List<PointFailure> failureList;
+    private final List<Column> columns;
+
+    TradeoffResult(DesignTradeoff t, double[][] parameters, ParallelPoints.Outcome[] out, List<String>[] warnings,
+            double bandTargetV, double bandToleranceV) {
+        this.axes = t.axes();
+        this.reverseBiasV = t.reverseBiasV();
+        this.bandTargetV = bandTargetV;
+        this.bandToleranceV = bandToleranceV;
+        this.setup = t.toString();
+        int n = out.length;
+        this.parameters = parameters;
+        this.values = new double[n][];
+        this.warnings = warnings;
+        this.failureAt = new PointFailure[n];
+        this.inBand = new boolean[n];
+        List<PointFailure> f = new ArrayList<>();
+        double[] rsh = new double[n];
+        double[] jAbs = new double[n];
+        for (int i = 0; i < n; i++) {
+            if (out[i].values() != null) {
+                values[i] = out[i].values();
+                double vth = values[i][DesignTradeoff.VTH];
+                inBand[i] = Double.isNaN(bandTargetV) || Math.abs(vth - bandTargetV) <= bandToleranceV;
+            } else {
+                double[] nan = new double[DesignTradeoff.WIDTH];
+                Arrays.fill(nan, Double.NaN);
+                values[i] = nan;
+                warnings[i] = List.of();
+                failureAt[i] = out[i].failure().at(i, describe(i));
+                f.add(failureAt[i]);
+            }
+            rsh[i] = inBand[i] ? values[i][DesignTradeoff.RSH] : Double.NaN;
+            jAbs[i] = inBand[i] ? Math.abs(values[i][DesignTradeoff.J]) : Double.NaN;
+        }
+        this.failureList = Collections.unmodifiableList(f);
+        this.front = ParetoFront.indices(rsh, jAbs);
+        this.onFront = new boolean[n];
+        for (int i : front) {
+            onFront[i] = true;
+        }
+        List<Column> c = new ArrayList<>();
+        for (Axis a : axes) {
+            c.add(a.column());
+        }
+        c.add(Column.of("sheet_density", "cm^-2"));
+        c.add(Column.of("threshold_voltage", "V"));
+        c.add(Column.of("model_threshold_voltage", "V"));
+        c.add(Column.of("mobility", "cm^2/Vs"));
+        c.add(Column.of("sheet_resistance", "Ohm/sq"));
+        c.add(Column.of("gate_leakage", "A/cm^2"));
+        c.add(Column.of("in_vth_band", ""));
+        c.add(Column.of("on_front", ""));
+        c.add(Column.of("warnings", ""));
+        c.add(Column.of("status", ""));
+        this.columns = List.copyOf(c);
+    }
+
+    private String describe(int i) {
+        StringBuilder sb = new StringBuilder();
+        for (int a = 0; a < axes.size(); a++) {
+            sb.append(a > 0 ? ", " : "").append(axes.get(a).name()).append(" = ").append(parameters[i][a]);
+            if (!axes.get(a).unit().isEmpty()) {
+                sb.append(' ').append(axes.get(a).unit());
+            }
+        }
+        return sb.toString();
+    }
+
+    /** {@return the axes} */
+    public List<Axis> axes() {
+        return axes;
+    }
+
+    /** {@return the number of stacks} */
+    public int size() {
+        return values.length;
+    }
+
+    /** {@return the reverse bias of the leakage (V)} */
+    public double reverseBiasV() {
+        return reverseBiasV;
+    }
+
+    /** {@return the target of the V_th band (V), or empty if no band was set} */
+    public Optional<Double> bandTargetV() {
+        return Double.isNaN(bandTargetV) ? Optional.empty() : Optional.of(bandTargetV);
+    }
+
+    /** {@return the half-width of the V_th band (V), or empty if no band was set} */
+    public Optional<Double> bandToleranceV() {
+        return Double.isNaN(bandToleranceV) ? Optional.empty() : Optional.of(bandToleranceV);
+    }
+
+    /**
+     * @param i point index
+     * @return that stack
+     */
+    public TradeoffPoint point(int i) {
+        double[] v = values[i];
+        return new TradeoffPoint(i, parameters[i], v[DesignTradeoff.NS], v[DesignTradeoff.VTH], v[DesignTradeoff.MU],
+                v[DesignTradeoff.RSH], v[DesignTradeoff.J], inBand[i], onFront[i], warnings[i]);
+    }
+
+    /** {@return every stack, in point order} */
+    public List<TradeoffPoint> points() {
+        List<TradeoffPoint> p = new ArrayList<>(size());
+        for (int i = 0; i < size(); i++) {
+            p.add(point(i));
+        }
+        return Collections.unmodifiableList(p);
+    }
+
+    /** {@return the stacks on the Pareto front, in increasing R_sh (so decreasing |J|)} */
+    public List<TradeoffPoint> front() {
+        List<TradeoffPoint> p = new ArrayList<>(front.length);
+        for (int i : front) {
+            p.add(point(i));
+        }
+        return Collections.unmodifiableList(p);
+    }
+
+    /** {@return the computed stacks whose V_th is in the band (all computed stacks without a band)} */
+    public List<TradeoffPoint> inBand() {
+        List<TradeoffPoint> p = new ArrayList<>();
+        for (int i = 0; i < size(); i++) {
+            if (inBand[i]) {
+                p.add(point(i));
+            }
+        }
+        return Collections.unmodifiableList(p);
+    }
+
+    /**
+     * @param i point index
+     * @return the closed-form V_th that placed the point's sweep (V), NaN with a fixed sweep or if the
+     *         point failed
+     */
+    public double modelThresholdVoltageV(int i) {
+        return values[i][DesignTradeoff.VTH_MODEL];
+    }
+
+    /**
+     * @param i point index
+     * @return true if point i was computed
+     */
+    public boolean succeeded(int i) {
+        return failureAt[i] == null;
+    }
+
+    /**
+     * @param i point index
+     * @return why point i failed (with the kind of failure), or empty
+     */
+    public Optional<PointFailure> failure(int i) {
+        return Optional.ofNullable(failureAt[i]);
+    }
+
+    /** {@return every failed point, in point order} */
+    public List<PointFailure> failures() {
+        return failureList;
+    }
+
+    /**
+     * {@return warnings about the result as a whole: no V_th band (the front then mixes threshold
+     * voltages), an empty band, failed points}
+     */
+    public List<String> warnings() {
+        List<String> w = new ArrayList<>();
+        if (Double.isNaN(bandTargetV)) {
+            w.add("no V_th band set: the front compares stacks of different threshold voltage");
+        } else if (front.length == 0) {
+            w.add("no computed stack has its V_th within " + Decimals.format(bandToleranceV, "V") + " of "
+                    + Decimals.format(bandTargetV, "V") + ": the front is empty");
+        }
+        if (!failureList.isEmpty()) {
+            w.add(failureList.size() + " of " + size() + " stacks failed and take no part in the front");
+        }
+        return List.copyOf(w);
+    }
+
+    @Override
+    public List<Column> columns() {
+        return columns;
+    }
+
+    @Override
+    public int rowCount() {
+        return values.length;
+    }
+
+    @Override
+    public List<String> row(int i) {
+        List<String> r = new ArrayList<>(columns.size());
+        for (double p : parameters[i]) {
+            r.add(CsvTable.cell(p));
+        }
+        double[] v = values[i];
+        r.add(CsvTable.cell(v[DesignTradeoff.NS]));
+        r.add(CsvTable.cell(v[DesignTradeoff.VTH]));
+        r.add(CsvTable.cell(v[DesignTradeoff.VTH_MODEL]));
+        r.add(CsvTable.cell(v[DesignTradeoff.MU]));
+        r.add(CsvTable.cell(v[DesignTradeoff.RSH]));
+        r.add(CsvTable.cell(v[DesignTradeoff.J]));
+        r.add(Boolean.toString(inBand[i]));
+        r.add(Boolean.toString(onFront[i]));
+        r.add(String.join(" | ", warnings[i]));
+        r.add(failureAt[i] == null ? "ok" : "failed: " + failureAt[i].message());
+        return r;
+    }
+
+    /** @return the set-up, counts (computed, in band, on front, failed), the front and any warnings */
+    @Override
+    public String toString() {
+        StringBuilder sb = new StringBuilder("Trade-off: ").append(setup).append('\n');
+        int inB = 0;
+        for (boolean b : inBand) {
+            inB += b ? 1 : 0;
+        }
+        sb.append(size() - failureList.size()).append(" of ").append(size()).append(" stacks computed, ").append(inB)
+                .append(" in the V_th band, ").append(front.length).append(" on the front of R_sh against |J| at V_R = ")
+                .append(Decimals.format(reverseBiasV, "V"));
+        for (TradeoffPoint p : front()) {
+            sb.append("\n  ").append(p);
+        }
+        for (String w : warnings()) {
+            sb.append("\n  warning: ").append(w);
+        }
+        return sb.toString();
+    }
+}
