@@ -8,7 +8,10 @@ import org.wurtzkit.solvers.statistics.Ionization;
  * integration: each half of a box takes the material of its own cell, so abrupt heterointerfaces
  * need no averaging. Electrons inside quantum windows come from the subbands through the
  * predictor of A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81, 7880
- * (1997), written once in {@link SubbandDensity}. Stateless after construction: every result goes
+ * (1997), written once in {@link SubbandDensity}. Each density uses the quasi-Fermi level of its
+ * carrier in its cell (see {@link QuasiFermiLevels}): electrons and shallow donors the electron
+ * level, holes and shallow acceptors the hole level, deep levels that of the layer's majority
+ * carrier. Stateless after construction: every result goes
  * into caller arrays or a caller-owned {@link PointDensities}, so one instance may serve many
  * threads.
  */
@@ -58,13 +61,14 @@ final class ChargeModel {
             }
             if (d.deltaDensity[i] > 0) {
                 double e = d.nodeEc(i) - phi[i];
+                int c = i < nn - 1 ? i : i - 1; // the cell whose quasi-Fermi levels the sheet takes
                 if (d.deltaIsDonor[i]) {
-                    double x = (d.deltaEnergy[i] - e) * invVt;
+                    double x = (d.deltaEnergy[i] - e + d.efn[c]) * invVt;
                     qi += d.deltaDensity[i] * Ionization.ionizedDonorFraction(x, Ionization.DEFAULT_DONOR_DEGENERACY);
                     dqi += d.deltaDensity[i]
                             * Ionization.ionizedDonorFractionDerivative(x, Ionization.DEFAULT_DONOR_DEGENERACY) * invVt;
                 } else {
-                    double x = (e - gapAt(i) + d.deltaEnergy[i]) * invVt;
+                    double x = (e - gapAt(i) + d.deltaEnergy[i] - d.efp[c]) * invVt;
                     qi -= d.deltaDensity[i] * Ionization.ionizedAcceptorFraction(x, Ionization.DEFAULT_ACCEPTOR_DEGENERACY);
                     // dx/dphi = -1/kT, and the sheet's charge is -N f(x)
                     dqi += d.deltaDensity[i]
@@ -73,7 +77,7 @@ final class ChargeModel {
             }
             if (i == 0 && d.surfaceDonorDensity > 0) {
                 // donor-like surface states at E_c(0) - E_s (Ibbetson et al. 2000), degeneracy 1
-                double x = (d.surfaceDonorEnergy - (d.ec[0] - phi[0])) * invVt;
+                double x = (d.surfaceDonorEnergy - (d.ec[0] - phi[0]) + d.efn[0]) * invVt;
                 qi += d.surfaceDonorDensity * Ionization.donorLikeTrapChargedFraction(x, 1);
                 dqi += d.surfaceDonorDensity * Ionization.donorLikeTrapChargedFractionDerivative(x, 1) * invVt;
             }
@@ -102,12 +106,14 @@ final class ChargeModel {
         double evn = d.ev[k] - phi;
         double n = 0;
         double dn = 0;
+        double fn = d.efn[k];
+        double fp = d.efp[k];
         if (!skipElectrons) {
-            double eta = -ecn * invVt;
+            double eta = (fn - ecn) * invVt;
             n = d.nc[k] * FermiDirac.f12(eta);
             dn = d.nc[k] * FermiDirac.fm12(eta) * invVt;
         }
-        double etaP = (evn - d.holeFermiEv) * invVt;
+        double etaP = (evn - fp) * invVt;
         double p = d.nv[k] * FermiDirac.f12(etaP);
         double dp = -d.nv[k] * FermiDirac.fm12(etaP) * invVt;
         double donors = 0;
@@ -115,28 +121,29 @@ final class ChargeModel {
         double acceptors = 0;
         double dAcceptors = 0;
         int li = d.layerOfCell[k];
+        double fDeep = d.deepFollowHoles[li] ? fp : fn; // deep levels: the majority carrier's level
         double[] dens = d.speciesDensity[li];
         for (int j = 0; j < dens.length; j++) {
             double e = d.speciesEnergy[li][j];
             double g = d.speciesDegeneracy[li][j];
             switch (d.speciesKind[li][j]) {
-                case SHALLOW_DONOR -> { // shallow donor, E_D = E_c - e, x = (E_F - E_D)/kT
-                    double x = (e - ecn) * invVt;
+                case SHALLOW_DONOR -> { // shallow donor, E_D = E_c - e, x = (E_Fn - E_D)/kT
+                    double x = (e - ecn + fn) * invVt;
                     donors += dens[j] * Ionization.ionizedDonorFraction(x, g);
                     dDonors += dens[j] * Ionization.ionizedDonorFractionDerivative(x, g) * invVt;
                 }
-                case SHALLOW_ACCEPTOR -> { // shallow acceptor, E_A = E_v + e, x = (E_A - E_F)/kT
-                    double x = (evn + e) * invVt;
+                case SHALLOW_ACCEPTOR -> { // shallow acceptor, E_A = E_v + e, x = (E_A - E_Fp)/kT
+                    double x = (evn + e - fp) * invVt;
                     acceptors += dens[j] * Ionization.ionizedAcceptorFraction(x, g);
                     dAcceptors -= dens[j] * Ionization.ionizedAcceptorFractionDerivative(x, g) * invVt;
                 }
                 case DONOR_LIKE_TRAP -> { // donor-like deep level at E_T = E_c - e, x = (E_F - E_T)/kT
-                    double x = (e - ecn) * invVt;
+                    double x = (e - ecn + fDeep) * invVt;
                     donors += dens[j] * Ionization.donorLikeTrapChargedFraction(x, g);
                     dDonors += dens[j] * Ionization.donorLikeTrapChargedFractionDerivative(x, g) * invVt;
                 }
                 case ACCEPTOR_LIKE_TRAP -> { // acceptor-like deep level at E_T = E_c - e
-                    double x = (e - ecn) * invVt;
+                    double x = (e - ecn + fDeep) * invVt;
                     acceptors += dens[j] * Ionization.acceptorLikeTrapChargedFraction(x, g);
                     dAcceptors += dens[j] * Ionization.acceptorLikeTrapChargedFractionDerivative(x, g) * invVt;
                 }

@@ -71,10 +71,19 @@ final class QuantumStates {
                 v[j] = d.nodeEc(a + j) - phi[a + j];
             }
             int kMax = energy[w].length;
-            int found = hamiltonians[w].belowInto(v, bound, kMax, energy[w], psi[w]);
+            double windowBound = bound;
+            if (!d.quasiFermiUniform) {
+                // the cut-off counts from the highest electron quasi-Fermi level in the window
+                double top = Double.NEGATIVE_INFINITY;
+                for (int c = a; c < d.windowEnd[w]; c++) {
+                    top = Math.max(top, d.efn[c]);
+                }
+                windowBound = bound + top;
+            }
+            int found = hamiltonians[w].belowInto(v, windowBound, kMax, energy[w], psi[w]);
             count[w] = found;
             if (found == kMax && kMax < hamiltonians[w].maxStates()) {
-                limitReached |= energy[w][kMax - 1] < bound;
+                limitReached |= energy[w][kMax - 1] < windowBound;
             }
             for (int k = 0; k < found; k++) {
                 double mxy = 0;

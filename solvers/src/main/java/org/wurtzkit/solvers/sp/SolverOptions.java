@@ -16,17 +16,19 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param quantumRegion         where electrons are quantum; default {@link QuantumRegion#automatic()}
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
- * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
+ * @param quasiFermiLevels      which contact electrons and holes follow in each part of the stack; default
+ *                              {@link QuasiFermiLevels#defaults()} (electrons the channel; holes the gate above
+ *                              the channel and the channel below it)
  *
  * <p>Physical model choices (polarization model, band line-up, strain shifts of the band edges)
  * live on the {@link org.wurtzkit.structure.Structure}; these options are numerics only.
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
         double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
-        HoleFermiLevel holeFermiLevel) {
+        QuasiFermiLevels quasiFermiLevels) {
 
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
-            QuantumRegion.automatic(), 60, 15, HoleFermiLevel.GATE);
+            QuantumRegion.automatic(), 60, 15, QuasiFermiLevels.defaults());
 
     /** Validates every field. */
     public SolverOptions {
@@ -39,7 +41,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         Require.nonNull("quantum region", quantumRegion);
         Require.inRange("maxSubbands", maxSubbands, 1, 2000);
         Require.inRange("subbandCutoffKT", subbandCutoffKT, 1, 200);
-        Require.nonNull("hole Fermi level", holeFermiLevel);
+        Require.nonNull("quasi-Fermi levels", quasiFermiLevels);
     }
 
     /** {@return the defaults listed in the class documentation} */
@@ -50,59 +52,59 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     /** @param v tolerance (V) @return a copy */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
+                quantumRegion, maxSubbands, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v outer iteration budget @return a copy */
     public SolverOptions withMaxIterations(int v) {
         return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v Newton tolerance (V) @return a copy */
     public SolverOptions withNewtonTolerance(double v) {
         return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v Newton step budget per Poisson solve @return a copy */
     public SolverOptions withMaxNewtonIterations(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v largest Newton update (V) @return a copy */
     public SolverOptions withMaxNewtonStep(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v mesh policy @return a copy */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
-                quantumRegion, maxSubbands, subbandCutoffKT, holeFermiLevel);
+                quantumRegion, maxSubbands, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v quantum region @return a copy */
     public SolverOptions withQuantumRegion(QuantumRegion v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
-                maxSubbands, subbandCutoffKT, holeFermiLevel);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v most subbands per window @return a copy */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, v, subbandCutoffKT, holeFermiLevel);
+                quantumRegion, v, subbandCutoffKT, quasiFermiLevels);
     }
 
     /** @param v subband cut-off above E_F in kT @return a copy */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, v, holeFermiLevel);
+                quantumRegion, maxSubbands, v, quasiFermiLevels);
     }
 
-    /** @param v holes' quasi-Fermi level @return a copy */
-    public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
+    /** @param v the quasi-Fermi level of each carrier in each region @return a copy */
+    public SolverOptions withQuasiFermiLevels(QuasiFermiLevels v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
                 quantumRegion, maxSubbands, subbandCutoffKT, v);
     }
