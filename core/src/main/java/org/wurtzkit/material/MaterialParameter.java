@@ -82,7 +82,28 @@ public enum MaterialParameter {
     /** Valence-band deformation potential D3. */
     DEFORMATION_D3("D3", "eV", "eV", 1),
     /** Valence-band deformation potential D4. */
-    DEFORMATION_D4("D4", "eV", "eV", 1);
+    DEFORMATION_D4("D4", "eV", "eV", 1),
+
+    // ---- valence band (issue 12): the parameters of the 6x6 k.p Hamiltonian of S. L. Chuang and
+    // C. S. Chang, Phys. Rev. B 54, 2491 (1996), from which ValenceBands derives the hole masses ----
+    /** Valence-band parameter A1 (units of hbar^2/2m0; negative: the band curves down). */
+    VALENCE_A1("A1", "1", "1", 1),
+    /** Valence-band parameter A2 (units of hbar^2/2m0). */
+    VALENCE_A2("A2", "1", "1", 1),
+    /** Valence-band parameter A3 (units of hbar^2/2m0). */
+    VALENCE_A3("A3", "1", "1", 1),
+    /** Valence-band parameter A4 (units of hbar^2/2m0). */
+    VALENCE_A4("A4", "1", "1", 1),
+    /** Valence-band parameter A5 (units of hbar^2/2m0). */
+    VALENCE_A5("A5", "1", "1", 1),
+    /** Valence-band parameter A6 (units of hbar^2/2m0). */
+    VALENCE_A6("A6", "1", "1", 1),
+    /** Linear-in-k valence-band parameter A7. */
+    VALENCE_A7("A7", "eV m", "eV Angstrom", Units.ANGSTROM),
+    /** Crystal-field splitting Delta_cr of the valence band (negative for AlN). */
+    CRYSTAL_FIELD_SPLITTING("Delta_cr", "eV", "eV", 1),
+    /** Spin-orbit splitting Delta_so of the valence band. */
+    SPIN_ORBIT_SPLITTING("Delta_so", "eV", "eV", 1);
 
     private final String key;
     private final String siUnit;

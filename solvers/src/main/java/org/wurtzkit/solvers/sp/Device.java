@@ -8,6 +8,7 @@ import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.EffectiveMasses;
+import org.wurtzkit.material.ValenceBands;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.solvers.mesh.Mesh;
 import org.wurtzkit.solvers.statistics.CarrierDensity;
@@ -142,7 +143,8 @@ final class Device {
             ev[k] = edges.valenceEv();
             EffectiveMasses em = m.masses();
             nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
-            nv[k] = CarrierDensity.effectiveDensityOfStates(em.heavyHoleDensityOfStates(), t);
+            // heavy, light and crystal-field holes summed with their offsets (ValenceBands)
+            nv[k] = ValenceBands.of(m).effectiveDensityOfStates(t);
             massZ[k] = em.electronParallel();
             massXY[k] = em.electronPerpendicular();
         }
