@@ -15,7 +15,10 @@
  * threshold voltage.</li>
  * <li>{@link org.wurtzkit.examples.ParameterSpreadExample}: how far n_s and V_th move between the
  * registered parameter sets.</li>
- * <li>{@link org.wurtzkit.examples.Demo}: all five in one run.</li>
+ * <li>{@link org.wurtzkit.examples.PGanGateExample}: the threshold voltage of a p-GaN gate HEMT
+ * (invented wafer TNL-0817) against the Mg density for three barrier thicknesses; not part of the
+ * demo run.</li>
+ * <li>{@link org.wurtzkit.examples.Demo}: the first five in one run.</li>
  * </ul>
  *
  * <p>Each program takes the output folder as its first argument (default {@code out}) and
