@@ -130,6 +130,8 @@ final class Device {
         massXY = new double[cells];
         layerOfCell = new int[cells];
         double t = s.temperatureK();
+        WurtziteMaterial lastMaterial = null;
+        double lastNv = 0;
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
             int li = s.layerIndexAt(mid);
@@ -143,8 +145,13 @@ final class Device {
             ev[k] = edges.valenceEv();
             EffectiveMasses em = m.masses();
             nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
-            // heavy, light and crystal-field holes summed with their offsets (ValenceBands)
-            nv[k] = ValenceBands.of(m).effectiveDensityOfStates(t);
+            // heavy, light and crystal-field holes summed with their offsets (ValenceBands); a layer of
+            // one composition hands the same material to each of its cells, so compute it once
+            if (m != lastMaterial) {
+                lastMaterial = m;
+                lastNv = ValenceBands.of(m).effectiveDensityOfStates(t);
+            }
+            nv[k] = lastNv;
             massZ[k] = em.electronParallel();
             massXY[k] = em.electronPerpendicular();
         }
