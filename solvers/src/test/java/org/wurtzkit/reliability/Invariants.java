@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.wurtzkit.solvers.sp.BandDiagram;
+import org.wurtzkit.solvers.sp.Carrier;
 import org.wurtzkit.solvers.sp.CarrierSheet;
 import org.wurtzkit.solvers.sp.ConvergenceRecord;
 import org.wurtzkit.solvers.sp.DepthRange;
@@ -284,7 +285,7 @@ final class Invariants {
             double channel = 0;
             int channels = 0;
             for (CarrierSheet c : sol.carrierSheets()) {
-                if (c.window() >= 0) {
+                if (c.window() >= 0 && c.carrier() == Carrier.ELECTRONS) {
                     quantum += c.sheetDensity();
                 }
                 if (c.role() == CarrierSheet.Role.CHANNEL) {

@@ -61,13 +61,13 @@ class SolverBadInputTest {
 
     private static SolverOptions newtonTolerance(double v) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), v, D.maxNewtonIterations(), D.maxNewtonStep(), D.mesh(),
-                D.quantumRegion(), D.maxSubbands(), D.subbandCutoffKT(), D.quasiFermiLevels());
+                D.quantumRegion(), D.maxSubbands(), D.subbandCutoffKT(), D.quasiFermiLevels(), D.quantumHoles());
     }
 
     private static SolverOptions nulls(int which) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), D.newtonTolerance(), D.maxNewtonIterations(),
                 D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumRegion(), D.maxSubbands(),
-                D.subbandCutoffKT(), which == 2 ? null : D.quasiFermiLevels());
+                D.subbandCutoffKT(), which == 2 ? null : D.quasiFermiLevels(), D.quantumHoles());
     }
 
     static Stream<Arguments> options() {

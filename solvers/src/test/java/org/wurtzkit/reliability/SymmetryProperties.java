@@ -199,7 +199,7 @@ class SymmetryProperties {
     static SolverOptions tight(QuantumRegion region) {
         SolverOptions d = SolverOptions.defaults();
         return new SolverOptions(1e-10, d.maxIterations(), 1e-12, d.maxNewtonIterations(), d.maxNewtonStep(), d.mesh(),
-                region, d.maxSubbands(), d.subbandCutoffKT(), d.quasiFermiLevels());
+                region, d.maxSubbands(), d.subbandCutoffKT(), d.quasiFermiLevels(), d.quantumHoles());
     }
 
     private static WurtziteMaterial shiftedEdges(Composition c, double shiftEv) {

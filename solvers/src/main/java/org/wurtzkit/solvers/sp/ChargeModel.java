@@ -39,22 +39,23 @@ final class ChargeModel {
         boolean quantum = qs != null;
         for (int i = 0; i < nn; i++) {
             boolean skipN = quantum && d.quantumNode[i];
+            boolean skipP = skipN && qs.holes != null;
             double qi = 0;
             double dqi = 0;
             if (d.sameCellsAround[i]) {
                 // both half-boxes hold the same material: one evaluation serves the whole box
-                half(i, phi[i], skipN, cell);
+                half(i, phi[i], skipN, skipP, cell);
                 double w = 0.5 * (d.h[i - 1] + d.h[i]);
                 qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
                 dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             } else if (i > 0) {
-                half(i - 1, phi[i], skipN, cell);
+                half(i - 1, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i - 1];
                 qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
                 dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             }
             if (i < nn - 1 && !d.sameCellsAround[i]) {
-                half(i, phi[i], skipN, cell);
+                half(i, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i];
                 qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
                 dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
@@ -86,6 +87,11 @@ final class ChargeModel {
                 double box = d.box(i);
                 qi -= box * cell.n;
                 dqi -= box * cell.dn;
+                if (skipP) {
+                    qs.holes.atNode(d, i, phi[i], phiRef[i], cell);
+                    qi += box * cell.p;
+                    dqi += box * cell.dp;
+                }
             }
             q[i] = Device.Q * qi;
             dq[i] = Device.Q * dqi;
@@ -101,7 +107,7 @@ final class ChargeModel {
      * Densities of one cell's material at node potential phi (m^-3) and derivatives (per V), into
      * every field of {@code out}.
      */
-    private void half(int k, double phi, boolean skipElectrons, PointDensities out) {
+    private void half(int k, double phi, boolean skipElectrons, boolean skipHoles, PointDensities out) {
         double ecn = d.ec[k] - phi;
         double evn = d.ev[k] - phi;
         double n = 0;
@@ -113,9 +119,13 @@ final class ChargeModel {
             n = d.nc[k] * FermiDirac.f12(eta);
             dn = d.nc[k] * FermiDirac.fm12(eta) * invVt;
         }
-        double etaP = (evn - fp) * invVt;
-        double p = d.nv[k] * FermiDirac.f12(etaP);
-        double dp = -d.nv[k] * FermiDirac.fm12(etaP) * invVt;
+        double p = 0;
+        double dp = 0;
+        if (!skipHoles) { // with quantum holes, holes inside a window come from the hole subbands
+            double etaP = (evn - fp) * invVt;
+            p = d.nv[k] * FermiDirac.f12(etaP);
+            dp = -d.nv[k] * FermiDirac.fm12(etaP) * invVt;
+        }
         double donors = 0;
         double dDonors = 0;
         double acceptors = 0;
@@ -164,7 +174,7 @@ final class ChargeModel {
      * charges of {@link #evaluate} (C/m^2). Fresh arrays, handed to the caller.
      *
      * @param electrons electrons, the classical part outside windows plus the subband part inside
-     * @param holes     holes
+     * @param holes     holes, the classical part outside windows plus the hole subbands inside
      * @param donors    ionised donors, including empty donor-like traps
      * @param acceptors ionised acceptors, including filled acceptor-like traps
      * @param boxCharge free charge per area in each node's box, delta sheets and surface states
@@ -192,13 +202,14 @@ final class ChargeModel {
         double[] acceptorsOut = new double[nn];
         for (int i = 0; i < nn; i++) {
             boolean skipN = qs != null && d.quantumNode[i];
+            boolean skipP = skipN && qs.holes != null;
             double sn = 0;
             double sp = 0;
             double sd = 0;
             double sa = 0;
             double wt = 0;
             if (i > 0) {
-                half(i - 1, phi[i], skipN, cell);
+                half(i - 1, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i - 1];
                 sn += w * cell.n;
                 sp += w * cell.p;
@@ -207,7 +218,7 @@ final class ChargeModel {
                 wt += w;
             }
             if (i < nn - 1) {
-                half(i, phi[i], skipN, cell);
+                half(i, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i];
                 sn += w * cell.n;
                 sp += w * cell.p;
@@ -222,6 +233,10 @@ final class ChargeModel {
             if (skipN) {
                 SubbandDensity.atNode(d, qs, i, phi[i], phiRef[i], cell);
                 nOut[i] += cell.n;
+                if (skipP) {
+                    qs.holes.atNode(d, i, phi[i], phiRef[i], cell);
+                    pOut[i] += cell.p;
+                }
             }
         }
         return new Report(nOut, pOut, donorsOut, acceptorsOut, q);

@@ -50,6 +50,9 @@ final class Device {
     final double[] nv; // m^-3
     final double[] massZ; // m/m0 along c (Schroedinger)
     final double[] massXY; // m/m0 in plane (2D density of states)
+    final double[][] holeMassZ; // [band][cell] hole mass along c (m0): heavy, light, crystal-field
+    final double[][] holeMassXY; // [band][cell] hole mass across c for the 2D density of states (m0)
+    final double[][] holeOffset; // [band][cell] band edge below the top valence band (eV)
     final int[] layerOfCell;
 
     // dopant species per layer (top-down index), flattened
@@ -128,9 +131,13 @@ final class Device {
         nv = new double[cells];
         massZ = new double[cells];
         massXY = new double[cells];
+        holeMassZ = new double[3][cells];
+        holeMassXY = new double[3][cells];
+        holeOffset = new double[3][cells];
         layerOfCell = new int[cells];
         double t = s.temperatureK();
         WurtziteMaterial lastMaterial = null;
+        ValenceBands lastBands = null;
         double lastNv = 0;
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
@@ -149,9 +156,16 @@ final class Device {
             // one composition hands the same material to each of its cells, so compute it once
             if (m != lastMaterial) {
                 lastMaterial = m;
-                lastNv = ValenceBands.of(m).effectiveDensityOfStates(t);
+                lastBands = ValenceBands.of(m);
+                lastNv = lastBands.effectiveDensityOfStates(t);
             }
             nv[k] = lastNv;
+            ValenceBands.Band[] vb = {lastBands.heavyHole(), lastBands.lightHole(), lastBands.crystalFieldHole()};
+            for (int b = 0; b < 3; b++) {
+                holeMassZ[b][k] = vb[b].massParallel();
+                holeMassXY[b][k] = vb[b].massPerpendicular();
+                holeOffset[b][k] = vb[b].offsetEv();
+            }
             massZ[k] = em.electronParallel();
             massXY[k] = em.electronPerpendicular();
         }
@@ -432,6 +446,41 @@ final class Device {
             return ec[n - 2];
         }
         return (h[i - 1] * ec[i - 1] + h[i] * ec[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box-weighted valence-band edge at node i for phi = 0 (eV). */
+    double nodeEv(int i) {
+        if (i == 0) {
+            return ev[0];
+        }
+        if (i == n - 1) {
+            return ev[n - 2];
+        }
+        return (h[i - 1] * ev[i - 1] + h[i] * ev[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box-weighted offset of hole band b below the top valence band at node i (eV). */
+    double nodeHoleOffset(int b, int i) {
+        double[] o = holeOffset[b];
+        if (i == 0) {
+            return o[0];
+        }
+        if (i == n - 1) {
+            return o[n - 2];
+        }
+        return (h[i - 1] * o[i - 1] + h[i] * o[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box-weighted in-plane mass of hole band b at node i (m0). */
+    double nodeHoleMassXY(int b, int i) {
+        double[] m = holeMassXY[b];
+        if (i == 0) {
+            return m[0];
+        }
+        if (i == n - 1) {
+            return m[n - 2];
+        }
+        return (h[i - 1] * m[i - 1] + h[i] * m[i]) / (h[i - 1] + h[i]);
     }
 
     /** Box-weighted in-plane mass at node i. */

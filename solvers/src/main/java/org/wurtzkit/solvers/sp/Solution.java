@@ -5,8 +5,10 @@ import java.util.Collections;
 import java.util.List;
 import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.material.ValenceBands;
 import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.units.Constants;
 import org.wurtzkit.units.Units;
 
 /**
@@ -46,6 +48,7 @@ public final class Solution {
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
     private final List<CarrierSheet> sheets;
+    private final List<HoleSubband> holeSubbands;
     private final double channelSheet;
     private final double parasiticSheet;
 
@@ -161,6 +164,21 @@ public final class Solution {
             }
         }
         subbands = Collections.unmodifiableList(bands);
+        List<HoleSubband> hb = new ArrayList<>();
+        for (int w = 0; qs != null && qs.holes != null && w < nw; w++) {
+            int a = d.windowStart[w];
+            for (int b = 0; b < HoleStates.BANDS; b++) {
+                for (int k = 0; k < qs.holes.count[w][b]; k++) {
+                    double[] full = new double[nn];
+                    System.arraycopy(qs.holes.psi[w][b][k], 0, full, a, qs.holes.psi[w][b][k].length);
+                    double occ = qs.holes.sheet(d, w, b, k, phi, ref);
+                    double mxy = qs.holes.dos[w][b][k] * Math.PI * Constants.HBAR * Constants.HBAR
+                            / (Constants.ELECTRON_MASS * d.kT);
+                    hb.add(new HoleSubband(w, ValenceBands.Kind.values()[b], k, -qs.holes.energy[w][b][k], full, occ, mxy));
+                }
+            }
+        }
+        holeSubbands = Collections.unmodifiableList(hb);
         sheets = Collections.unmodifiableList(gatherSheets(d, qs, bands));
         double channel = 0;
         double parasitic = 0;
@@ -254,6 +272,34 @@ public final class Solution {
                 }
                 group[li][5] += occ * centre;
                 group[li][6] += occ;
+            }
+        }
+        // quantum holes: one group per (window, layer of the subband's centroid)
+        for (int w = 0; w < nw; w++) {
+            double[][] group = new double[nl][];
+            for (HoleSubband hs : holeSubbands) {
+                if (hs.window() != w) {
+                    continue;
+                }
+                int a = d.windowStart[w];
+                double[] psi = qs.holes.psi[w][hs.band().ordinal()][hs.index()];
+                double mean = 0;
+                double norm = 0;
+                for (int j = 1; j < psi.length - 1; j++) {
+                    double pr = psi[j] * psi[j] * d.box(a + j);
+                    mean += pr * d.x[a + j];
+                    norm += pr;
+                }
+                double centre = norm > 0 ? mean / norm : d.x[a];
+                int li = d.structure.layerIndexAt(Math.min(centre, d.structure.totalThickness()));
+                if (group[li] == null) {
+                    double top = Math.max(d.x[a], states.get(li).depthTop());
+                    double bottom = Math.min(d.x[d.windowEnd[w]], states.get(li).depthBottom());
+                    group[li] = new double[] {1, li, w, top, bottom, 0, 0};
+                    acc.add(group[li]);
+                }
+                group[li][5] += hs.sheetDensity() * centre;
+                group[li][6] += hs.sheetDensity();
             }
         }
         // classical carriers outside window interiors, per layer
@@ -454,6 +500,15 @@ public final class Solution {
     /** {@return every subband of every window, windows in order, energies ascending within a window} */
     public List<Subband> subbands() {
         return subbands;
+    }
+
+    /**
+     * {@return every hole subband of every window (windows in order; within a window heavy, light,
+     * crystal-field hole; levels from the valence-band top down); empty for a classical solve or
+     * where no hole state lies within the subband cut-off of the hole quasi-Fermi level}
+     */
+    public List<HoleSubband> holeSubbands() {
+        return holeSubbands;
     }
 
     /** {@return the quantum windows as resolved onto the mesh, shallowest first (empty for a classical solve)} */

@@ -16,6 +16,11 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param quantumRegion         where electrons are quantum; default {@link QuantumRegion#automatic()}
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
+ * @param quantumHoles          whether holes inside quantum windows come from hole subbands (three single
+ *                              bands, heavy, light and crystal-field hole) instead of the classical density;
+ *                              default false: the single-band hole subbands with hard-walled windows
+ *                              under-count holes where a window edge cuts a neutral p-region, so they are
+ *                              for hole wells (a 2DHG) and are switched on where one is expected
  * @param quasiFermiLevels      which contact electrons and holes follow in each part of the stack; default
  *                              {@link QuasiFermiLevels#defaults()} (electrons the channel; holes the gate above
  *                              the channel and the channel below it)
@@ -25,10 +30,10 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
         double maxNewtonStep, MeshPolicy mesh, QuantumRegion quantumRegion, int maxSubbands, double subbandCutoffKT,
-        QuasiFermiLevels quasiFermiLevels) {
+        QuasiFermiLevels quasiFermiLevels, boolean quantumHoles) {
 
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
-            QuantumRegion.automatic(), 60, 15, QuasiFermiLevels.defaults());
+            QuantumRegion.automatic(), 60, 15, QuasiFermiLevels.defaults(), false);
 
     /** Validates every field. */
     public SolverOptions {
@@ -52,60 +57,66 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     /** @param v tolerance (V) @return a copy */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, quasiFermiLevels);
+                quantumRegion, maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v outer iteration budget @return a copy */
     public SolverOptions withMaxIterations(int v) {
         return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, quasiFermiLevels);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v Newton tolerance (V) @return a copy */
     public SolverOptions withNewtonTolerance(double v) {
         return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, quasiFermiLevels);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v Newton step budget per Poisson solve @return a copy */
     public SolverOptions withMaxNewtonIterations(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, quasiFermiLevels);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v largest Newton update (V) @return a copy */
     public SolverOptions withMaxNewtonStep(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumRegion,
-                maxSubbands, subbandCutoffKT, quasiFermiLevels);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v mesh policy @return a copy */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
-                quantumRegion, maxSubbands, subbandCutoffKT, quasiFermiLevels);
+                quantumRegion, maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v quantum region @return a copy */
     public SolverOptions withQuantumRegion(QuantumRegion v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
-                maxSubbands, subbandCutoffKT, quasiFermiLevels);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v most subbands per window @return a copy */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, v, subbandCutoffKT, quasiFermiLevels);
+                quantumRegion, v, subbandCutoffKT, quasiFermiLevels, quantumHoles);
     }
 
     /** @param v subband cut-off above E_F in kT @return a copy */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, v, quasiFermiLevels);
+                quantumRegion, maxSubbands, v, quasiFermiLevels, quantumHoles);
+    }
+
+    /** @param v whether holes in quantum windows are quantum @return a copy */
+    public SolverOptions withQuantumHoles(boolean v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumRegion, maxSubbands, subbandCutoffKT, quasiFermiLevels, v);
     }
 
     /** @param v the quasi-Fermi level of each carrier in each region @return a copy */
     public SolverOptions withQuasiFermiLevels(QuasiFermiLevels v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumRegion, maxSubbands, subbandCutoffKT, v);
+                quantumRegion, maxSubbands, subbandCutoffKT, v, quantumHoles);
     }
 }

@@ -19,7 +19,9 @@
  * iterate.</li>
  * <li><b>Outer loop</b> (A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81,
  * 7880 (1997)): {@code QuantumStates} solves the BenDaniel-Duke equation in every quantum window
- * ({@link org.wurtzkit.solvers.sp.QuantumRegion}) for the lowest subbands, O(N k); then Newton-Poisson
+ * ({@link org.wurtzkit.solvers.sp.QuantumRegion}) for the lowest subbands, O(N k), electrons and the
+ * three single-band hole bands when quantum holes are on ({@code HoleStates}, skipped where the
+ * valence band is far from the hole quasi-Fermi level); then Newton-Poisson
  * runs with the predictor density g<sub>k</sub> ln(1 + e<sup>eta</sup>) |psi<sub>k</sub>|<sup>2</sup>,
  * whose one home is {@code SubbandDensity}; repeat until max |delta phi| is below the tolerance. An
  * eigen-solver failure inside the loop ends the solve as a {@code NotConvergedException} with the
@@ -28,6 +30,9 @@
  * that runs out of budget throws {@link org.wurtzkit.solvers.sp.NotConvergedException} carrying its
  * record and last finite iterate.</li>
  * </ol>
+ * Every carrier density uses its own carrier's quasi-Fermi level in its region
+ * ({@link org.wurtzkit.solvers.sp.QuasiFermiLevels}); the solution groups the carriers into sheets
+ * ({@link org.wurtzkit.solvers.sp.CarrierSheet}) and reports the channel 2DEG apart.
  * A sweep starts each point from a potential extrapolated through the last converged solutions
  * ({@link org.wurtzkit.solvers.sp.PotentialPredictor}),
  * which skips the classical start; the convergence test is unchanged, so the start never moves the
