@@ -23,7 +23,7 @@ final class HoleStates {
     final double[][][][] psi; // [window][band][state][local node]
     final double[][][] dos; // [window][band][state] m^-2
     private final EffectiveMassHamiltonian[][] hamiltonians;
-    private final double[] potential;
+    private final double[][] potential; // [window][local node], hole energy of one band (eV)
     private final double[][][] massWeight; // [window][band][local node]
 
     HoleStates(Device d) {
@@ -34,11 +34,11 @@ final class HoleStates {
         dos = new double[windows][BANDS][];
         hamiltonians = new EffectiveMassHamiltonian[windows][BANDS];
         massWeight = new double[windows][BANDS][];
-        int longest = 0;
+        potential = new double[windows][];
         for (int w = 0; w < windows; w++) {
             int a = d.windowStart[w];
             int e = d.windowEnd[w];
-            longest = Math.max(longest, e - a + 1);
+            potential[w] = new double[e - a + 1];
             double[] z = new double[e - a + 1];
             for (int i = a; i <= e; i++) {
                 z[i - a] = d.x[i];
@@ -59,7 +59,6 @@ final class HoleStates {
                 dos[w][b] = new double[kMax];
             }
         }
-        potential = new double[longest];
     }
 
     /** Solves every window for the potential phi (V); counts stay 0 where no hole state can be occupied. */
@@ -85,14 +84,13 @@ final class HoleStates {
                 continue; // the valence band is far below the hole level everywhere in the window
             }
             int len = e - a + 1;
-            double[] v = potential.length == len ? potential : new double[len];
+            double[] v = potential[w];
             for (int b = 0; b < BANDS; b++) {
                 for (int j = 0; j < len; j++) {
                     v[j] = phi[a + j] - d.nodeEv(a + j) + d.nodeHoleOffset(b, a + j);
                 }
                 int kMax = energy[w][b].length;
-                int found = hamiltonians[w][b].belowInto(java.util.Arrays.copyOf(v, len), bound, kMax, energy[w][b],
-                        psi[w][b]);
+                int found = hamiltonians[w][b].belowInto(v, bound, kMax, energy[w][b], psi[w][b]);
                 count[w][b] = found;
                 for (int k = 0; k < found; k++) {
                     double mxy = 0;
@@ -139,7 +137,6 @@ final class HoleStates {
 
     /** The sheet density of hole subband k of band b in window w (m^-2). */
     double sheet(Device d, int w, int b, int k, double[] phi, double[] phiRef) {
-        PointDensities cell = new PointDensities();
         int a = d.windowStart[w];
         double invVt = 1 / d.vt;
         double sum = 0;
