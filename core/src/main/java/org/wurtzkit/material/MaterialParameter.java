@@ -101,7 +101,28 @@ public enum MaterialParameter {
      * Angular-averaged electromechanical coupling coefficient K^2 (piezoelectric acoustic-phonon
      * scattering), dimensionless.
      */
-    ELECTROMECHANICAL_COUPLING("K2_pe", "1", "1", 1);
+    ELECTROMECHANICAL_COUPLING("K2_pe", "1", "1", 1),
+
+    // ---- valence band (issue 12): the parameters of the 6x6 k.p Hamiltonian of S. L. Chuang and
+    // C. S. Chang, Phys. Rev. B 54, 2491 (1996), from which ValenceBands derives the hole masses ----
+    /** Valence-band parameter A1 (units of hbar^2/2m0; negative: the band curves down). */
+    VALENCE_A1("A1", "1", "1", 1),
+    /** Valence-band parameter A2 (units of hbar^2/2m0). */
+    VALENCE_A2("A2", "1", "1", 1),
+    /** Valence-band parameter A3 (units of hbar^2/2m0). */
+    VALENCE_A3("A3", "1", "1", 1),
+    /** Valence-band parameter A4 (units of hbar^2/2m0). */
+    VALENCE_A4("A4", "1", "1", 1),
+    /** Valence-band parameter A5 (units of hbar^2/2m0). */
+    VALENCE_A5("A5", "1", "1", 1),
+    /** Valence-band parameter A6 (units of hbar^2/2m0). */
+    VALENCE_A6("A6", "1", "1", 1),
+    /** Linear-in-k valence-band parameter A7. */
+    VALENCE_A7("A7", "eV m", "eV Angstrom", Units.ANGSTROM),
+    /** Crystal-field splitting Delta_cr of the valence band (negative for AlN). */
+    CRYSTAL_FIELD_SPLITTING("Delta_cr", "eV", "eV", 1),
+    /** Spin-orbit splitting Delta_so of the valence band. */
+    SPIN_ORBIT_SPLITTING("Delta_so", "eV", "eV", 1);
 
     private final String key;
     private final String siUnit;
@@ -191,6 +212,13 @@ public enum MaterialParameter {
             case MASS_DENSITY -> new double[] {1, 12};
             case ACOUSTIC_DEFORMATION_POTENTIAL -> new double[] {1, 40};
             case ELECTROMECHANICAL_COUPLING -> new double[] {0, 1};
+            // valence-band parameters (file units hbar^2/2m0, eV Angstrom, eV): published nitride A1..A6
+            // lie within about +-10, A7 below 0.1 eV Angstrom, |Delta_cr| below 0.25 eV, Delta_so below
+            // 0.03 eV (common practice, no source); the ranges leave room around them
+            case VALENCE_A1, VALENCE_A2, VALENCE_A3, VALENCE_A4, VALENCE_A5, VALENCE_A6 -> new double[] {-20, 20};
+            case VALENCE_A7 -> new double[] {-1, 1};
+            case CRYSTAL_FIELD_SPLITTING -> new double[] {-5, 5}; // wide: tests push split-off bands away with -3 eV
+            case SPIN_ORBIT_SPLITTING -> new double[] {0, 0.1};
         };
     }
 

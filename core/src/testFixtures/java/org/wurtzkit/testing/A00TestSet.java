@@ -106,6 +106,19 @@ public final class A00TestSet implements ParameterSet {
                 .set(MaterialParameter.MASS_DENSITY, rhoGcm3 * 1e3, DON12)
                 .set(MaterialParameter.ACOUSTIC_DEFORMATION_POTENTIAL, xiAc, DON12)
                 .set(MaterialParameter.ELECTROMECHANICAL_COUPLING, k2, DON12);
+        // valence-band parameters of VM03 (from memory), by binary
+        double[] v = switch (name) {
+            case "GaN" -> new double[] {-7.21, -0.44, 6.68, -3.46, -3.40, -4.90, 0.0937e-10, 0.010, 0.017};
+            case "AlN" -> new double[] {-3.86, -0.25, 3.58, -1.32, -1.47, -1.64, 0, -0.169, 0.019};
+            default -> new double[] {-8.21, -0.68, 7.57, -5.23, -5.11, -5.96, 0, 0.040, 0.005};
+        };
+        MaterialParameter[] keys = {MaterialParameter.VALENCE_A1, MaterialParameter.VALENCE_A2,
+            MaterialParameter.VALENCE_A3, MaterialParameter.VALENCE_A4, MaterialParameter.VALENCE_A5,
+            MaterialParameter.VALENCE_A6, MaterialParameter.VALENCE_A7, MaterialParameter.CRYSTAL_FIELD_SPLITTING,
+            MaterialParameter.SPIN_ORBIT_SPLITTING};
+        for (int i = 0; i < keys.length; i++) {
+            b.set(keys[i], v[i], VM03);
+        }
         return b.build();
     }
 

@@ -18,7 +18,10 @@
  * <li>{@link org.wurtzkit.examples.TradeoffExample}: R_sh against gate leakage over a family of
  * wafers (cap, Al fraction, barrier thickness), with the Pareto front at a V_th band (not part of
  * {@link org.wurtzkit.examples.Demo}).</li>
- * <li>{@link org.wurtzkit.examples.Demo}: all five in one run.</li>
+ * <li>{@link org.wurtzkit.examples.PGanGateExample}: the threshold voltage of a p-GaN gate HEMT
+ * (invented wafer TNL-0817) against the Mg density for three barrier thicknesses; not part of the
+ * demo run.</li>
+ * <li>{@link org.wurtzkit.examples.Demo}: the first five in one run.</li>
  * </ul>
  *
  * <p>Each program takes the output folder as its first argument (default {@code out}) and

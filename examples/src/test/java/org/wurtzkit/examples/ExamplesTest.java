@@ -96,7 +96,14 @@ class ExamplesTest {
         for (CSVRecord row : sub) {
             sum += Double.parseDouble(row.get("occupation_cm^-2"));
         }
-        assertEquals(r.sheetDensityPerCm2(), sum, 1e-9 * sum, "the subbands' occupations add up to n_s");
+        double windows = 0;
+        for (double v : r.solution().wellSheetDensities()) {
+            windows += v * 1e-4;
+        }
+        assertEquals(windows, sum, 1e-9 * sum, "the subbands' occupations add up to the windows' electrons");
+        // n_s is the channel's part: at 0 V the cap above the barrier holds next to nothing
+        assertTrue(r.sheetDensityPerCm2() <= sum * (1 + 1e-12) && r.sheetDensityPerCm2() > sum * (1 - 1e-4),
+                "n_s " + r.sheetDensityPerCm2() + " vs subbands " + sum);
         assertTrue(r.drawnSubbands() >= 1 && r.drawnSubbands() <= r.solution().subbands().size());
         assertTrue(String.join("\n", r.summary()).contains("n_s = " + BandDiagramExample.formatSheetDensity(
                 r.sheetDensityPerCm2())));
@@ -131,6 +138,24 @@ class ExamplesTest {
                 }
             }
         }
+    }
+
+    @Test
+    void pGanGate(@TempDir Path out) throws IOException {
+        PGanGateExample.Settings s = PGanGateExample.Settings.quick();
+        PGanGateExample.Result r = PGanGateExample.run(out, s, log);
+        Outputs.assertPng(file(r, "p-gan-gate-vth.png"), PGanGateExample.WIDTH, PGanGateExample.HEIGHT);
+        List<CSVRecord> rows = csv(r, "p-gan-gate-vth.csv", "barrier_thickness_nm", "mg_density_cm^-3",
+                "threshold_voltage_V");
+        assertEquals(s.mgPerCm3().length * s.barrierNm().length, rows.size());
+        double[][] v = r.vthV();
+        // normally-off for the 12 nm barrier (published p-GaN gate devices: about +1 V, Uemoto et al.,
+        // IEEE Trans. Electron Devices 54, 3393 (2007), from memory); V_th rises with Mg and falls with
+        // the barrier thickness (common practice, no source)
+        assertTrue(v[0][1] > 0, "normally-off: " + v[0][1]);
+        assertTrue(v[0][1] > v[0][0] && v[1][1] > v[1][0], "V_th rises with Mg");
+        assertTrue(v[0][0] > v[1][0], "V_th falls with the barrier thickness");
+        assertTrue(String.join("\n", r.summary()).contains("invented"));
     }
 
     @Test

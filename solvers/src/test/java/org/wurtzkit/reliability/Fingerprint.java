@@ -87,7 +87,8 @@ final class Fingerprint {
         h.add(s.holeSheetDensity());
         h.add(s.gateCharge());
         h.add(s.chargeNeutralityResidual());
-        h.add(s.holeFermiLevelEv());
+        h.add(s.electronFermiLevel());
+        h.add(s.holeFermiLevel());
         ConvergenceRecord r = s.convergence();
         h.add((long) r.iterations());
         h.add((long) r.newtonIterations());

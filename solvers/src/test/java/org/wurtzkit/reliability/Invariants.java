@@ -7,9 +7,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.wurtzkit.solvers.sp.BandDiagram;
+import org.wurtzkit.solvers.sp.Carrier;
+import org.wurtzkit.solvers.sp.CarrierSheet;
 import org.wurtzkit.solvers.sp.ConvergenceRecord;
 import org.wurtzkit.solvers.sp.DepthRange;
-import org.wurtzkit.solvers.sp.HoleFermiLevel;
 import org.wurtzkit.solvers.sp.NotConvergedException;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
@@ -198,11 +199,18 @@ final class Invariants {
         assertEquals(0.0, sol.fermiLevelEv());
         if (s.top() instanceof TopBoundary.Schottky g) {
             assertEquals(g.barrierHeightEv() - g.biasV(), ec[0], ENERGY_EXACT, "E_c(0) = phi_B - V" + where);
-            if (o.holeFermiLevel() == HoleFermiLevel.GATE) {
-                assertEquals(-g.biasV(), sol.holeFermiLevelEv(), ENERGY_EXACT, "holes at the gate Fermi level" + where);
+        }
+        // quasi-Fermi levels (QuasiFermiLevels defaults): electrons at the channel's 0 eV; holes at the
+        // gate's -V or the channel's 0 eV, and at 0 eV everywhere with a free surface
+        double[] efn = sol.electronFermiLevel();
+        double[] efp = sol.holeFermiLevel();
+        if (o.quasiFermiLevels().rules().isEmpty()) {
+            double gate = s.top() instanceof TopBoundary.Schottky g ? -g.biasV() : 0;
+            for (int i = 0; i < n; i++) {
+                assertEquals(0.0, efn[i], ENERGY_EXACT, "electrons at the channel level" + where);
+                assertTrue(Math.abs(efp[i]) <= ENERGY_EXACT || Math.abs(efp[i] - gate) <= ENERGY_EXACT,
+                        "holes at the gate or channel level, not " + efp[i] + where);
             }
-        } else {
-            assertEquals(0.0, sol.holeFermiLevelEv(), ENERGY_EXACT);
         }
         if (s.bottom() instanceof BottomBoundary.FixedFermiLevel b) {
             assertEquals(b.conductionAboveFermiEv(), ec[n - 1], ENERGY_EXACT, "E_c at the bottom" + where);
@@ -271,7 +279,25 @@ final class Invariants {
             wellSum += sum;
         }
         if (!windows.isEmpty()) {
-            assertEquals(wellSum * 1e-4, sol.sheetDensityPerCm2(), 1e-12 * Math.max(wellSum * 1e-4, 1), where);
+            // the subband electrons split into sheets (per window and layer, the gate side of the
+            // barrier apart); sheets below the report threshold are left out; the channel is one of them
+            double quantum = 0;
+            double channel = 0;
+            int channels = 0;
+            for (CarrierSheet c : sol.carrierSheets()) {
+                if (c.window() >= 0 && c.carrier() == Carrier.ELECTRONS) {
+                    quantum += c.sheetDensity();
+                }
+                if (c.role() == CarrierSheet.Role.CHANNEL) {
+                    channel = c.sheetDensity();
+                    channels++;
+                }
+            }
+            assertTrue(channels <= 1, "one channel at most: " + sol.carrierSheets() + where);
+            assertEquals(channel * 1e-4, sol.sheetDensityPerCm2(), 0.0, "the 2DEG is the channel sheet" + where);
+            double left = 2.0 * windows.size() * sol.structure().layerStates().size() * Solution.SHEET_REPORT_THRESHOLD;
+            assertTrue(quantum <= wellSum * (1 + 1e-9) && quantum >= wellSum * (1 - 1e-9) - left,
+                    "sheets " + quantum + " vs subbands " + wellSum + where);
         }
         // the subband electrons are part of all electrons: integral of n >= sum of occupations
         assertTrue(sol.electronSheetDensity() >= wellSum * (1 - 1e-9), "electron sheet " + sol.electronSheetDensity()

@@ -24,7 +24,9 @@ import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.mesh.Mesh;
 import org.wurtzkit.solvers.mesh.MeshPolicy;
 import org.wurtzkit.solvers.schrodinger.EffectiveMassHamiltonian;
-import org.wurtzkit.solvers.sp.HoleFermiLevel;
+import org.wurtzkit.solvers.sp.Carrier;
+import org.wurtzkit.solvers.sp.FermiContact;
+import org.wurtzkit.solvers.sp.QuasiFermiLevels;
 import org.wurtzkit.solvers.sp.NotConvergedException;
 import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
@@ -61,13 +63,13 @@ class SolverBadInputTest {
 
     private static SolverOptions newtonTolerance(double v) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), v, D.maxNewtonIterations(), D.maxNewtonStep(), D.mesh(),
-                D.quantumWindows(), D.maxSubbands(), D.subbandCutoffKT(), D.holeFermiLevel());
+                D.quantumWindows(), D.maxSubbands(), D.subbandCutoffKT(), D.quasiFermiLevels(), D.quantumHoles(), D.densityOfStatesMass());
     }
 
     private static SolverOptions nulls(int which) {
         return new SolverOptions(D.tolerance(), D.maxIterations(), D.newtonTolerance(), D.maxNewtonIterations(),
                 D.maxNewtonStep(), which == 0 ? null : D.mesh(), which == 1 ? null : D.quantumWindows(), D.maxSubbands(),
-                D.subbandCutoffKT(), which == 2 ? null : D.holeFermiLevel());
+                D.subbandCutoffKT(), which == 2 ? null : D.quasiFermiLevels(), D.quantumHoles(), D.densityOfStatesMass());
     }
 
     static Stream<Arguments> options() {
@@ -110,11 +112,11 @@ class SolverBadInputTest {
                 row("cut-off 201 kT", () -> D.withSubbandCutoffKT(201), cut, 201.0, "[1, 200]"),
                 row("null mesh policy", () -> D.withMesh(null), "mesh policy", "null", "(non-null)"),
                 row("null quantum windows", () -> D.withQuantumWindows(null), "quantum windows", "null", "(non-null)"),
-                row("null hole Fermi level", () -> D.withHoleFermiLevel(null), "hole Fermi level", "null", "(non-null)"),
+                row("null quasi-Fermi levels", () -> D.withQuasiFermiLevels(null), "quasi-Fermi levels", "null", "(non-null)"),
                 row("null band alignment", () -> Structure.builder(SET).bandAlignment(null), "band alignment", "null", "(non-null)"),
                 row("null mesh policy (constructor)", () -> nulls(0), "mesh policy", "null", "(non-null)"),
                 row("null quantum windows (constructor)", () -> nulls(1), "quantum windows", "null", "(non-null)"),
-                row("null hole Fermi level (constructor)", () -> nulls(2), "hole Fermi level", "null", "(non-null)"),
+                row("null quasi-Fermi levels (constructor)", () -> nulls(2), "quasi-Fermi levels", "null", "(non-null)"),
                 row("conduction-band fraction NaN", () -> BandAlignment.conductionBandFraction(NAN),
                         "conduction-band offset fraction", NAN, "[0, 1]"),
                 row("conduction-band fraction 1.1", () -> BandAlignment.conductionBandFraction(1.1),
@@ -454,10 +456,54 @@ class SolverBadInputTest {
         }
     }
 
+    static Stream<Arguments> quasiFermiRules() {
+        QuasiFermiLevels q = QuasiFermiLevels.defaults();
+        double total = hemt().totalThickness();
+        return Stream.of(
+                row("floating level NaN", () -> FermiContact.floating(NAN), "floating quasi-Fermi level (eV)", NAN, "(finite)"),
+                row("floating level +inf", () -> FermiContact.floating(INF), "floating quasi-Fermi level (eV)", INF,
+                        "(finite)"),
+                row("blank layer name", () -> q.withLayer(Carrier.HOLES, " ", FermiContact.GATE),
+                        "quasi-Fermi rule layer name", "\" \"", "a layer name (non-blank)"),
+                row("depth range upside down", () -> q.withDepths(Carrier.HOLES, 20 * NM, 10 * NM, FermiContact.GATE),
+                        "quasi-Fermi rule depthBottom (m)", 10 * NM, "(" + 20 * NM + ", ...) (below depthTop)"),
+                row("depth range above the surface", () -> q.withDepths(Carrier.HOLES, -1 * NM, 10 * NM, FermiContact.GATE),
+                        "quasi-Fermi rule depthTop (m)", -1 * NM, "[0, 0.001]"),
+                row("overlapping depth ranges", () -> q.withDepths(Carrier.HOLES, 0, 20 * NM, FermiContact.GATE)
+                        .withDepths(Carrier.HOLES, 10 * NM, 30 * NM, FermiContact.CHANNEL), "quasi-Fermi rule 1 region (HOLES)",
+                        "depths [" + 10 * NM + ", " + 30 * NM + "] m", "not overlapping rule 0 for the same carrier, depths [0.0, "
+                                + 20 * NM + "] m"),
+                row("one layer named twice", () -> q.withLayer(Carrier.ELECTRONS, "barrier", FermiContact.GATE)
+                        .withLayer(Carrier.ELECTRONS, "barrier", FermiContact.CHANNEL), "quasi-Fermi rule 1 region (ELECTRONS)",
+                        "layer \"barrier\"", "not overlapping rule 0 for the same carrier, layer \"barrier\""),
+                row("no such layer", () -> new SelfConsistentSolver(D.withQuasiFermiLevels(
+                        q.withLayer(Carrier.HOLES, "p-GaN", FermiContact.GATE))).solve(hemt()), "quasi-Fermi rule 0 layer",
+                        "\"p-GaN\"", "one of the stack's layers [barrier, buffer]"),
+                row("depth range below the stack", () -> new SelfConsistentSolver(D.withQuasiFermiLevels(
+                        q.withDepths(Carrier.ELECTRONS, 0, 2 * total, FermiContact.GATE))).solve(hemt()),
+                        "quasi-Fermi rule 0 depthBottom (m)", 2 * total, "(0.0, " + total + "] (inside the stack, whose thickness is "
+                                + total + " m)"),
+                row("layer rule and depth rule overlapping", () -> new SelfConsistentSolver(D
+                        .withQuantumWindows(QuantumWindows.none()).withQuasiFermiLevels(
+                                q.withLayer(Carrier.HOLES, "barrier", FermiContact.GATE)
+                                        .withDepths(Carrier.HOLES, 20 * NM, 40 * NM, FermiContact.CHANNEL))).solve(hemt()),
+                        "quasi-Fermi rule 1 region (HOLES)", "depths [" + 20 * NM + ", " + 40 * NM + "] m",
+                        "not overlapping rule 0 for the same carrier, layer \"barrier\""));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("quasiFermiRules")
+    void quasiFermiRulesReject(BadInput.Case c) {
+        BadInput.check(c);
+    }
+
     @Test
-    void theDocumentedHoleFermiLevelChoicesAreAccepted() {
-        for (HoleFermiLevel h : HoleFermiLevel.values()) {
-            SelfConsistentSolver solver = new SelfConsistentSolver(D.withHoleFermiLevel(h));
+    void theDocumentedQuasiFermiChoicesAreAccepted() {
+        QuasiFermiLevels q = QuasiFermiLevels.defaults();
+        for (QuasiFermiLevels levels : new QuasiFermiLevels[] {q, q.withLayer(Carrier.HOLES, "barrier", FermiContact.CHANNEL),
+                q.withDepths(Carrier.HOLES, 0, 10 * NM, FermiContact.floating(-0.5))
+                        .withLayer(Carrier.ELECTRONS, "buffer", FermiContact.CHANNEL)}) {
+            SelfConsistentSolver solver = new SelfConsistentSolver(D.withQuasiFermiLevels(levels));
             Invariants.check(hemt(), solver.solve(hemt()), solver.options());
         }
     }

@@ -8,7 +8,10 @@ import org.wurtzkit.solvers.statistics.Ionization;
  * integration: each half of a box takes the material of its own cell, so abrupt heterointerfaces
  * need no averaging. Electrons inside quantum windows come from the subbands through the
  * predictor of A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81, 7880
- * (1997), written once in {@link SubbandDensity}. Stateless after construction: every result goes
+ * (1997), written once in {@link SubbandDensity}. Each density uses the quasi-Fermi level of its
+ * carrier in its cell (see {@link QuasiFermiLevels}): electrons and shallow donors the electron
+ * level, holes and shallow acceptors the hole level, deep levels that of the layer's majority
+ * carrier. Stateless after construction: every result goes
  * into caller arrays or a caller-owned {@link PointDensities}, so one instance may serve many
  * threads.
  */
@@ -36,35 +39,37 @@ final class ChargeModel {
         boolean quantum = qs != null;
         for (int i = 0; i < nn; i++) {
             boolean skipN = quantum && d.quantumNode[i];
+            boolean skipP = skipN && qs.holes != null;
             double qi = 0;
             double dqi = 0;
             if (d.sameCellsAround[i]) {
                 // both half-boxes hold the same material: one evaluation serves the whole box
-                half(i, phi[i], skipN, cell);
+                half(i, phi[i], skipN, skipP, cell);
                 double w = 0.5 * (d.h[i - 1] + d.h[i]);
                 qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
                 dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             } else if (i > 0) {
-                half(i - 1, phi[i], skipN, cell);
+                half(i - 1, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i - 1];
                 qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
                 dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             }
             if (i < nn - 1 && !d.sameCellsAround[i]) {
-                half(i, phi[i], skipN, cell);
+                half(i, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i];
                 qi += w * (cell.p - cell.n + cell.donors - cell.acceptors);
                 dqi += w * (cell.dp - cell.dn + cell.dDonors - cell.dAcceptors);
             }
             if (d.deltaDensity[i] > 0) {
                 double e = d.nodeEc(i) - phi[i];
+                int c = i < nn - 1 ? i : i - 1; // the cell whose quasi-Fermi levels the sheet takes
                 if (d.deltaIsDonor[i]) {
-                    double x = (d.deltaEnergy[i] - e) * invVt;
+                    double x = (d.deltaEnergy[i] - e + d.efn[c]) * invVt;
                     qi += d.deltaDensity[i] * Ionization.ionizedDonorFraction(x, Ionization.DEFAULT_DONOR_DEGENERACY);
                     dqi += d.deltaDensity[i]
                             * Ionization.ionizedDonorFractionDerivative(x, Ionization.DEFAULT_DONOR_DEGENERACY) * invVt;
                 } else {
-                    double x = (e - gapAt(i) + d.deltaEnergy[i]) * invVt;
+                    double x = (e - gapAt(i) + d.deltaEnergy[i] - d.efp[c]) * invVt;
                     qi -= d.deltaDensity[i] * Ionization.ionizedAcceptorFraction(x, Ionization.DEFAULT_ACCEPTOR_DEGENERACY);
                     // dx/dphi = -1/kT, and the sheet's charge is -N f(x)
                     dqi += d.deltaDensity[i]
@@ -73,7 +78,7 @@ final class ChargeModel {
             }
             if (i == 0 && d.surfaceDonorDensity > 0) {
                 // donor-like surface states at E_c(0) - E_s (Ibbetson et al. 2000), degeneracy 1
-                double x = (d.surfaceDonorEnergy - (d.ec[0] - phi[0])) * invVt;
+                double x = (d.surfaceDonorEnergy - (d.ec[0] - phi[0]) + d.efn[0]) * invVt;
                 qi += d.surfaceDonorDensity * Ionization.donorLikeTrapChargedFraction(x, 1);
                 dqi += d.surfaceDonorDensity * Ionization.donorLikeTrapChargedFractionDerivative(x, 1) * invVt;
             }
@@ -82,6 +87,11 @@ final class ChargeModel {
                 double box = d.box(i);
                 qi -= box * cell.n;
                 dqi -= box * cell.dn;
+                if (skipP) {
+                    qs.holes.atNode(d, i, phi[i], phiRef[i], cell);
+                    qi += box * cell.p;
+                    dqi += box * cell.dp;
+                }
             }
             q[i] = Device.Q * qi;
             dq[i] = Device.Q * dqi;
@@ -97,46 +107,53 @@ final class ChargeModel {
      * Densities of one cell's material at node potential phi (m^-3) and derivatives (per V), into
      * every field of {@code out}.
      */
-    private void half(int k, double phi, boolean skipElectrons, PointDensities out) {
+    private void half(int k, double phi, boolean skipElectrons, boolean skipHoles, PointDensities out) {
         double ecn = d.ec[k] - phi;
         double evn = d.ev[k] - phi;
         double n = 0;
         double dn = 0;
+        double fn = d.efn[k];
+        double fp = d.efp[k];
         if (!skipElectrons) {
-            double eta = -ecn * invVt;
+            double eta = (fn - ecn) * invVt;
             n = d.nc[k] * FermiDirac.f12(eta);
             dn = d.nc[k] * FermiDirac.fm12(eta) * invVt;
         }
-        double etaP = (evn - d.holeFermiEv) * invVt;
-        double p = d.nv[k] * FermiDirac.f12(etaP);
-        double dp = -d.nv[k] * FermiDirac.fm12(etaP) * invVt;
+        double p = 0;
+        double dp = 0;
+        if (!skipHoles) { // with quantum holes, holes inside a window come from the hole subbands
+            double etaP = (evn - fp) * invVt;
+            p = d.nv[k] * FermiDirac.f12(etaP);
+            dp = -d.nv[k] * FermiDirac.fm12(etaP) * invVt;
+        }
         double donors = 0;
         double dDonors = 0;
         double acceptors = 0;
         double dAcceptors = 0;
         int li = d.layerOfCell[k];
+        double fDeep = d.deepFollowHoles[li] ? fp : fn; // deep levels: the majority carrier's level
         double[] dens = d.speciesDensity[li];
         for (int j = 0; j < dens.length; j++) {
             double e = d.speciesEnergy[li][j];
             double g = d.speciesDegeneracy[li][j];
             switch (d.speciesKind[li][j]) {
-                case SHALLOW_DONOR -> { // shallow donor, E_D = E_c - e, x = (E_F - E_D)/kT
-                    double x = (e - ecn) * invVt;
+                case SHALLOW_DONOR -> { // shallow donor, E_D = E_c - e, x = (E_Fn - E_D)/kT
+                    double x = (e - ecn + fn) * invVt;
                     donors += dens[j] * Ionization.ionizedDonorFraction(x, g);
                     dDonors += dens[j] * Ionization.ionizedDonorFractionDerivative(x, g) * invVt;
                 }
-                case SHALLOW_ACCEPTOR -> { // shallow acceptor, E_A = E_v + e, x = (E_A - E_F)/kT
-                    double x = (evn + e) * invVt;
+                case SHALLOW_ACCEPTOR -> { // shallow acceptor, E_A = E_v + e, x = (E_A - E_Fp)/kT
+                    double x = (evn + e - fp) * invVt;
                     acceptors += dens[j] * Ionization.ionizedAcceptorFraction(x, g);
                     dAcceptors -= dens[j] * Ionization.ionizedAcceptorFractionDerivative(x, g) * invVt;
                 }
                 case DONOR_LIKE_TRAP -> { // donor-like deep level at E_T = E_c - e, x = (E_F - E_T)/kT
-                    double x = (e - ecn) * invVt;
+                    double x = (e - ecn + fDeep) * invVt;
                     donors += dens[j] * Ionization.donorLikeTrapChargedFraction(x, g);
                     dDonors += dens[j] * Ionization.donorLikeTrapChargedFractionDerivative(x, g) * invVt;
                 }
                 case ACCEPTOR_LIKE_TRAP -> { // acceptor-like deep level at E_T = E_c - e
-                    double x = (e - ecn) * invVt;
+                    double x = (e - ecn + fDeep) * invVt;
                     acceptors += dens[j] * Ionization.acceptorLikeTrapChargedFraction(x, g);
                     dAcceptors += dens[j] * Ionization.acceptorLikeTrapChargedFractionDerivative(x, g) * invVt;
                 }
@@ -159,7 +176,7 @@ final class ChargeModel {
      * charges of {@link #evaluate} (C/m^2). Fresh arrays, handed to the caller.
      *
      * @param electrons electrons, the classical part outside windows plus the subband part inside
-     * @param holes     holes
+     * @param holes     holes, the classical part outside windows plus the hole subbands inside
      * @param donors    ionised donors, including empty donor-like traps
      * @param acceptors ionised acceptors, including filled acceptor-like traps
      * @param boxCharge free charge per area in each node's box, delta sheets and surface states
@@ -187,13 +204,14 @@ final class ChargeModel {
         double[] acceptorsOut = new double[nn];
         for (int i = 0; i < nn; i++) {
             boolean skipN = qs != null && d.quantumNode[i];
+            boolean skipP = skipN && qs.holes != null;
             double sn = 0;
             double sp = 0;
             double sd = 0;
             double sa = 0;
             double wt = 0;
             if (i > 0) {
-                half(i - 1, phi[i], skipN, cell);
+                half(i - 1, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i - 1];
                 sn += w * cell.n;
                 sp += w * cell.p;
@@ -202,7 +220,7 @@ final class ChargeModel {
                 wt += w;
             }
             if (i < nn - 1) {
-                half(i, phi[i], skipN, cell);
+                half(i, phi[i], skipN, skipP, cell);
                 double w = 0.5 * d.h[i];
                 sn += w * cell.n;
                 sp += w * cell.p;
@@ -217,6 +235,10 @@ final class ChargeModel {
             if (skipN) {
                 SubbandDensity.atNode(d, qs, i, phi[i], phiRef[i], cell);
                 nOut[i] += cell.n;
+                if (skipP) {
+                    qs.holes.atNode(d, i, phi[i], phiRef[i], cell);
+                    pOut[i] += cell.p;
+                }
             }
         }
         return new Report(nOut, pOut, donorsOut, acceptorsOut, q);

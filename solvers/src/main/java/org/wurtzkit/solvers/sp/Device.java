@@ -8,6 +8,7 @@ import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.EffectiveMasses;
+import org.wurtzkit.material.ValenceBands;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.solvers.mesh.Mesh;
 import org.wurtzkit.solvers.statistics.CarrierDensity;
@@ -49,6 +50,9 @@ final class Device {
     final double[] nv; // m^-3
     final double[] massZ; // m/m0 along c (Schroedinger)
     final double[] massXY; // m/m0 in plane (2D density of states)
+    final double[][] holeMassZ; // [band][cell] hole mass along c (m0): heavy, light, crystal-field
+    final double[][] holeMassXY; // [band][cell] hole mass across c for the 2D density of states (m0)
+    final double[][] holeOffset; // [band][cell] band edge below the top valence band (eV)
     final int[] layerOfCell;
 
     // dopant species per layer (top-down index), flattened
@@ -69,7 +73,15 @@ final class Device {
     final double surfaceDonorEnergy; // eV below Ec
     final boolean bottomDirichlet;
     final double phiBottom;
-    final double holeFermiEv;
+    final double gateBiasV; // 0 for a free surface
+    final double[] efn; // electron quasi-Fermi level per cell (eV)
+    final double[] efp; // hole quasi-Fermi level per cell (eV)
+    final FermiContact[] contactN; // the contact electrons follow, per cell
+    final FermiContact[] contactP; // the contact holes follow, per cell
+    final double channelDepth; // deepest interface with sigma > 0 (m), NaN if none
+    final int channelLayer; // the layer on the well side (lower E_c) of that interface, -1 if none
+    final boolean[] deepFollowHoles; // per layer: deep levels follow the hole level (layer grown p-type)
+    final boolean quasiFermiUniform; // every cell's electron level is 0 (the channel's)
 
     /** true where the two cells around node i hold the same material and species (no interface). */
     final boolean[] sameCellsAround;
@@ -119,8 +131,14 @@ final class Device {
         nv = new double[cells];
         massZ = new double[cells];
         massXY = new double[cells];
+        holeMassZ = new double[3][cells];
+        holeMassXY = new double[3][cells];
+        holeOffset = new double[3][cells];
         layerOfCell = new int[cells];
         double t = s.temperatureK();
+        WurtziteMaterial lastMaterial = null;
+        ValenceBands lastBands = null;
+        double lastNv = 0;
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
             int li = s.layerIndexAt(mid);
@@ -134,7 +152,20 @@ final class Device {
             ev[k] = edges.valenceEv();
             EffectiveMasses em = m.masses();
             nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
-            nv[k] = CarrierDensity.effectiveDensityOfStates(em.heavyHoleDensityOfStates(), t);
+            // heavy, light and crystal-field holes summed with their offsets (ValenceBands); a layer of
+            // one composition hands the same material to each of its cells, so compute it once
+            if (m != lastMaterial) {
+                lastMaterial = m;
+                lastBands = ValenceBands.of(m);
+                lastNv = lastBands.effectiveDensityOfStates(t);
+            }
+            nv[k] = lastNv;
+            ValenceBands.Band[] vb = {lastBands.heavyHole(), lastBands.lightHole(), lastBands.crystalFieldHole()};
+            for (int b = 0; b < 3; b++) {
+                holeMassZ[b][k] = vb[b].massParallel();
+                holeMassXY[b][k] = vb[b].massPerpendicular();
+                holeOffset[b][k] = vb[b].offsetEv();
+            }
             massZ[k] = em.electronParallel();
             massXY[k] = em.electronPerpendicular();
         }
@@ -204,14 +235,12 @@ final class Device {
         }
 
         TopBoundary top = s.top();
-        double gateFermi = 0;
         if (top instanceof TopBoundary.Schottky sch) {
             topDirichlet = true;
             // E_c(0) = phi_B - qV: ec[0] - phi_0 = phi_B - V
             phiTop = ec[0] - (sch.barrierHeightEv() - sch.biasV());
             surfaceDonorDensity = 0;
             surfaceDonorEnergy = 0;
-            gateFermi = -sch.biasV();
         } else {
             TopBoundary.FreeSurface fs = (TopBoundary.FreeSurface) top;
             topDirichlet = false;
@@ -219,7 +248,43 @@ final class Device {
             surfaceDonorDensity = fs.donorDensityPerM2();
             surfaceDonorEnergy = fs.donorEnergyBelowEcEv();
         }
-        holeFermiEv = o.holeFermiLevel() == HoleFermiLevel.GATE ? gateFermi : 0;
+        gateBiasV = top instanceof TopBoundary.Schottky sch2 ? sch2.biasV() : 0;
+        efn = new double[cells];
+        efp = new double[cells];
+        contactN = new FermiContact[cells];
+        contactP = new FermiContact[cells];
+        double chDepth = Double.NaN;
+        int chLayer = -1;
+        List<org.wurtzkit.structure.InterfaceCharge> sheets = s.interfaceCharges();
+        for (int j = 0; j < sheets.size(); j++) {
+            if (sheets.get(j).sigma() > 0) {
+                chDepth = sheets.get(j).depth();
+                // interface j lies between layers j (above) and j + 1 (below), top-down
+                int node = mesh.nearestNode(chDepth);
+                chLayer = ec[node] < ec[node - 1] ? j + 1 : j;
+            }
+        }
+        channelDepth = chDepth;
+        channelLayer = chLayer;
+        resolveQuasiFermiLevels(s, o.quasiFermiLevels());
+        boolean uniform = true;
+        for (double v : efn) {
+            uniform &= v == 0;
+        }
+        quasiFermiUniform = uniform;
+        deepFollowHoles = new boolean[nl];
+        for (int li = 0; li < nl; li++) {
+            double donors = 0;
+            double acceptors = 0;
+            for (Dopant dp : states.get(li).layer().dopants()) {
+                if (dp.kind() == Dopant.Kind.DONOR) {
+                    donors += dp.densityPerM3();
+                } else {
+                    acceptors += dp.densityPerM3();
+                }
+            }
+            deepFollowHoles[li] = acceptors > donors;
+        }
         BottomBoundary bottom = s.bottom();
         if (bottom instanceof BottomBoundary.FixedFermiLevel f) {
             bottomDirichlet = true;
@@ -229,6 +294,10 @@ final class Device {
             phiBottom = Double.NaN;
         }
 
+        for (int i = 1; i < n - 1; i++) {
+            // a rule's boundary inside a layer splits the box as an interface does
+            sameCellsAround[i] &= efn[i - 1] == efn[i] && efp[i - 1] == efp[i];
+        }
         windowStart = new int[windows.size()];
         windowEnd = new int[windows.size()];
         quantumNode = new boolean[n];
@@ -241,6 +310,86 @@ final class Device {
             }
             for (int i = windowStart[w] + 1; i < windowEnd[w]; i++) {
                 quantumNode[i] = true;
+            }
+        }
+    }
+
+    /**
+     * Fills efn and efp per cell: the documented defaults of {@link QuasiFermiLevels}, then each rule
+     * over the cells whose midpoints it covers.
+     */
+    private void resolveQuasiFermiLevels(Structure s, QuasiFermiLevels q) {
+        int cells = n - 1;
+        List<LayerState> states = s.layerStates();
+        double channel = channelDepth;
+        double gateSideBottom = Double.isNaN(channel) ? states.get(0).depthBottom() : channel;
+        double gateLevel = FermiContact.GATE.levelEv(gateBiasV);
+        for (int k = 0; k < cells; k++) {
+            efn[k] = 0;
+            contactN[k] = FermiContact.CHANNEL;
+            double bottomOfLayer = states.get(layerOfCell[k]).depthBottom();
+            boolean gateSide = bottomOfLayer <= gateSideBottom * (1 + 1e-12);
+            efp[k] = gateSide ? gateLevel : 0;
+            contactP[k] = gateSide ? FermiContact.GATE : FermiContact.CHANNEL;
+        }
+        List<QuasiFermiLevels.Rule> rules = q.rules();
+        if (rules.isEmpty()) {
+            return;
+        }
+        int[] ruleN = new int[cells];
+        int[] ruleP = new int[cells];
+        java.util.Arrays.fill(ruleN, -1);
+        java.util.Arrays.fill(ruleP, -1);
+        double total = s.totalThickness();
+        for (int r = 0; r < rules.size(); r++) {
+            QuasiFermiLevels.Rule rule = rules.get(r);
+            boolean found = false;
+            if (rule.region() instanceof QuasiFermiLevels.Region.Layer l) {
+                List<String> names = new ArrayList<>();
+                for (LayerState st : states) {
+                    names.add(st.layer().name());
+                    found |= st.layer().name().equals(l.name());
+                }
+                if (!found) {
+                    throw new InvalidParameterException("quasi-Fermi rule " + r + " layer", "\"" + l.name() + "\"",
+                            "one of the stack's layers " + names);
+                }
+            } else {
+                QuasiFermiLevels.Region.Depths dr = (QuasiFermiLevels.Region.Depths) rule.region();
+                if (dr.depthBottom() > total * (1 + 1e-12)) {
+                    throw new InvalidParameterException("quasi-Fermi rule " + r + " depthBottom (m)",
+                            Double.toString(dr.depthBottom()), "(" + dr.depthTop() + ", " + total
+                                    + "] (inside the stack, whose thickness is " + total + " m)");
+                }
+            }
+            double level = rule.contact().levelEv(gateBiasV);
+            boolean electrons = rule.carrier() == Carrier.ELECTRONS;
+            int[] owner = electrons ? ruleN : ruleP;
+            for (int k = 0; k < cells; k++) {
+                boolean covers;
+                if (rule.region() instanceof QuasiFermiLevels.Region.Layer l) {
+                    covers = states.get(layerOfCell[k]).layer().name().equals(l.name());
+                } else {
+                    QuasiFermiLevels.Region.Depths dr = (QuasiFermiLevels.Region.Depths) rule.region();
+                    double mid = 0.5 * (x[k] + x[k + 1]);
+                    covers = mid >= dr.depthTop() && mid <= dr.depthBottom();
+                }
+                if (!covers) {
+                    continue;
+                }
+                if (owner[k] >= 0) {
+                    throw new InvalidParameterException("quasi-Fermi rule " + r + " region (" + rule.carrier() + ")",
+                            rule.region().toString(), "not overlapping rule " + owner[k] + " for the same carrier, "
+                                    + rules.get(owner[k]).region());
+                }
+                owner[k] = r;
+                if (electrons) {
+                    efn[k] = level;
+                    contactN[k] = rule.contact();
+                } else {
+                    efp[k] = level;
+                    contactP[k] = rule.contact();
+                }
             }
         }
     }
@@ -305,6 +454,41 @@ final class Device {
             return ec[n - 2];
         }
         return (h[i - 1] * ec[i - 1] + h[i] * ec[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box-weighted valence-band edge at node i for phi = 0 (eV). */
+    double nodeEv(int i) {
+        if (i == 0) {
+            return ev[0];
+        }
+        if (i == n - 1) {
+            return ev[n - 2];
+        }
+        return (h[i - 1] * ev[i - 1] + h[i] * ev[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box-weighted offset of hole band b below the top valence band at node i (eV). */
+    double nodeHoleOffset(int b, int i) {
+        double[] o = holeOffset[b];
+        if (i == 0) {
+            return o[0];
+        }
+        if (i == n - 1) {
+            return o[n - 2];
+        }
+        return (h[i - 1] * o[i - 1] + h[i] * o[i]) / (h[i - 1] + h[i]);
+    }
+
+    /** Box-weighted in-plane mass of hole band b at node i (m0). */
+    double nodeHoleMassXY(int b, int i) {
+        double[] m = holeMassXY[b];
+        if (i == 0) {
+            return m[0];
+        }
+        if (i == n - 1) {
+            return m[n - 2];
+        }
+        return (h[i - 1] * m[i - 1] + h[i] * m[i]) / (h[i - 1] + h[i]);
     }
 
     /** Box-weighted in-plane mass at node i. */

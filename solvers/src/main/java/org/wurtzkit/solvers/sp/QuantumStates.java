@@ -16,6 +16,8 @@ final class QuantumStates {
     final double[][][] psi; // [window][state][local node] 1/sqrt(m)
     final double[][] dos; // [window][state] m^-2
     final double[][] massXY;
+    /** The hole subbands of the same windows, or null when holes are classical ({@link SolverOptions#quantumHoles()}). */
+    final HoleStates holes;
     /** Whether some window had more subbands below the cut-off than it could keep. */
     boolean limitReached;
     private final EffectiveMassHamiltonian[] hamiltonians;
@@ -24,6 +26,7 @@ final class QuantumStates {
 
     QuantumStates(Device d) {
         windows = d.windowStart.length;
+        holes = d.options.quantumHoles() ? new HoleStates(d) : null;
         count = new int[windows];
         energy = new double[windows][];
         psi = new double[windows][][];
@@ -59,8 +62,11 @@ final class QuantumStates {
         }
     }
 
-    /** Solves every window for the potential phi (V). */
+    /** Solves every window for the potential phi (V), electrons and holes. */
     void update(Device d, double[] phi) {
+        if (holes != null) {
+            holes.update(d, phi);
+        }
         double bound = d.options.subbandCutoffKT() * d.vt;
         double dosUnit = Constants.ELECTRON_MASS * d.kT / (Math.PI * Constants.HBAR * Constants.HBAR);
         limitReached = false;
@@ -71,10 +77,19 @@ final class QuantumStates {
                 v[j] = d.nodeEc(a + j) - phi[a + j];
             }
             int kMax = energy[w].length;
-            int found = hamiltonians[w].belowInto(v, bound, kMax, energy[w], psi[w]);
+            double windowBound = bound;
+            if (!d.quasiFermiUniform) {
+                // the cut-off counts from the highest electron quasi-Fermi level in the window
+                double top = Double.NEGATIVE_INFINITY;
+                for (int c = a; c < d.windowEnd[w]; c++) {
+                    top = Math.max(top, d.efn[c]);
+                }
+                windowBound = bound + top;
+            }
+            int found = hamiltonians[w].belowInto(v, windowBound, kMax, energy[w], psi[w]);
             count[w] = found;
             if (found == kMax && kMax < hamiltonians[w].maxStates()) {
-                limitReached |= energy[w][kMax - 1] < bound;
+                limitReached |= energy[w][kMax - 1] < windowBound;
             }
             double channelMass = 0;
             if (d.options.densityOfStatesMass() == DensityOfStatesMass.CHANNEL) {

@@ -12,6 +12,8 @@ import org.wurtzkit.solvers.statistics.FermiDirac;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.material.ValenceBands;
+import org.wurtzkit.units.Constants;
 import org.wurtzkit.units.Units;
 import org.wurtzkit.warnings.Warning;
 import org.wurtzkit.warnings.WarningKind;
@@ -51,7 +53,8 @@ public final class Solution {
     private final double holeSheet;
     private final double gateCharge;
     private final double neutralityResidual;
-    private final double holeFermiEv;
+    private final double[] electronFermi;
+    private final double[] holeFermi;
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
     private final SolverOptions options;
@@ -76,6 +79,16 @@ public final class Solution {
      * density just outside it exceeds this fraction of the peak density inside the window.
      */
     public static final double WARN_EDGE_DENSITY_FRACTION = 0.01;
+    private final List<CarrierSheet> sheets;
+    private final List<HoleSubband> holeSubbands;
+    private final double channelSheet;
+    private final double parasiticSheet;
+
+    /**
+     * Smallest sheet reported by {@link #carrierSheets()} (m^-2): 10^8 cm^-2, far below any sheet
+     * that a Hall or C-V measurement resolves (common practice, no source).
+     */
+    public static final double SHEET_REPORT_THRESHOLD = 1e12;
 
     /**
      * Copies out what one solve computed: the potential and subbands are read, never kept; the
@@ -88,7 +101,13 @@ public final class Solution {
         this.record = record;
         this.options = d.options;
         this.coldStart = coldStart;
-        this.holeFermiEv = d.holeFermiEv;
+        electronFermi = new double[d.n];
+        holeFermi = new double[d.n];
+        for (int i = 0; i < d.n; i++) {
+            int c = i < d.n - 1 ? i : i - 1;
+            electronFermi[i] = d.efn[c];
+            holeFermi[i] = d.efp[c];
+        }
         this.subbandLimitReached = qs != null && qs.limitReached;
         depth = d.x.clone();
         potential = phi.clone();
@@ -179,6 +198,33 @@ public final class Solution {
             }
         }
         subbands = Collections.unmodifiableList(bands);
+        List<HoleSubband> hb = new ArrayList<>();
+        for (int w = 0; qs != null && qs.holes != null && w < nw; w++) {
+            int a = d.windowStart[w];
+            for (int b = 0; b < HoleStates.BANDS; b++) {
+                for (int k = 0; k < qs.holes.count[w][b]; k++) {
+                    double[] full = new double[nn];
+                    System.arraycopy(qs.holes.psi[w][b][k], 0, full, a, qs.holes.psi[w][b][k].length);
+                    double occ = qs.holes.sheet(d, w, b, k, phi, ref);
+                    double mxy = qs.holes.dos[w][b][k] * Math.PI * Constants.HBAR * Constants.HBAR
+                            / (Constants.ELECTRON_MASS * d.kT);
+                    hb.add(new HoleSubband(w, ValenceBands.Kind.values()[b], k, -qs.holes.energy[w][b][k], full, occ, mxy));
+                }
+            }
+        }
+        holeSubbands = Collections.unmodifiableList(hb);
+        sheets = Collections.unmodifiableList(gatherSheets(d, qs, bands));
+        double channel = 0;
+        double parasitic = 0;
+        for (CarrierSheet c : sheets) {
+            if (c.role() == CarrierSheet.Role.CHANNEL) {
+                channel = c.sheetDensity();
+            } else if (c.role() == CarrierSheet.Role.UNDER_GATE) {
+                parasitic += c.sheetDensity();
+            }
+        }
+        channelSheet = channel;
+        parasiticSheet = parasitic;
         checkFinite();
         warnings = collectWarnings(d, phi);
         interfaceEdges = readInterfaces(d, phi);
@@ -305,6 +351,190 @@ public final class Solution {
         return warnings;
     }
 
+    /**
+     * Groups the carriers into sheets: each window's subbands by the layer of their centroid, and per layer the classical carriers outside every window interior; then marks the
+     * channel and the sheets between it and a gate.
+     */
+    private List<CarrierSheet> gatherSheets(Device d, QuantumStates qs, List<Subband> bands) {
+        int nn = d.n;
+        List<org.wurtzkit.structure.LayerState> states = d.structure.layerStates();
+        int nl = states.size();
+        List<double[]> acc = new ArrayList<>(); // {carrier 0/1, layer, window, top, bottom, sum n*x, sum n}
+        // quantum electrons: one group per (window, layer of the subband's centroid), in subband
+        // order; in the window holding a metal-face channel interface, each subband is first split at
+        // the conduction-band maximum between the window top and the interface: the part above it is
+        // on the gate side (a parasitic channel under forward bias), the rest is the channel's
+        int nw = qs == null ? 0 : qs.windows;
+        for (int w = 0; w < nw; w++) {
+            double[][] group = new double[nl][];
+            double[] gateSide = null;
+            int a = d.windowStart[w];
+            int e = d.windowEnd[w];
+            int split = a;
+            boolean channelWindow = d.channelLayer >= 0 && d.x[a] <= d.channelDepth && d.x[e] >= d.channelDepth
+                    && d.channelLayer > d.layerOfCell[Math.max(0, d.mesh.nearestNode(d.channelDepth) - 1)];
+            if (channelWindow) {
+                int ich = d.mesh.nearestNode(d.channelDepth);
+                double top = Double.NEGATIVE_INFINITY;
+                for (int i = a; i <= ich; i++) {
+                    double up = d.ec[i > 0 ? i - 1 : 0] - potential[i];
+                    double down = d.ec[Math.min(i, nn - 2)] - potential[i];
+                    double edge = Math.max(up, down);
+                    if (edge > top) {
+                        top = edge;
+                        split = i;
+                    }
+                }
+            }
+            for (Subband b : bands) {
+                if (b.window() != w) {
+                    continue;
+                }
+                double[] psi = qs.psi[w][b.index()];
+                double mean = 0;
+                double norm = 0;
+                double meanAbove = 0;
+                double normAbove = 0;
+                for (int j = 1; j < psi.length - 1; j++) {
+                    double pr = psi[j] * psi[j] * d.box(a + j);
+                    mean += pr * d.x[a + j];
+                    norm += pr;
+                    if (a + j < split) {
+                        meanAbove += pr * d.x[a + j];
+                        normAbove += pr;
+                    }
+                }
+                double occ = b.sheetDensity();
+                if (normAbove > 0) {
+                    double f = normAbove / norm;
+                    if (gateSide == null) {
+                        gateSide = new double[] {0, d.structure.layerIndexAt(meanAbove / normAbove), w, d.x[a], d.x[split], 0,
+                            0};
+                        acc.add(gateSide);
+                    }
+                    gateSide[5] += occ * f * (meanAbove / normAbove);
+                    gateSide[6] += occ * f;
+                    occ *= 1 - f;
+                    mean -= meanAbove;
+                    norm -= normAbove;
+                }
+                double centre = norm > 0 ? mean / norm : d.x[a];
+                int li = channelWindow ? d.channelLayer
+                        : d.structure.layerIndexAt(Math.min(centre, d.structure.totalThickness()));
+                if (group[li] == null) {
+                    double top = Math.max(d.x[a], states.get(li).depthTop());
+                    double bottom = Math.min(d.x[e], states.get(li).depthBottom());
+                    group[li] = new double[] {0, li, w, top, bottom, 0, 0};
+                    acc.add(group[li]);
+                }
+                group[li][5] += occ * centre;
+                group[li][6] += occ;
+            }
+        }
+        // quantum holes: one group per (window, layer of the subband's centroid)
+        for (int w = 0; w < nw; w++) {
+            double[][] group = new double[nl][];
+            for (HoleSubband hs : holeSubbands) {
+                if (hs.window() != w) {
+                    continue;
+                }
+                int a = d.windowStart[w];
+                double[] psi = qs.holes.psi[w][hs.band().ordinal()][hs.index()];
+                double mean = 0;
+                double norm = 0;
+                for (int j = 1; j < psi.length - 1; j++) {
+                    double pr = psi[j] * psi[j] * d.box(a + j);
+                    mean += pr * d.x[a + j];
+                    norm += pr;
+                }
+                double centre = norm > 0 ? mean / norm : d.x[a];
+                int li = d.structure.layerIndexAt(Math.min(centre, d.structure.totalThickness()));
+                if (group[li] == null) {
+                    double top = Math.max(d.x[a], states.get(li).depthTop());
+                    double bottom = Math.min(d.x[d.windowEnd[w]], states.get(li).depthBottom());
+                    group[li] = new double[] {1, li, w, top, bottom, 0, 0};
+                    acc.add(group[li]);
+                }
+                group[li][5] += hs.sheetDensity() * centre;
+                group[li][6] += hs.sheetDensity();
+            }
+        }
+        // classical carriers outside window interiors, per layer
+        double[][] classical = new double[2 * nl][];
+        for (int i = 0; i < nn; i++) {
+            if (d.quantumNode[i] && qs != null) {
+                continue;
+            }
+            int li = d.layerOfCell[Math.min(i, nn - 2)];
+            double w = d.box(i);
+            for (int c = 0; c < 2; c++) {
+                double v = (c == 0 ? n[i] : p[i]) * w;
+                if (classical[2 * li + c] == null) {
+                    classical[2 * li + c] = new double[] {c, li, -1, states.get(li).depthTop(), states.get(li).depthBottom(),
+                        0, 0};
+                }
+                classical[2 * li + c][5] += v * d.x[i];
+                classical[2 * li + c][6] += v;
+            }
+        }
+        for (double[] g : classical) {
+            if (g != null) {
+                acc.add(g);
+            }
+        }
+        // the channel: the largest quantum electron sheet in the channel layer inside the window
+        // holding the channel interface; without subbands, the classical electrons of that layer;
+        // without an interface of positive polarization charge, the largest electron sheet
+        int channel = -1;
+        for (int j = 0; j < acc.size(); j++) {
+            double[] g = acc.get(j);
+            if (g[0] != 0 || g[6] < SHEET_REPORT_THRESHOLD) {
+                continue;
+            }
+            boolean candidate;
+            if (d.channelLayer < 0) {
+                candidate = true;
+            } else if (nw > 0) {
+                int w = (int) g[2];
+                candidate = g[1] == d.channelLayer && w >= 0 && d.x[d.windowStart[w]] <= d.channelDepth
+                        && d.x[d.windowEnd[w]] >= d.channelDepth;
+            } else {
+                candidate = g[1] == d.channelLayer;
+            }
+            if (candidate && (channel < 0 || g[6] > acc.get(channel)[6])) {
+                channel = j;
+            }
+        }
+        boolean gated = d.topDirichlet;
+        List<CarrierSheet> out = new ArrayList<>();
+        for (int j = 0; j < acc.size(); j++) {
+            double[] g = acc.get(j);
+            if (g[6] < SHEET_REPORT_THRESHOLD) {
+                continue;
+            }
+            int li = (int) g[1];
+            Carrier carrier = g[0] == 0 ? Carrier.ELECTRONS : Carrier.HOLES;
+            CarrierSheet.Role role = CarrierSheet.Role.OTHER;
+            if (j == channel) {
+                role = CarrierSheet.Role.CHANNEL;
+            } else if (carrier == Carrier.ELECTRONS && gated && d.channelLayer >= 0 && li != d.channelLayer
+                    && (states.get(li).depthBottom() <= d.channelDepth * (1 + 1e-12) || g[4] <= d.channelDepth)) {
+                role = CarrierSheet.Role.UNDER_GATE;
+            }
+            double centroid = g[5] / g[6];
+            int node = d.mesh.nearestNode(centroid);
+            int cell = Math.min(node, nn - 2);
+            if (d.layerOfCell[cell] != li && node > 0) {
+                cell = node - 1; // the centroid sits on the layer's lower interface
+            }
+            FermiContact contact = carrier == Carrier.ELECTRONS ? d.contactN[cell] : d.contactP[cell];
+            double level = carrier == Carrier.ELECTRONS ? d.efn[cell] : d.efp[cell];
+            out.add(new CarrierSheet(carrier, role, states.get(li).layer().name(), (int) g[2], g[3], g[4], centroid, g[6],
+                    contact, level));
+        }
+        return out;
+    }
+
     private void checkFinite() {
         for (double[] a : new double[][] {potential, ec, ev, n, p, donors, acceptors, charge, field}) {
             for (double v : a) {
@@ -356,14 +586,29 @@ public final class Solution {
         return ev.clone();
     }
 
-    /** {@return the electron Fermi level (eV): 0 by construction} */
+    /** {@return the channel (bottom) contact's Fermi level (eV): 0 by construction, the zero of every energy} */
     public double fermiLevelEv() {
         return 0;
     }
 
-    /** {@return the holes' quasi-Fermi level (eV)} */
-    public double holeFermiLevelEv() {
-        return holeFermiEv;
+    /**
+     * The electrons' quasi-Fermi level at each node (eV; the level of the cell below the node, the
+     * last node that of the cell above), as {@link SolverOptions#quasiFermiLevels()} assigns it.
+     *
+     * @return a fresh array, one value per node
+     */
+    public double[] electronFermiLevel() {
+        return electronFermi.clone();
+    }
+
+    /**
+     * The holes' quasi-Fermi level at each node (eV; the level of the cell below the node, the last
+     * node that of the cell above), as {@link SolverOptions#quasiFermiLevels()} assigns it.
+     *
+     * @return a fresh array, one value per node
+     */
+    public double[] holeFermiLevel() {
+        return holeFermi.clone();
     }
 
     /** {@return the band diagram for plotting: depth, E_c and E_v with both sides of every step} */
@@ -412,6 +657,15 @@ public final class Solution {
     /** {@return every subband of every window, windows in order, energies ascending within a window} */
     public List<Subband> subbands() {
         return subbands;
+    }
+
+    /**
+     * {@return every hole subband of every window (windows in order; within a window heavy, light,
+     * crystal-field hole; levels from the valence-band top down); empty for a classical solve or
+     * where no hole state lies within the subband cut-off of the hole quasi-Fermi level}
+     */
+    public List<HoleSubband> holeSubbands() {
+        return holeSubbands;
     }
 
     /** {@return the quantum windows as resolved onto the mesh, shallowest first (empty for a classical solve)} */
@@ -490,20 +744,46 @@ public final class Solution {
     }
 
     /**
-     * The 2DEG sheet density: the subband electrons of all windows, or, for a solve without quantum
-     * windows, all electrons of the stack.
+     * The channel 2DEG's sheet density: the {@link CarrierSheet.Role#CHANNEL} sheet of
+     * {@link #carrierSheets()}, i.e. the subband electrons on the well side (lower E_c) of the deepest
+     * interface with a positive polarization sheet, in the window that holds that interface, below
+     * the barrier's conduction-band maximum (for a solve without windows, the classical electrons of
+     * that layer). Electrons elsewhere (a parasitic
+     * channel in the barrier under the gate, a back channel, the buffer) are not counted: see
+     * {@link #carrierSheets()} and {@link #parasiticSheetDensityPerCm2()}. Without an interface of
+     * positive polarization charge the largest electron sheet counts as the channel. 0 when no sheet
+     * exceeds {@link #SHEET_REPORT_THRESHOLD}.
      *
      * @return sheet density (cm^-2)
      */
     public double sheetDensityPerCm2() {
-        if (wellSheetDensity.length == 0) {
-            return Units.perM2ToPerCm2(electronSheet);
-        }
-        double s = 0;
-        for (double v : wellSheetDensity) {
-            s += v;
-        }
-        return Units.perM2ToPerCm2(s);
+        return Units.perM2ToPerCm2(channelSheet);
+    }
+
+    /**
+     * Electrons between the gate and the channel (sheets of role {@link CarrierSheet.Role#UNDER_GATE}),
+     * e.g. the parasitic channel that forms in the barrier under forward gate bias.
+     *
+     * @return sheet density (cm^-2), 0 for a free surface
+     */
+    public double parasiticSheetDensityPerCm2() {
+        return Units.perM2ToPerCm2(parasiticSheet);
+    }
+
+    /** {@return the SI twin of {@link #parasiticSheetDensityPerCm2()}: the parasitic sheet density (m^-2)} */
+    public double parasiticSheetDensity() {
+        return parasiticSheet;
+    }
+
+    /**
+     * Every sheet of free carriers above {@link #SHEET_REPORT_THRESHOLD}: the subbands of each window
+     * grouped by the layer that holds their centroid, and the classical carriers of each layer
+     * outside the window interiors, with depth, role and the contact they follow.
+     *
+     * @return the sheets, quantum ones first (window order), then classical ones (layer order, top down)
+     */
+    public List<CarrierSheet> carrierSheets() {
+        return sheets;
     }
 
     /** {@return sheet charge on the gate metal (C/m^2); 0 for a free surface} */

@@ -26,16 +26,24 @@ import org.wurtzkit.solvers.mesh.MeshPolicy;
  * @param quantumWindows         where electrons are quantum; default {@link QuantumWindows#automatic()}
  * @param maxSubbands           most subbands kept per window; default 60, in [1, 2000]
  * @param subbandCutoffKT       subbands are kept up to E_F + this many kT; default 15 (a subband there holds exp(-15) = 3e-7 of one at E_F), in [1, 200]
- * @param holeFermiLevel        holes' quasi-Fermi level; default {@link HoleFermiLevel#GATE}
+ * @param quasiFermiLevels      which contact electrons and holes follow in each part of the stack; default
+ *                              {@link QuasiFermiLevels#defaults()} (electrons the channel; holes the gate above
+ *                              the channel and the channel below it)
+ * @param quantumHoles          whether holes inside quantum windows come from hole subbands (three single
+ *                              bands, heavy, light and crystal-field hole) instead of the classical density;
+ *                              default false: the single-band hole subbands with hard-walled windows
+ *                              under-count holes where a window edge cuts a neutral p-region, so they are
+ *                              for hole wells (a 2DHG) and are switched on where one is expected
  * @param densityOfStatesMass   which in-plane mass sets each subband's 2D density of states; default
  *                              {@link DensityOfStatesMass#WAVEFUNCTION_WEIGHTED}
  */
 public record SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
         double maxNewtonStep, MeshPolicy mesh, QuantumWindows quantumWindows, int maxSubbands, double subbandCutoffKT,
-        HoleFermiLevel holeFermiLevel, DensityOfStatesMass densityOfStatesMass) {
+        QuasiFermiLevels quasiFermiLevels, boolean quantumHoles, DensityOfStatesMass densityOfStatesMass) {
 
     private static final SolverOptions DEFAULTS = new SolverOptions(1e-6, 100, 1e-9, 200, 0.5, MeshPolicy.DEFAULT,
-            QuantumWindows.automatic(), 60, 15, HoleFermiLevel.GATE, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
+            QuantumWindows.automatic(), 60, 15, QuasiFermiLevels.defaults(), false,
+            DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
 
     /**
      * Creates the settings and validates every field against the range given in the class
@@ -50,7 +58,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      * @param quantumWindows      where electrons are quantum, not null
      * @param maxSubbands         most subbands kept per window, in [1, 2000]
      * @param subbandCutoffKT     subbands are kept up to E_F + this many kT, in [1, 200]
-     * @param holeFermiLevel      holes' quasi-Fermi level, not null
+     * @param quasiFermiLevels    the quasi-Fermi level of each carrier in each region, not null
+     * @param quantumHoles        whether holes in quantum windows come from hole subbands
      * @param densityOfStatesMass which in-plane mass sets each subband's 2D density of states, not null
      * @throws org.wurtzkit.errors.InvalidParameterException if a value is outside its range or null
      */
@@ -64,29 +73,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         Require.nonNull("quantum windows", quantumWindows);
         Require.inRange("maxSubbands", maxSubbands, 1, 2000);
         Require.inRange("subbandCutoffKT", subbandCutoffKT, 1, 200);
-        Require.nonNull("hole Fermi level", holeFermiLevel);
+        Require.nonNull("quasi-Fermi levels", quasiFermiLevels);
         Require.nonNull("density-of-states mass", densityOfStatesMass);
-    }
-
-    /**
-     * The options with the default {@link DensityOfStatesMass#WAVEFUNCTION_WEIGHTED}.
-     *
-     * @param tolerance           see the class documentation
-     * @param maxIterations       see the class documentation
-     * @param newtonTolerance     see the class documentation
-     * @param maxNewtonIterations see the class documentation
-     * @param maxNewtonStep       see the class documentation
-     * @param mesh                see the class documentation
-     * @param quantumWindows       see the class documentation
-     * @param maxSubbands         see the class documentation
-     * @param subbandCutoffKT     see the class documentation
-     * @param holeFermiLevel      see the class documentation
-     */
-    public SolverOptions(double tolerance, int maxIterations, double newtonTolerance, int maxNewtonIterations,
-            double maxNewtonStep, MeshPolicy mesh, QuantumWindows quantumWindows, int maxSubbands, double subbandCutoffKT,
-            HoleFermiLevel holeFermiLevel) {
-        this(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, DensityOfStatesMass.WAVEFUNCTION_WEIGHTED);
     }
 
     /** {@return the defaults listed in the class documentation} */
@@ -103,7 +91,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withTolerance(double v) {
         return new SolverOptions(v, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -115,7 +103,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withMaxIterations(int v) {
         return new SolverOptions(tolerance, v, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -127,7 +115,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withNewtonTolerance(double v) {
         return new SolverOptions(tolerance, maxIterations, v, maxNewtonIterations, maxNewtonStep, mesh, quantumWindows,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -139,7 +127,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withMaxNewtonIterations(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, v, maxNewtonStep, mesh, quantumWindows,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -151,7 +139,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withMaxNewtonStep(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, v, mesh, quantumWindows,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -163,7 +151,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withMesh(MeshPolicy v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, v,
-                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -175,7 +163,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withQuantumWindows(QuantumWindows v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh, v,
-                maxSubbands, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -187,7 +175,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withMaxSubbands(int v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumWindows, v, subbandCutoffKT, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, v, subbandCutoffKT, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
@@ -199,31 +187,48 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
      */
     public SolverOptions withSubbandCutoffKT(double v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumWindows, maxSubbands, v, holeFermiLevel, densityOfStatesMass);
+                quantumWindows, maxSubbands, v, quasiFermiLevels, quantumHoles, densityOfStatesMass);
     }
 
     /**
-     * Returns a copy with another value of the holes' quasi-Fermi level; every other setting is kept.
+     * Returns a copy with other quasi-Fermi level rules; every other setting is kept.
      *
-     * @param v holes' quasi-Fermi level, not null
-     * @return a copy with {@code holeFermiLevel} set to {@code v}
-     * @throws org.wurtzkit.errors.InvalidParameterException if {@code v} is outside its range
+     * @param v the quasi-Fermi level of each carrier in each region, not null
+     * @return a copy with {@code quasiFermiLevels} set to {@code v}
      */
-    public SolverOptions withHoleFermiLevel(HoleFermiLevel v) {
+    public SolverOptions withQuasiFermiLevels(QuasiFermiLevels v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumWindows, maxSubbands, subbandCutoffKT, v, densityOfStatesMass);
+                quantumWindows, maxSubbands, subbandCutoffKT, v, quantumHoles, densityOfStatesMass);
     }
 
-    /** @param v which mass sets the 2D density of states @return a copy */
+    /**
+     * Returns a copy with quantum holes switched on or off; every other setting is kept.
+     *
+     * @param v whether holes in quantum windows come from hole subbands
+     * @return a copy with {@code quantumHoles} set to {@code v}
+     */
+    public SolverOptions withQuantumHoles(boolean v) {
+        return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
+                quantumWindows, maxSubbands, subbandCutoffKT, quasiFermiLevels, v, densityOfStatesMass);
+    }
+
+    /**
+     * Returns a copy with another 2D density-of-states mass rule; every other setting is kept.
+     *
+     * @param v which mass sets the 2D density of states
+     * @return a copy with {@code densityOfStatesMass} set to {@code v}
+     */
     public SolverOptions withDensityOfStatesMass(DensityOfStatesMass v) {
         return new SolverOptions(tolerance, maxIterations, newtonTolerance, maxNewtonIterations, maxNewtonStep, mesh,
-                quantumWindows, maxSubbands, subbandCutoffKT, holeFermiLevel, v);
+                quantumWindows, maxSubbands, subbandCutoffKT, quasiFermiLevels, quantumHoles, v);
     }
     /**
      * Every option as ordered name/value text, for the provenance of a result: numbers written with
      * {@link Double#toString(double)} (which reads back to the same double), the mesh policy as its
      * three numbers, the quantum region as {@code automatic <extension m>}, {@code none} or
-     * {@code windows <top m> <bottom m>, ...}, the holes' Fermi level by its constant's name.
+     * {@code windows <top m> <bottom m>, ...}, the quasi-Fermi rules as {@code <carrier>|layer|<name>|<contact>} or
+     * {@code <carrier>|depths|<top m>|<bottom m>|<contact>} joined by {@code ;} (contact {@code gate},
+     * {@code channel} or {@code floating <eV>}; empty for the defaults), quantum holes as true or false.
      * {@link #fromSettings(Map)} reads it back to an equal record.
      *
      * @return the settings, in the order of the record's components
@@ -241,7 +246,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         m.put("quantumWindows", quantumWindowsText(quantumWindows));
         m.put("maxSubbands", Integer.toString(maxSubbands));
         m.put("subbandCutoffKT", Double.toString(subbandCutoffKT));
-        m.put("holeFermiLevel", holeFermiLevel.name());
+        m.put("quasiFermiLevels", QuasiFermiLevelsText.write(quasiFermiLevels));
+        m.put("quantumHoles", Boolean.toString(quantumHoles));
         m.put("densityOfStatesMass", densityOfStatesMass.name());
         return Collections.unmodifiableMap(m);
     }
@@ -283,7 +289,8 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
                 new MeshPolicy(real(settings, "mesh.interfaceSpacing"), real(settings, "mesh.growthRatio"),
                         real(settings, "mesh.maxSpacing")),
                 quantumWindows(text(settings, "quantumWindows")), integer(settings, "maxSubbands"),
-                real(settings, "subbandCutoffKT"), holeFermiLevel(text(settings, "holeFermiLevel")),
+                real(settings, "subbandCutoffKT"), QuasiFermiLevelsText.read(text(settings, "quasiFermiLevels")),
+                bool(settings, "quantumHoles"),
                 densityOfStatesMass(text(settings, "densityOfStatesMass")));
     }
 
@@ -314,14 +321,12 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
         }
     }
 
-    private static HoleFermiLevel holeFermiLevel(String v) {
-        for (HoleFermiLevel h : HoleFermiLevel.values()) {
-            if (h.name().equals(v)) {
-                return h;
-            }
+    private static boolean bool(Map<String, String> m, String key) {
+        String v = text(m, key);
+        if (!"true".equals(v) && !"false".equals(v)) {
+            throw new InvalidParameterException("solver setting \"" + key + "\"", v, "true or false");
         }
-        throw new InvalidParameterException("solver setting \"holeFermiLevel\"", v,
-                "one of " + java.util.Arrays.toString(HoleFermiLevel.values()));
+        return Boolean.parseBoolean(v);
     }
 
     private static DensityOfStatesMass densityOfStatesMass(String v) {

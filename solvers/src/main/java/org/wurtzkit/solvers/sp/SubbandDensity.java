@@ -9,7 +9,9 @@ package org.wurtzkit.solvers.sp;
  *   n_i(phi) = sum_k g_k ln(1 + e^eta_k,i) |psi_k,i|^2,   eta_k,i = (E_F - E_k)/kT + (phi_i - phi_ref,i)/kT,
  * </pre>
  * with g_k = m_xy,k kT / (pi hbar^2) the two-dimensional density of states of subband k (spin
- * included; T. Ando, A. B. Fowler and F. Stern, Rev. Mod. Phys. 54, 437 (1982)) and E_F = 0, and
+ * included; T. Ando, A. B. Fowler and F. Stern, Rev. Mod. Phys. 54, 437 (1982)) and E_F the electron
+ * quasi-Fermi level of node i's cell (0 eV, the channel's, unless a {@link QuasiFermiLevels} rule
+ * says otherwise: a local-level approximation where a window spans two levels), and
  * dn_i/dphi_i = sum_k g_k |psi_k,i|^2 / (kT (1 + e^-eta_k,i)). Both come from one exponential,
  * e^-|eta|, so neither overflows. The sheet density of a subband is the box-integrated sum of its
  * terms, so the per-subband sheets add up to the integral of the node densities.
@@ -41,9 +43,10 @@ final class SubbandDensity {
                 continue;
             }
             double shift = (phi - phiRef) * invVt;
+            double fn = d.quasiFermiUniform ? 0 : d.efn[i < d.n - 1 ? i : i - 1];
             for (int k = 0; k < qs.count[w]; k++) {
                 double psi = qs.psi[w][k][i - a];
-                double eta = -qs.energy[w][k] * invVt + shift;
+                double eta = (fn - qs.energy[w][k]) * invVt + shift;
                 double g = qs.dos[w][k] * psi * psi;
                 double ex = Math.exp(-Math.abs(eta));
                 nq += g * lnOnePlusExp(eta, ex);
@@ -78,7 +81,8 @@ final class SubbandDensity {
         double sum = 0;
         for (int i = a + 1; i < d.windowEnd[w]; i++) {
             double psi = psiK[i - a];
-            double eta = -qs.energy[w][k] * invVt + (phi[i] - phiRef[i]) * invVt;
+            double fn = d.quasiFermiUniform ? 0 : d.efn[i < d.n - 1 ? i : i - 1];
+            double eta = (fn - qs.energy[w][k]) * invVt + (phi[i] - phiRef[i]) * invVt;
             double g = qs.dos[w][k] * psi * psi;
             sum += g * lnOnePlusExp(eta, Math.exp(-Math.abs(eta))) * d.box(i);
         }

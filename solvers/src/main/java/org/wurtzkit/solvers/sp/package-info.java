@@ -20,7 +20,9 @@
  * (issue #14: -30 V), and a step limited to the maximum is first tried clamped node by node.</li>
  * <li><b>Outer loop</b> (A. Trellakis, A. T. Galick, A. Pacelli and U. Ravaioli, J. Appl. Phys. 81,
  * 7880 (1997)): {@code QuantumStates} solves the BenDaniel-Duke equation in every quantum window
- * ({@link org.wurtzkit.solvers.sp.QuantumWindows}) for the lowest subbands, O(N k); then Newton-Poisson
+ * ({@link org.wurtzkit.solvers.sp.QuantumWindows}) for the lowest subbands, O(N k), electrons and the
+ * three single-band hole bands when quantum holes are on ({@code HoleStates}, skipped where the
+ * valence band is far from the hole quasi-Fermi level); then Newton-Poisson
  * runs with the predictor density g<sub>k</sub> ln(1 + e<sup>eta</sup>) |psi<sub>k</sub>|<sup>2</sup>,
  * whose one home is {@code SubbandDensity}; repeat until max |delta phi| is below the tolerance.
  * Once the change stalls, {@code AndersonMixing} (package-private, D. G. Anderson, J. ACM 12, 547
@@ -31,6 +33,9 @@
  * that runs out of budget throws {@link org.wurtzkit.solvers.sp.NotConvergedException} carrying its
  * record and last finite iterate.</li>
  * </ol>
+ * Every carrier density uses its own carrier's quasi-Fermi level in its region
+ * ({@link org.wurtzkit.solvers.sp.QuasiFermiLevels}); the solution groups the carriers into sheets
+ * ({@link org.wurtzkit.solvers.sp.CarrierSheet}) and reports the channel 2DEG apart.
  * A sweep starts each point from a potential extrapolated through the last converged solutions
  * ({@link org.wurtzkit.solvers.sp.PotentialPredictor}),
  * which skips the classical start; the convergence test is unchanged, so the start never moves the

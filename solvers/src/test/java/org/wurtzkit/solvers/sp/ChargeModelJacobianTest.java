@@ -46,9 +46,21 @@ class ChargeModelJacobianTest {
         }
     }
 
+    /** The same with quantum holes, whose subbands fill as the scan brings the valence band up. */
+    @org.junit.jupiter.api.Test
+    void derivativeWithQuantumHolesMatchesCentralDifferenceOverAScan() {
+        for (double level = -1.5; level <= 4.5; level += 0.05) {
+            check(level, SolverOptions.defaults().withQuantumHoles(true));
+        }
+    }
+
     @Property(tries = 30)
     void derivativeMatchesCentralDifference(@ForAll @DoubleRange(min = -1.5, max = 4.5) double level) {
-        Device d = new Device(everySpecies(), SolverOptions.defaults());
+        check(level, SolverOptions.defaults());
+    }
+
+    private static void check(double level, SolverOptions options) {
+        Device d = new Device(everySpecies(), options);
         ChargeModel c = new ChargeModel(d);
         QuantumStates qs = new QuantumStates(d);
         double[] phi = new double[d.n];

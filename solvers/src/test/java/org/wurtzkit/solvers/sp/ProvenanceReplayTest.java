@@ -130,7 +130,12 @@ class ProvenanceReplayTest {
         int expected = components.length + 2; // the mesh policy is written as its three numbers
         assertEquals(expected, SolverOptions.defaults().settings().size());
         for (SolverOptions o : new SolverOptions[] {SolverOptions.defaults(), OPTIONS,
-            OPTIONS.withQuantumWindows(QuantumWindows.none()).withHoleFermiLevel(HoleFermiLevel.BOTTOM_CONTACT),
+            OPTIONS.withQuantumWindows(QuantumWindows.none()).withQuantumHoles(true)
+                    .withDensityOfStatesMass(DensityOfStatesMass.CHANNEL),
+            OPTIONS.withQuasiFermiLevels(QuasiFermiLevels.defaults()
+                    .withLayer(Carrier.HOLES, "p-GaN cap", FermiContact.GATE)
+                    .withDepths(Carrier.ELECTRONS, 1e-9, 2.5e-8, FermiContact.floating(-0.125))
+                    .withLayer(Carrier.HOLES, "buffer", FermiContact.CHANNEL)),
             OPTIONS.withQuantumWindows(QuantumWindows.explicit(QuantumWindows.Window.nm(1.5, 40),
                     QuantumWindows.Window.nm(60, 90.25)))}) {
             assertEquals(o, SolverOptions.fromSettings(o.settings()));

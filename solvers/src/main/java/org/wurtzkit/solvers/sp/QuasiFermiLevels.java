@@ -1,0 +1,170 @@
+package org.wurtzkit.solvers.sp;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.wurtzkit.errors.Require;
+
+/**
+ * Which contact each carrier type follows in each part of the stack: a typed, validated option of
+ * the solve ({@link SolverOptions#quasiFermiLevels()}). A solve is one-dimensional and carries no
+ * current, so every part of the stack is in equilibrium with one contact per carrier type: the gate
+ * (the top Schottky boundary, Fermi level -V), the channel's ohmic contacts (the bottom contact,
+ * 0 eV), or a level the user gives for a floating layer ({@link FermiContact}).
+ *
+ * <h2>Defaults (no rule given)</h2>
+ * <ul>
+ * <li><b>Electrons</b> follow the channel everywhere.</li>
+ * <li><b>Holes</b> follow the gate in every layer above the channel, and the channel in the channel
+ * layer and every layer below it. The channel is taken at the deepest interface whose polarization
+ * sheet is positive (sigma &gt; 0, where a 2DEG gathers); a layer lies above it when its bottom is
+ * no deeper than that interface. Without such an interface only the top layer counts as above. With
+ * a free surface (no gate) the two contacts coincide at 0 eV. So a p-GaN gate layer, and the
+ * barrier under it, follow the gate (holes drain into the gate metal), while a buried p-type back
+ * barrier under the channel follows the channel and keeps its holes whatever the gate does.</li>
+ * </ul>
+ * Rules override the defaults where they apply; a rule names a layer (every layer of that name) or
+ * a depth range, and applies to the mesh cells whose midpoints lie inside it.
+ *
+ * <h2>What follows a quasi-Fermi level</h2>
+ * Free electrons and ionised shallow donors follow the electron level of their cell; free holes and
+ * ionised shallow acceptors (and acceptor delta sheets) the hole level, since a shallow level
+ * exchanges carriers with its own band. A deep level exchanges with both bands; in steady state its
+ * occupancy is set by the majority carrier (W. Shockley and W. T. Read, Phys. Rev. 87, 835 (1952)),
+ * so deep levels follow the hole level in a layer grown p-type (shallow acceptors outnumbering
+ * shallow donors) and the electron level elsewhere. Donor delta sheets and surface donors follow the
+ * electron level.
+ *
+ * <h2>Limits</h2>
+ * No current flows: where the two levels of a cell differ, the solve shows the densities that the
+ * levels imply (a depleted junction, a quasi-equilibrium under the gate), not the recombination or
+ * the leakage that would flow. A level changes abruptly at a rule's boundary; put boundaries where
+ * the carrier concerned is depleted.
+ *
+ * @param rules the rules, in the order given; for each carrier no two may overlap
+ */
+public record QuasiFermiLevels(List<Rule> rules) {
+    private static final QuasiFermiLevels DEFAULTS = new QuasiFermiLevels(List.of());
+
+    /** Copies and validates the rules: none null, no two for the same carrier overlapping. */
+    public QuasiFermiLevels {
+        Require.nonNull("quasi-Fermi rules", rules);
+        rules = List.copyOf(rules);
+        for (int i = 0; i < rules.size(); i++) {
+            Rule a = rules.get(i);
+            for (int j = 0; j < i; j++) {
+                Rule b = rules.get(j);
+                if (a.carrier() == b.carrier() && a.region().overlaps(b.region())) {
+                    throw Require.invalid("quasi-Fermi rule " + i + " region (" + a.carrier() + ")", a.region(),
+                            "not overlapping rule " + j + " for the same carrier, " + b.region());
+                }
+            }
+        }
+    }
+
+    /** {@return the documented defaults: no rules} */
+    public static QuasiFermiLevels defaults() {
+        return DEFAULTS;
+    }
+
+    /**
+     * @param carrier electrons or holes
+     * @param layer   the name of a layer of the stack (checked when a structure is solved)
+     * @param contact the contact they follow there
+     * @return a copy with the rule added
+     */
+    public QuasiFermiLevels withLayer(Carrier carrier, String layer, FermiContact contact) {
+        return with(new Rule(carrier, new Region.Layer(layer), contact));
+    }
+
+    /**
+     * @param carrier  electrons or holes
+     * @param depthTop upper depth of the range (m)
+     * @param depthBottom lower depth of the range (m)
+     * @param contact  the contact they follow there
+     * @return a copy with the rule added
+     */
+    public QuasiFermiLevels withDepths(Carrier carrier, double depthTop, double depthBottom, FermiContact contact) {
+        return with(new Rule(carrier, new Region.Depths(depthTop, depthBottom), contact));
+    }
+
+    /** @param rule a rule @return a copy with it added */
+    public QuasiFermiLevels with(Rule rule) {
+        List<Rule> r = new ArrayList<>(rules);
+        r.add(Require.nonNull("quasi-Fermi rule", rule));
+        return new QuasiFermiLevels(r);
+    }
+
+    /**
+     * One assignment.
+     *
+     * @param carrier electrons or holes
+     * @param region  where
+     * @param contact the contact they follow there
+     */
+    public record Rule(Carrier carrier, Region region, FermiContact contact) {
+        /** Validates that no component is null. */
+        public Rule {
+            Require.nonNull("quasi-Fermi rule carrier", carrier);
+            Require.nonNull("quasi-Fermi rule region", region);
+            Require.nonNull("quasi-Fermi rule contact", contact);
+        }
+    }
+
+    /** Where a rule applies. */
+    public sealed interface Region permits Region.Layer, Region.Depths {
+        /** @param other another region @return whether the two surely share cells (layers of one name do; two ranges that intersect do) */
+        boolean overlaps(Region other);
+
+        /**
+         * Every layer of this name.
+         *
+         * @param name a layer name, non-blank
+         */
+        record Layer(String name) implements Region {
+            /** Validates the name. */
+            public Layer {
+                Require.nonNull("quasi-Fermi rule layer name", name);
+                if (name.isBlank()) {
+                    throw Require.invalid("quasi-Fermi rule layer name", "\"" + name + "\"", "a layer name (non-blank)");
+                }
+            }
+
+            @Override
+            public boolean overlaps(Region other) {
+                return other instanceof Layer l && l.name.equals(name);
+            }
+
+            @Override
+            public String toString() {
+                return "layer \"" + name + "\"";
+            }
+        }
+
+        /**
+         * A depth range [depthTop, depthBottom] from the surface (m).
+         *
+         * @param depthTop    upper depth (m), finite, &ge; 0
+         * @param depthBottom lower depth (m), finite, &gt; depthTop
+         */
+        record Depths(double depthTop, double depthBottom) implements Region {
+            /** Validates the range. */
+            public Depths {
+                Require.inRange("quasi-Fermi rule depthTop (m)", depthTop, 0, 1e-3);
+                Require.finite("quasi-Fermi rule depthBottom (m)", depthBottom);
+                if (!(depthBottom > depthTop)) {
+                    throw Require.invalid("quasi-Fermi rule depthBottom (m)", depthBottom, "(" + depthTop + ", ...) (below depthTop)");
+                }
+            }
+
+            @Override
+            public boolean overlaps(Region other) {
+                return other instanceof Depths d && d.depthTop < depthBottom && depthTop < d.depthBottom;
+            }
+
+            @Override
+            public String toString() {
+                return "depths [" + depthTop + ", " + depthBottom + "] m";
+            }
+        }
+    }
+}
