@@ -68,7 +68,18 @@ public record ValenceBands(double a1, double a2, double a3, double a4, double a5
         }
     }
 
-    /** Validates the parameters: all finite, Delta_so &ge; 0. */
+    /**
+     * Validates the parameters: all finite, Delta_so &ge; 0.
+     *
+     * @param a1 A1 (hbar^2/2m0 units)
+     * @param a2 A2
+     * @param a3 A3
+     * @param a4 A4
+     * @param a5 A5
+     * @param a6 A6
+     * @param crystalFieldEv Delta_cr (eV)
+     * @param spinOrbitEv Delta_so (eV), &ge; 0
+     */
     public ValenceBands {
         Require.finite("valence parameter A1", a1);
         Require.finite("valence parameter A2", a2);

@@ -35,7 +35,17 @@ import org.wurtzkit.structure.StructureCodec;
 public record ResultProvenance(String libraryVersion, Structure structure, String parameterSetName,
         String parameterSetSha256, Map<String, String> solverOptions, Map<String, String> run, List<String> warnings) {
 
-    /** Validates and copies (the options keep their order). */
+    /**
+     * Validates and copies (the options keep their order).
+     *
+     * @param libraryVersion the version of wurtzkit that computed the result
+     * @param structure the structure that was solved
+     * @param parameterSetName name of the structure's parameter set
+     * @param parameterSetSha256 content hash of that set's values when the result was computed
+     * @param solverOptions the solver options as ordered name/value pairs
+     * @param run what was computed, as ordered name/value pairs: {@code computation} (e.g. "single solve", "bias sweep") and what else is needed to repeat it (the start of a single solve, the biases of a sweep in solving order)
+     * @param warnings warnings the result carries, possibly none
+     */
     public ResultProvenance {
         Require.nonNull("library version", libraryVersion);
         Require.nonNull("structure", structure);

@@ -58,6 +58,8 @@ public record Dopant(Kind kind, double densityPerM3, double ionizationEnergyEv, 
      * @param degeneracy         degeneracy factor g, &gt; 0 (2 for donors, 4 for acceptors is usual)
      * @throws org.wurtzkit.errors.InvalidParameterException if a component is null, not
      *         finite or outside its documented range
+     *
+     * @param ionization how the charged fraction is computed; default {@link Ionization#FROM_FERMI_LEVEL}
      */
     public Dopant {
         Require.nonNull("dopant kind", kind);

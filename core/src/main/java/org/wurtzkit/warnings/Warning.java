@@ -13,7 +13,12 @@ import org.wurtzkit.errors.Require;
  * @param message the explanation, not blank
  */
 public record Warning(WarningKind kind, String message) {
-    /** Validates. */
+    /**
+     * Validates.
+     *
+     * @param kind what the warning is about
+     * @param message the explanation, not blank
+     */
     public Warning {
         Require.nonNull("warning kind", kind);
         Require.nonNull("warning message", message);

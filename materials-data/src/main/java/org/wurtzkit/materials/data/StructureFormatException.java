@@ -41,10 +41,15 @@ public class StructureFormatException extends WurtzkitException {
         NOT_WRITABLE
     }
 
+    /** The file (or origin) read. */
     private final String fileName;
+    /** Dotted key path of the problem. */
     private final String keyPath;
+    /** 1-based line of the problem, or 0 when unknown. */
     private final int line;
+    /** What kind of problem it is. */
     private final Reason reason;
+    /** The problem in words. */
     private final String problem;
 
     /**

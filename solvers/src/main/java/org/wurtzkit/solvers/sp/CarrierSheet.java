@@ -41,7 +41,20 @@ public record CarrierSheet(Carrier carrier, Role role, String layer, int window,
         OTHER
     }
 
-    /** Validates the components. */
+    /**
+     * Validates the components.
+     *
+     * @param carrier electrons or holes
+     * @param role the channel 2DEG, a parasitic sheet between the gate and the channel, or another
+     * @param layer name of the layer holding it
+     * @param window index of the quantum window whose subbands it holds, or -1 for classical carriers
+     * @param depthTop upper depth of the part of the layer it was gathered from (m)
+     * @param depthBottom lower depth of that part (m)
+     * @param centroidDepth mean depth of its carriers (m)
+     * @param sheetDensity carriers per area (m^-2), &ge; 0
+     * @param contact the contact its carriers follow at the centroid ({@link QuasiFermiLevels})
+     * @param quasiFermiLevelEv that contact's level (eV)
+     */
     public CarrierSheet {
         Require.nonNull("carrier", carrier);
         Require.nonNull("role", role);

@@ -53,7 +53,11 @@ public sealed interface FermiContact permits FermiContact.Gate, FermiContact.Cha
      * @param fixedLevelEv the level (eV), finite
      */
     record Floating(double fixedLevelEv) implements FermiContact {
-        /** Validates the level. */
+        /**
+         * Validates the level.
+         *
+         * @param fixedLevelEv the level (eV), finite
+         */
         public Floating {
             Require.finite("floating quasi-Fermi level (eV)", fixedLevelEv);
         }

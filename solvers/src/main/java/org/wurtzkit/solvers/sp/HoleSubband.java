@@ -17,7 +17,17 @@ import org.wurtzkit.units.Units;
  */
 public record HoleSubband(int window, ValenceBands.Kind band, int index, double energyEv, double[] wavefunction,
         double sheetDensity, double inPlaneMass) {
-    /** Copies the wavefunction. */
+    /**
+     * Copies the wavefunction.
+     *
+     * @param window index of the window
+     * @param band heavy, light or crystal-field hole
+     * @param index index within the window and band, from the top of the valence band down
+     * @param energyEv its level on the band diagram's electron-energy scale (eV): below the valence-band edge of the well
+     * @param wavefunction psi on every node of the solution (1/sqrt(m)), zero outside the window
+     * @param sheetDensity holes in the subband (m^-2)
+     * @param inPlaneMass mass of its two-dimensional density of states (m0), |psi|^2-weighted
+     */
     public HoleSubband {
         wavefunction = wavefunction.clone();
     }

@@ -51,7 +51,11 @@ public sealed interface QuantumWindows permits QuantumWindows.Automatic, Quantum
      * @param depthBelow how far the window reaches below the deepest interface (m), in [1 nm, 10 um]
      */
     record BelowDeepestInterface(double depthBelow) implements QuantumWindows {
-        /** Validates. */
+        /**
+         * Validates.
+         *
+         * @param depthBelow how far the window reaches below the deepest interface (m), in [1 nm, 10 um]
+         */
         public BelowDeepestInterface {
             Require.inRange("quantum window depth below the deepest interface (m)", depthBelow, 1e-9, 1e-5);
         }

@@ -45,7 +45,11 @@ import org.wurtzkit.errors.Require;
 public record QuasiFermiLevels(List<Rule> rules) {
     private static final QuasiFermiLevels DEFAULTS = new QuasiFermiLevels(List.of());
 
-    /** Copies and validates the rules: none null, no two for the same carrier overlapping. */
+    /**
+     * Copies and validates the rules: none null, no two for the same carrier overlapping.
+     *
+     * @param rules the rules, in the order given; for each carrier no two may overlap
+     */
     public QuasiFermiLevels {
         Require.nonNull("quasi-Fermi rules", rules);
         rules = List.copyOf(rules);
@@ -87,7 +91,15 @@ public record QuasiFermiLevels(List<Rule> rules) {
         return with(new Rule(carrier, new Region.Depths(depthTop, depthBottom), contact));
     }
 
-    /** @param rule a rule @return a copy with it added */
+    /**
+
+     * {@return a copy with it added}
+
+     *
+
+     * @param rule a rule
+
+     */
     public QuasiFermiLevels with(Rule rule) {
         List<Rule> r = new ArrayList<>(rules);
         r.add(Require.nonNull("quasi-Fermi rule", rule));
@@ -102,7 +114,13 @@ public record QuasiFermiLevels(List<Rule> rules) {
      * @param contact the contact they follow there
      */
     public record Rule(Carrier carrier, Region region, FermiContact contact) {
-        /** Validates that no component is null. */
+        /**
+         * Validates that no component is null.
+         *
+         * @param carrier electrons or holes
+         * @param region where
+         * @param contact the contact they follow there
+         */
         public Rule {
             Require.nonNull("quasi-Fermi rule carrier", carrier);
             Require.nonNull("quasi-Fermi rule region", region);
@@ -112,7 +130,11 @@ public record QuasiFermiLevels(List<Rule> rules) {
 
     /** Where a rule applies. */
     public sealed interface Region permits Region.Layer, Region.Depths {
-        /** @param other another region @return whether the two surely share cells (layers of one name do; two ranges that intersect do) */
+        /**
+         * {@return whether the two surely share cells (layers of one name do; two ranges that intersect do)}
+         *
+         * @param other another region
+         */
         boolean overlaps(Region other);
 
         /**
@@ -121,7 +143,11 @@ public record QuasiFermiLevels(List<Rule> rules) {
          * @param name a layer name, non-blank
          */
         record Layer(String name) implements Region {
-            /** Validates the name. */
+            /**
+             * Validates the name.
+             *
+             * @param name a layer name, non-blank
+             */
             public Layer {
                 Require.nonNull("quasi-Fermi rule layer name", name);
                 if (name.isBlank()) {
@@ -147,7 +173,12 @@ public record QuasiFermiLevels(List<Rule> rules) {
          * @param depthBottom lower depth (m), finite, &gt; depthTop
          */
         record Depths(double depthTop, double depthBottom) implements Region {
-            /** Validates the range. */
+            /**
+             * Validates the range.
+             *
+             * @param depthTop upper depth of the range (m)
+             * @param depthBottom lower depth of the range (m)
+             */
             public Depths {
                 Require.inRange("quasi-Fermi rule depthTop (m)", depthTop, 0, 1e-3);
                 Require.finite("quasi-Fermi rule depthBottom (m)", depthBottom);

@@ -14,7 +14,13 @@ import org.wurtzkit.warnings.Warning;
  *                   when the straight line met n_s = 0 outside the biases computed
  */
 public record Threshold(double voltageV, ThresholdDefinition definition, List<Warning> warnings) {
-    /** Validates and copies. */
+    /**
+     * Validates and copies.
+     *
+     * @param voltageV V_th (V)
+     * @param definition how it was read off
+     * @param warnings e.g. {@link org.wurtzkit.warnings.WarningKind#THRESHOLD_OUTSIDE_SWEPT_RANGE} when the straight line met n_s = 0 outside the biases computed
+     */
     public Threshold {
         Require.finite("threshold voltage (V)", voltageV);
         Require.nonNull("threshold definition", definition);

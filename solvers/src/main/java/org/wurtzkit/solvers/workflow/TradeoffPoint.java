@@ -26,7 +26,20 @@ import org.wurtzkit.errors.Require;
 public record TradeoffPoint(int index, double[] design, double sheetDensityPerCm2, double thresholdVoltageV,
         double mobilityCm2PerVs, double sheetResistanceOhmPerSquare, double leakageAPerCm2, boolean inBand,
         boolean onFront, List<String> warnings) {
-    /** Validates and copies. */
+    /**
+     * Validates and copies.
+     *
+     * @param index the point's index (row-major, last axis fastest)
+     * @param design the axis values
+     * @param sheetDensityPerCm2 2DEG sheet density at 0 V (cm^-2)
+     * @param thresholdVoltageV threshold voltage of the full solver (V)
+     * @param mobilityCm2PerVs 2DEG mobility at 0 V (cm^2/Vs)
+     * @param sheetResistanceOhmPerSquare sheet resistance at 0 V (Ohm/sq)
+     * @param leakageAPerCm2 gate leakage current density at the reverse bias (A/cm^2), negative in reverse bias as for a Schottky diode
+     * @param inBand whether the point counts for the front (its V_th in the band, or no band set) and it was computed
+     * @param onFront whether it is on the Pareto front of R_sh against |J| in the band
+     * @param warnings what the mobility and the leakage rest on that may not hold
+     */
     public TradeoffPoint {
         design = Require.nonNull("design values", design).clone();
         warnings = List.copyOf(Require.nonNull("warnings", warnings));
