@@ -83,8 +83,26 @@ final class ChargeModel {
                 qi -= box * cell.n;
                 dqi -= box * cell.dn;
             }
-            q[i] = Device.Q * qi;
+            q[i] = Device.Q * (qi + d.fixedSheet[i]);
             dq[i] = Device.Q * dqi;
+        }
+        for (int k = 0; k < d.sheetNode.length; k++) {
+            int i = d.sheetNode[k];
+            // E_c of the nitride at the sheet: the cell below the node (the node is its top face)
+            double ecSheet = d.ec[i] - phi[i];
+            double qs0 = 0;
+            double dqs = 0;
+            for (int j = d.sheetStart[k]; j < d.sheetStart[k + 1]; j++) {
+                double x = (ecSheet - d.stateBelowEc[j] - d.sheetFermiEv[k]) * invVt;
+                double f = 1 / (1 + Math.exp(x));
+                double w = d.stateWeight[j];
+                // donor-like: +q when empty (1 - f); acceptor-like: -q when filled (f)
+                qs0 += d.stateDonorLike[j] ? w * (1 - f) : -w * f;
+                // dx/dphi = -1/kT and df/dx = -f(1 - f): both kinds lose charge as phi rises
+                dqs -= w * f * (1 - f) * invVt;
+            }
+            q[i] += Device.Q * qs0;
+            dq[i] += Device.Q * dqs;
         }
     }
 
@@ -160,8 +178,8 @@ final class ChargeModel {
      * @param holes     holes
      * @param donors    ionised donors, including empty donor-like traps
      * @param acceptors ionised acceptors, including filled acceptor-like traps
-     * @param boxCharge free charge per area in each node's box, delta sheets and surface states
-     *                  included (C/m^2)
+     * @param boxCharge free charge per area in each node's box, delta sheets, surface states, fixed
+     *                  interface charge and interface states included (C/m^2)
      */
     record Report(double[] electrons, double[] holes, double[] donors, double[] acceptors, double[] boxCharge) {
     }

@@ -62,6 +62,18 @@ final class Device {
     final double[] deltaEnergy;
     final boolean[] deltaIsDonor;
 
+    // fixed interface charge per node (m^-2, signed) and interface states, flattened: state j of
+    // sheet k (k in [0, sheetNode.length)) is at index sheetStart[k] <= j < sheetStart[k + 1]
+    final double[] fixedSheet;
+    final int[] sheetNode;
+    final int[] sheetStart;
+    final double[] sheetFermiEv; // Fermi level that occupies the sheet's states (eV)
+    final double[] stateBelowEc; // e: energy below the nitride's E_c at the sheet (eV)
+    final double[] stateWeight; // states in the quadrature interval (m^-2)
+    final boolean[] stateDonorLike;
+    /** Whether cell k is an insulator of the gate stack (no carriers, no dopants). */
+    final boolean[] insulatorCell;
+
     // boundaries
     final boolean topDirichlet;
     final double phiTop;
@@ -85,7 +97,7 @@ final class Device {
         this.vt = Constants.thermalVoltage(s.temperatureK());
         this.kT = Constants.BOLTZMANN * s.temperatureK();
 
-        List<double[]> windows = resolveWindows(s, o.quantumRegion());
+        List<double[]> windows = clipToNitride(resolveWindows(s, o.quantumRegion()), s.gateStackThickness());
         TreeSet<Double> breaks = new TreeSet<>();
         breaks.add(0.0);
         breaks.add(s.totalThickness());
@@ -120,9 +132,29 @@ final class Device {
         massZ = new double[cells];
         massXY = new double[cells];
         layerOfCell = new int[cells];
+        insulatorCell = new boolean[cells];
         double t = s.temperatureK();
+        int nitrideLayers = s.layerStates().size();
+        double gateT = s.gateStackThickness();
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
+            if (mid < gateT) {
+                // an amorphous insulator: permittivity, band edges from its offset to GaN, no
+                // polarization, no carriers (nc = nv = 0), no dopants (an empty species row)
+                org.wurtzkit.structure.InsulatorLayer il = s.insulatorAt(mid);
+                insulatorCell[k] = true;
+                layerOfCell[k] = nitrideLayers + s.gateStack().indexOf(il);
+                eps[k] = il.insulator().relativePermittivity() * Constants.VACUUM_PERMITTIVITY;
+                px[k] = 0;
+                BandEdges edges = s.bandEdgesOf(il);
+                ec[k] = edges.conductionEv();
+                ev[k] = edges.valenceEv();
+                nc[k] = 0;
+                nv[k] = 0;
+                massZ[k] = 1; // never used: quantum windows stop at the insulator
+                massXY[k] = 1;
+                continue;
+            }
             int li = s.layerIndexAt(mid);
             layerOfCell[k] = li;
             PointState p = s.pointAt(mid);
@@ -148,10 +180,11 @@ final class Device {
 
         List<LayerState> states = s.layerStates();
         int nl = states.size();
-        speciesDensity = new double[nl][];
-        speciesEnergy = new double[nl][];
-        speciesDegeneracy = new double[nl][];
-        speciesKind = new ChargeSpecies[nl][];
+        int rows = nl + s.gateStack().size(); // one empty row per insulator
+        speciesDensity = new double[rows][0];
+        speciesEnergy = new double[rows][0];
+        speciesDegeneracy = new double[rows][0];
+        speciesKind = new ChargeSpecies[rows][0];
         for (int li = 0; li < nl; li++) {
             Layer l = states.get(li).layer();
             int ns = l.dopants().size() + l.deepLevels().size();
@@ -201,6 +234,38 @@ final class Device {
             }
         }
 
+        fixedSheet = new double[n];
+        List<org.wurtzkit.structure.PlacedSheet> placed = s.interfaceSheets();
+        int nk = 0;
+        for (org.wurtzkit.structure.PlacedSheet ps : placed) {
+            nk += ps.sheet().states().size();
+        }
+        sheetNode = new int[nk];
+        sheetStart = new int[nk + 1];
+        sheetFermiEv = new double[nk];
+        List<double[]> quad = new ArrayList<>(); // {e, weight, donor ? 1 : 0}
+        int k = 0;
+        for (org.wurtzkit.structure.PlacedSheet ps : placed) {
+            int node = mesh.nearestNode(ps.depth());
+            fixedSheet[node] += ps.sheet().fixedChargePerM2();
+            for (org.wurtzkit.structure.InterfaceStates is : ps.sheet().states()) {
+                sheetNode[k] = node;
+                sheetStart[k] = quad.size();
+                sheetFermiEv[k] = interfaceStateFermiLevelEv(ps);
+                InterfaceStateQuadrature.append(is, ps.nitrideGapEv(), kT / Q, quad);
+                k++;
+            }
+        }
+        sheetStart[nk] = quad.size();
+        stateBelowEc = new double[quad.size()];
+        stateWeight = new double[quad.size()];
+        stateDonorLike = new boolean[quad.size()];
+        for (int j = 0; j < quad.size(); j++) {
+            stateBelowEc[j] = quad.get(j)[0];
+            stateWeight[j] = quad.get(j)[1];
+            stateDonorLike[j] = quad.get(j)[2] > 0;
+        }
+
         TopBoundary top = s.top();
         double gateFermi = 0;
         if (top instanceof TopBoundary.Schottky sch) {
@@ -212,6 +277,12 @@ final class Device {
             gateFermi = -sch.biasV();
         } else {
             TopBoundary.FreeSurface fs = (TopBoundary.FreeSurface) top;
+            if (fs.donorDensityPerM2() > 0 && !s.gateStack().isEmpty()) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "the free surface above the insulator \""
+                        + s.gateStack().get(0).name() + "\" has surface donors (" + fs.donorDensityPerM2()
+                        + " m^-2); an insulator's surface holds none here: describe states at the nitride's top face"
+                        + " with Structure.Builder.sheetOnTop(...) and use TopBoundary.freeSurface(0, 0)");
+            }
             topDirichlet = false;
             phiTop = Double.NaN;
             surfaceDonorDensity = fs.donorDensityPerM2();
@@ -241,6 +312,36 @@ final class Device {
                 quantumNode[i] = true;
             }
         }
+    }
+
+    /**
+     * The Fermi level that occupies the interface states of one sheet (eV, on the solver's scale with
+     * the bottom contact at 0). The one place where that choice is made: today every sheet takes the
+     * bottom (channel) contact's electron Fermi level, 0 eV. States under an insulator exchange
+     * electrons with the nitride, not with the gate metal, and a free surface has no contact of its
+     * own, so the channel's level is the right one in equilibrium; a solver with per-region
+     * quasi-Fermi levels should return the level of the region the sheet's nitride belongs to.
+     */
+    static double interfaceStateFermiLevelEv(org.wurtzkit.structure.PlacedSheet sheet) {
+        return 0;
+    }
+
+    /**
+     * Windows never reach into the gate stack: a top above the insulator's bottom is moved down to
+     * it (a hard wall; with conduction-band offsets of 2 eV and more the wave functions enter an
+     * insulator by a few angstroms only), and a window inside the insulator is dropped.
+     */
+    private static List<double[]> clipToNitride(List<double[]> windows, double gateT) {
+        if (gateT == 0) {
+            return windows;
+        }
+        List<double[]> out = new ArrayList<>();
+        for (double[] w : windows) {
+            if (w[1] > gateT) {
+                out.add(new double[] {Math.max(w[0], gateT), w[1]});
+            }
+        }
+        return out;
     }
 
     private static double[] mergeClose(TreeSet<Double> breaks, double tol) {
