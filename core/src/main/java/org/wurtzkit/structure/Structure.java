@@ -258,6 +258,42 @@ public final class Structure {
         return sheets;
     }
 
+    /**
+     * The same stack with every sheet's interface states replaced by a fixed charge: the sheet's
+     * fixed charge plus the given charge of its states. This is how states too slow to follow a
+     * signal are described (the high-frequency limit of a C-V measurement): their occupancy stays
+     * at its value at the operating point.
+     *
+     * @param stateCharge the charge of the states of each sheet of {@link #interfaceSheets()}, in
+     *                    that order (C/m^2), e.g. from a solution at the operating point
+     * @return the stack with frozen states
+     */
+    public Structure withInterfaceStatesFrozen(double[] stateCharge) {
+        Require.nonNull("frozen interface-state charges", stateCharge);
+        if (stateCharge.length != sheets.size()) {
+            throw Require.invalid("number of frozen interface-state charges", stateCharge.length,
+                    "[" + sheets.size() + ", " + sheets.size() + "] (one per interface sheet)");
+        }
+        Require.allFinite("frozen interface-state charges (C/m^2)", stateCharge, stateCharge.length);
+        Builder b = toBuilder();
+        b.sheets.clear();
+        int n = bottomUp.size();
+        int idx = 0;
+        for (int fromTop = 0; fromTop < n; fromTop++) {
+            List<InterfaceSheet> l = sheetsBottomUp.get(n - 1 - fromTop);
+            if (l == null) {
+                continue;
+            }
+            List<InterfaceSheet> frozen = new ArrayList<>();
+            for (InterfaceSheet sh : l) {
+                double extra = stateCharge[idx++] / org.wurtzkit.units.Constants.ELEMENTARY_CHARGE;
+                frozen.add(new InterfaceSheet(sh.fixedChargePerM2() + extra, List.of()));
+            }
+            b.sheets.put(n - 1 - fromTop, frozen);
+        }
+        return b.build();
+    }
+
     /** {@return the layers in growth order, bottom (first grown) first} */
     public List<Layer> layersBottomUp() {
         return bottomUp;

@@ -88,22 +88,41 @@ final class ChargeModel {
         }
         for (int k = 0; k < d.sheetNode.length; k++) {
             int i = d.sheetNode[k];
-            // E_c of the nitride at the sheet: the cell below the node (the node is its top face)
-            double ecSheet = d.ec[i] - phi[i];
-            double qs0 = 0;
-            double dqs = 0;
-            for (int j = d.sheetStart[k]; j < d.sheetStart[k + 1]; j++) {
-                double x = (ecSheet - d.stateBelowEc[j] - d.sheetFermiEv[k]) * invVt;
-                double f = 1 / (1 + Math.exp(x));
-                double w = d.stateWeight[j];
-                // donor-like: +q when empty (1 - f); acceptor-like: -q when filled (f)
-                qs0 += d.stateDonorLike[j] ? w * (1 - f) : -w * f;
-                // dx/dphi = -1/kT and df/dx = -f(1 - f): both kinds lose charge as phi rises
-                dqs -= w * f * (1 - f) * invVt;
-            }
-            q[i] += Device.Q * qs0;
-            dq[i] += Device.Q * dqs;
+            q[i] += Device.Q * stateCharge(d, k, phi[i]);
+            dq[i] += Device.Q * stateChargeDerivative(d, k, phi[i]);
         }
+    }
+
+    /**
+     * Interface states of sheet k: donor-like states are +e when empty (1 - f), acceptor-like states
+     * -e when filled (f), with f the Fermi-Dirac occupancy at the sheet's Fermi level.
+     *
+     * @param d       the device
+     * @param k       the sheet of states
+     * @param phiNode the potential at its node (V)
+     * @return the states' charge divided by e (m^-2), signed
+     */
+    static double stateCharge(Device d, int k, double phiNode) {
+        double ecSheet = d.ec[d.sheetNode[k]] - phiNode; // the nitride's E_c: the cell below the node
+        double invVt = 1 / d.vt;
+        double sum = 0;
+        for (int j = d.sheetStart[k]; j < d.sheetStart[k + 1]; j++) {
+            double f = 1 / (1 + Math.exp((ecSheet - d.stateBelowEc[j] - d.sheetFermiEv[k]) * invVt));
+            sum += d.stateDonorLike[j] ? d.stateWeight[j] * (1 - f) : -d.stateWeight[j] * f;
+        }
+        return sum;
+    }
+
+    /** @return d(stateCharge)/dphi (m^-2 per V): with dx/dphi = -1/kT and df/dx = -f(1 - f), both kinds lose charge as phi rises */
+    static double stateChargeDerivative(Device d, int k, double phiNode) {
+        double ecSheet = d.ec[d.sheetNode[k]] - phiNode;
+        double invVt = 1 / d.vt;
+        double sum = 0;
+        for (int j = d.sheetStart[k]; j < d.sheetStart[k + 1]; j++) {
+            double f = 1 / (1 + Math.exp((ecSheet - d.stateBelowEc[j] - d.sheetFermiEv[k]) * invVt));
+            sum -= d.stateWeight[j] * f * (1 - f) * invVt;
+        }
+        return sum;
     }
 
     private double gapAt(int i) {

@@ -67,6 +67,7 @@ final class Device {
     final double[] fixedSheet;
     final int[] sheetNode;
     final int[] sheetStart;
+    final int[] sheetOwner; // index of the placed sheet (Structure.interfaceSheets()) that holds sheet k
     final double[] sheetFermiEv; // Fermi level that occupies the sheet's states (eV)
     final double[] stateBelowEc; // e: energy below the nitride's E_c at the sheet (eV)
     final double[] stateWeight; // states in the quadrature interval (m^-2)
@@ -243,6 +244,8 @@ final class Device {
         sheetNode = new int[nk];
         sheetStart = new int[nk + 1];
         sheetFermiEv = new double[nk];
+        sheetOwner = new int[nk];
+        int owner = 0;
         List<double[]> quad = new ArrayList<>(); // {e, weight, donor ? 1 : 0}
         int k = 0;
         for (org.wurtzkit.structure.PlacedSheet ps : placed) {
@@ -252,9 +255,11 @@ final class Device {
                 sheetNode[k] = node;
                 sheetStart[k] = quad.size();
                 sheetFermiEv[k] = interfaceStateFermiLevelEv(ps);
+                sheetOwner[k] = owner;
                 InterfaceStateQuadrature.append(is, ps.nitrideGapEv(), kT / Q, quad);
                 k++;
             }
+            owner++;
         }
         sheetStart[nk] = quad.size();
         stateBelowEc = new double[quad.size()];

@@ -48,6 +48,7 @@ public final class Solution {
     private final double holeFermiEv;
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
+    private final double[] interfaceStateCharge;
 
     /**
      * Copies out what one solve computed: the potential and subbands are read, never kept; the
@@ -68,6 +69,10 @@ public final class Solution {
             int k = i < nn - 1 ? i : nn - 2;
             ec[i] = d.ec[k] - phi[i];
             ev[i] = d.ev[k] - phi[i];
+        }
+        interfaceStateCharge = new double[d.structure.interfaceSheets().size()];
+        for (int k = 0; k < d.sheetNode.length; k++) {
+            interfaceStateCharge[d.sheetOwner[k]] += Device.Q * ChargeModel.stateCharge(d, k, phi[d.sheetNode[k]]);
         }
         n = report.electrons();
         p = report.holes();
@@ -325,6 +330,15 @@ public final class Solution {
             s += v;
         }
         return Units.perM2ToPerCm2(s);
+    }
+
+    /**
+     * {@return the charge of the interface states of each sheet of
+     * {@link Structure#interfaceSheets()}, in that order (C/m^2, signed; the sheets' fixed charges
+     * not included)}
+     */
+    public double[] interfaceStateCharge() {
+        return interfaceStateCharge.clone();
     }
 
     /** {@return sheet charge on the gate metal (C/m^2); 0 for a free surface} */

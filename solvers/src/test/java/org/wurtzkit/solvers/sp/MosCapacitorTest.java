@@ -56,9 +56,13 @@ class MosCapacitorTest {
     }
 
     static Structure mos(double biasV, double fixedPerCm2) {
+        return mos(biasV, InterfaceSheet.fixedPerCm2(fixedPerCm2));
+    }
+
+    static Structure mos(double biasV, InterfaceSheet sheet) {
         Layer gan = Layer.of("n-GaN", unpolarizedGaN(), 2000 * NM)
                 .withDopant(new Dopant(Dopant.Kind.DONOR, ND, 0.0, 1e-6));
-        return Structure.builder(SET).grow(gan).sheetOnTop(InterfaceSheet.fixedPerCm2(fixedPerCm2))
+        return Structure.builder(SET).grow(gan).sheetOnTop(sheet)
                 .deposit(new InsulatorLayer("gate oxide", OX, T_OX)).top(TopBoundary.schottky(PHI_B, biasV)).build();
     }
 
@@ -113,6 +117,30 @@ class MosCapacitorTest {
 
     private static double solverFlatBand(double fixedPerCm2) {
         return new BrentSolver(1e-12, 1e-9).solve(100, v -> bandBending(CLASSICAL.solve(mos(v, fixedPerCm2))), -3, 3);
+    }
+
+    /** The gate bias that bends the GaN's bands by psi at its surface (V). */
+    private static double biasForBending(double psi, InterfaceSheet sheet) {
+        return new BrentSolver(1e-12, 1e-10).solve(100, v -> bandBending(CLASSICAL.solve(mos(v, sheet))) - psi, -8, 4);
+    }
+
+    /**
+     * Interface states stretch the C-V curve along the voltage axis: V_G = V_fb + psi_s - (Q_s + Q_it)/C_ox
+     * with dQ_it/dpsi_s = -C_it = -e^2 D_it for a uniform D_it (Sze &amp; Ng, ch. 4, from memory),
+     * so the gate voltage needed per volt of band bending grows by the ideality term C_it/C_ox.
+     */
+    @Test
+    void uniformInterfaceStatesStretchTheCurveByCitOverCox() {
+        double dit = 3e12; // cm^-2 eV^-1, invented (within reported ranges for Al2O3 and SiN on GaN)
+        InterfaceSheet none = InterfaceSheet.fixedPerCm2(0);
+        InterfaceSheet states = InterfaceSheet.of(org.wurtzkit.structure.InterfaceStates.uniformPerCm2PerEv(dit, 1.7));
+        double psi1 = -0.3;
+        double psi2 = -1.0;
+        double without = biasForBending(psi2, none) - biasForBending(psi1, none);
+        double with = biasForBending(psi2, states) - biasForBending(psi1, states);
+        double stretch = (with - without) / (psi2 - psi1);
+        double expected = Constants.ELEMENTARY_CHARGE * org.wurtzkit.units.Units.perCm2ToPerM2(dit) / cox();
+        assertEquals(expected, stretch, 0.01 * expected);
     }
 
     private static double solverCapacitance(double v) {
