@@ -186,6 +186,38 @@ public final class Structure {
         return b;
     }
 
+    /**
+     * The same stack (gate stack, interface sheets, boundaries and model choices included) with one
+     * nitride layer replaced, e.g. a thinner barrier after a gate recess.
+     *
+     * @param indexBottomUp the layer's index in {@link #layersBottomUp()}
+     * @param layer         the replacement
+     * @return the modified copy
+     */
+    public Structure withLayer(int indexBottomUp, Layer layer) {
+        Require.inRange("layer index (bottom-up)", indexBottomUp, 0, bottomUp.size() - 1);
+        Require.nonNull("layer", layer);
+        Builder b = toBuilder();
+        b.layers.set(indexBottomUp, layer);
+        return b.build();
+    }
+
+    /**
+     * The same stack with another gate stack (everything else kept).
+     *
+     * @param topDown the insulator layers from the top down; empty for none
+     * @return the modified copy
+     */
+    public Structure withGateStack(List<InsulatorLayer> topDown) {
+        Require.nonNull("gate stack", topDown);
+        Builder b = toBuilder();
+        b.deposited.clear();
+        for (int i = topDown.size() - 1; i >= 0; i--) {
+            b.deposited.add(Require.nonNull("insulator layer", topDown.get(i)));
+        }
+        return b.build();
+    }
+
     /** @param t temperature (K) @return a copy at that temperature */
     public Structure withTemperature(double t) {
         return toBuilder().temperature(t).build();
