@@ -429,7 +429,7 @@ public final class Structure {
      * @return the index from the top of the layer containing it (the upper layer at an interface)
      */
     public int layerIndexAt(double depth) {
-        Require.inRange("depth in the nitride layers (m)", depth, gateStackThickness, totalThickness);
+        Require.inRange("depth (m)", depth, gateStackThickness, totalThickness);
         for (int i = 0; i < states.size(); i++) {
             if (depth <= states.get(i).depthBottom()) {
                 return i;
