@@ -746,6 +746,12 @@ public final class Structure {
                 throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE,
                         "no top boundary: call top(TopBoundary.schottky(...)) or top(TopBoundary.freeSurface(...))");
             }
+            if (!deposited.isEmpty() && top instanceof TopBoundary.FreeSurface fs && fs.donorDensityPerM2() > 0) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "the free surface above the insulator \""
+                        + deposited.get(deposited.size() - 1).name() + "\" has surface donors ("
+                        + fs.donorDensityPerM2() + " m^-2), which describe a nitride surface: put states at the"
+                        + " nitride's top face with sheetOnTop(...) and use TopBoundary.freeSurface(0, 0)");
+            }
             return new Structure(this);
         }
     }

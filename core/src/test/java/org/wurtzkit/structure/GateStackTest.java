@@ -168,6 +168,8 @@ class GateStackTest {
         BadInput.checkKind(() -> hemt().deposit(InsulatorLayer.ofNm(Insulators.SIO2, 5))
                 .sheetOnTop(InterfaceSheet.fixedPerCm2(1e12)), ErrorKind.INVALID_STRUCTURE, "before any deposit");
         assertThrows(InvalidParameterException.class, () -> InterfaceSheet.fixedPerCm2(Double.NaN));
+        BadInput.checkKind(() -> hemt().deposit(InsulatorLayer.ofNm(Insulators.SIO2, 5))
+                .top(TopBoundary.freeSurface(1.6, 1e13)).build(), ErrorKind.INVALID_STRUCTURE, "surface donors");
         assertEquals(List.of(), mis(5).withGateStack(List.of()).gateStack());
     }
 }

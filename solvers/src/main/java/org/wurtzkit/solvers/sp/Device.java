@@ -282,12 +282,6 @@ final class Device {
             gateFermi = -sch.biasV();
         } else {
             TopBoundary.FreeSurface fs = (TopBoundary.FreeSurface) top;
-            if (fs.donorDensityPerM2() > 0 && !s.gateStack().isEmpty()) {
-                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "the free surface above the insulator \""
-                        + s.gateStack().get(0).name() + "\" has surface donors (" + fs.donorDensityPerM2()
-                        + " m^-2); an insulator's surface holds none here: describe states at the nitride's top face"
-                        + " with Structure.Builder.sheetOnTop(...) and use TopBoundary.freeSurface(0, 0)");
-            }
             topDirichlet = false;
             phiTop = Double.NaN;
             surfaceDonorDensity = fs.donorDensityPerM2();

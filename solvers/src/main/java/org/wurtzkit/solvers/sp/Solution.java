@@ -20,6 +20,11 @@ import org.wurtzkit.units.Units;
  * ({@link #electricField()}) have one value per interval between nodes, at {@link #cellMidpoints()}.
  */
 public final class Solution {
+    /** Depth below a gate stack within which holes are summed for the warning of {@link #toString()} (m). */
+    static final double HOLE_WATCH_DEPTH = 5e-9;
+    /** Hole sheet under a gate stack above which {@link #toString()} warns (m^-2): 1e10 cm^-2. */
+    static final double HOLE_WARNING_PER_M2 = 1e14;
+
     /** Subbands listed one per line by {@link #toString()}; the rest are summed on one line. */
     private static final int SUBBANDS_SHOWN = 4;
 
@@ -49,6 +54,7 @@ public final class Solution {
     private final boolean subbandLimitReached;
     private final ConvergenceRecord record;
     private final double[] interfaceStateCharge;
+    private final double holesUnderInsulator;
 
     /**
      * Copies out what one solve computed: the potential and subbands are read, never kept; the
@@ -93,6 +99,16 @@ public final class Solution {
             scale += Math.abs(q[i]);
         }
         electronSheet = eSheet;
+        double gateT = d.structure.gateStackThickness();
+        double under = 0;
+        if (gateT > 0) {
+            for (int i = 0; i < nn; i++) {
+                if (d.x[i] >= gateT && d.x[i] <= gateT + HOLE_WATCH_DEPTH) {
+                    under += p[i] * d.box(i);
+                }
+            }
+        }
+        holesUnderInsulator = under;
         holeSheet = hSheet;
         midpoints = new double[nn - 1];
         field = new double[nn - 1];
@@ -341,6 +357,11 @@ public final class Solution {
         return interfaceStateCharge.clone();
     }
 
+    /** {@return holes within 5 nm below the gate stack (m^-2); 0 without a gate stack} */
+    public double holesUnderGateStack() {
+        return holesUnderInsulator;
+    }
+
     /** {@return sheet charge on the gate metal (C/m^2); 0 for a free surface} */
     public double gateCharge() {
         return gateCharge;
@@ -415,6 +436,11 @@ public final class Solution {
         sb.append("  ").append(record);
         if (subbandLimitReached) {
             sb.append("\n  warning: a quantum window reached the subband limit; its density is too low");
+        }
+        if (holesUnderInsulator > HOLE_WARNING_PER_M2) {
+            sb.append("\n  warning: ").append(Decimals.format(Units.perM2ToPerCm2(holesUnderInsulator), "cm^-2"))
+                    .append(" of holes within 5 nm under the gate stack; their supply is set by the hole quasi-Fermi")
+                    .append(" level option, which an insulator makes uncertain");
         }
         return sb.toString();
     }
