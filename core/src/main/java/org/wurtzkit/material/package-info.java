@@ -39,5 +39,10 @@
  * immutable and stateless, give energies in eV on the scale whose zero is the GaN valence-band
  * maximum, be defined for every composition the set resolves, and be an explicit, documented choice
  * of the caller or the set, never an unstated default.
+ *
+ * <p>Gate dielectrics are not wurtzite materials: an {@link org.wurtzkit.material.Insulator} record
+ * (permittivity, gap, conduction-band offset to GaN, source) describes one, and
+ * {@link org.wurtzkit.material.Insulators} holds the built-in SiO2, Si3N4, Al2O3 and HfO2 with
+ * their published sources.
  */
 package org.wurtzkit.material;

@@ -70,6 +70,10 @@ public final class Structure {
     public static final double WARN_TEMPERATURE_ABOVE_K = 1000;
     /** Bottom depth of every layer, top-down, for the binary search of {@link #layerIndexAt}. */
     private final double[] bottoms;
+    private final List<InsulatorLayer> gateStack; // top-down
+    private final double gateStackThickness;
+    private final List<PlacedSheet> sheets; // shallowest first
+    private final java.util.Map<Integer, List<InterfaceSheet>> sheetsBottomUp; // for toBuilder
 
     private Structure(Builder b) {
         this.parameters = b.parameters;
@@ -85,7 +89,15 @@ public final class Structure {
         Layer first = bottomUp.get(0);
         this.referenceLatticeA = b.referenceLatticeA > 0 ? b.referenceLatticeA
                 : first.material().at(0, parameters).latticeA();
-        double t = 0;
+        List<InsulatorLayer> gs = new ArrayList<>(b.deposited);
+        Collections.reverse(gs);
+        this.gateStack = List.copyOf(gs);
+        double g = 0;
+        for (InsulatorLayer il : gateStack) {
+            g += il.thickness();
+        }
+        this.gateStackThickness = g;
+        double t = g;
         for (Layer l : bottomUp) {
             t += l.thickness();
         }
@@ -96,6 +108,11 @@ public final class Structure {
         for (int i = 0; i < bottoms.length; i++) {
             bottoms[i] = states.get(i).depthBottom();
         }
+        this.sheetsBottomUp = new java.util.TreeMap<>();
+        for (var e : b.sheets.entrySet()) {
+            sheetsBottomUp.put(e.getKey(), List.copyOf(e.getValue()));
+        }
+        this.sheets = placeSheets();
         this.warnings = collectWarnings();
     }
 
@@ -145,6 +162,32 @@ public final class Structure {
         return criticalThicknessModel;
     }
 
+    private List<PlacedSheet> placeSheets() {
+        List<PlacedSheet> out = new ArrayList<>();
+        int n = bottomUp.size();
+        for (int fromTop = 0; fromTop < n; fromTop++) {
+            List<InterfaceSheet> l = sheetsBottomUp.get(n - 1 - fromTop);
+            if (l == null) {
+                continue;
+            }
+            LayerState st = states.get(fromTop);
+            String upper = fromTop > 0 ? states.get(fromTop - 1).layer().name()
+                    : gateStack.isEmpty() ? "vacuum" : gateStack.get(gateStack.size() - 1).name();
+            BandEdges e = bandEdgesAt(st.top());
+            double gap = e.conductionEv() - e.valenceEv();
+            String where = "the top of layer \"" + st.layer().name() + "\" (gap " + gap + " eV)";
+            for (InterfaceSheet sh : l) {
+                for (InterfaceStates is : sh.states()) {
+                    Require.inRange("interface-state charge-neutrality level below E_c at " + where + " (eV)",
+                            is.neutralLevelBelowEcEv(), 0, gap);
+                    is.distribution().checkInsideGap(gap, where);
+                }
+                out.add(new PlacedSheet(st.depthTop(), upper, fromTop, gap, sh));
+            }
+        }
+        return Collections.unmodifiableList(out);
+    }
+
     private List<LayerState> resolveStates() {
         int n = bottomUp.size();
         LayerState[] out = new LayerState[n];
@@ -154,7 +197,7 @@ public final class Structure {
             Layer l = bottomUp.get(i);
             double depthTop = depthBottom - l.thickness();
             if (i == n - 1) {
-                depthTop = 0; // exact zero at the surface despite round-off
+                depthTop = gateStackThickness; // exact value at the top despite round-off
             }
             PointState bot = point(l, 0, below);
             PointState topState = l.material().isGraded() ? point(l, 1, below) : bot;
@@ -200,14 +243,52 @@ public final class Structure {
         b.top = top;
         b.bottom = bottom;
         b.criticalThicknessModel = criticalThicknessModel;
+        for (int i = gateStack.size() - 1; i >= 0; i--) {
+            b.deposited.add(gateStack.get(i));
+        }
+        for (var e : sheetsBottomUp.entrySet()) {
+            b.sheets.put(e.getKey(), new ArrayList<>(e.getValue()));
+        }
         return b;
+    }
+
+    /**
+     * The same stack (gate stack, interface sheets, boundaries and model choices included) with one
+     * nitride layer replaced, e.g. a thinner barrier after a gate recess.
+     *
+     * @param indexBottomUp the layer's index in {@link #layersBottomUp()}
+     * @param layer         the replacement
+     * @return the modified copy
+     */
+    public Structure withLayer(int indexBottomUp, Layer layer) {
+        Require.inRange("layer index (bottom-up)", indexBottomUp, 0, bottomUp.size() - 1);
+        Require.nonNull("layer", layer);
+        Builder b = toBuilder();
+        b.layers.set(indexBottomUp, layer);
+        return b.build();
+    }
+
+    /**
+     * The same stack with another gate stack (everything else kept).
+     *
+     * @param topDown the insulator layers from the top down; empty for none
+     * @return the modified copy
+     */
+    public Structure withGateStack(List<InsulatorLayer> topDown) {
+        Require.nonNull("gate stack", topDown);
+        Builder b = toBuilder();
+        b.deposited.clear();
+        for (int i = topDown.size() - 1; i >= 0; i--) {
+            b.deposited.add(Require.nonNull("insulator layer", topDown.get(i)));
+        }
+        return b.build();
     }
 
     /**
      * Two structures are equal when everything the builder was given is equal: the same parameter
      * set (by its own {@code equals}, identity for the built-in sets), the same layers, reference
      * lattice, polarity, polarization model, band line-up, strain-shift switch, temperature,
-     * boundaries and critical-thickness model. Doubles compare bit for bit ({@link Double#compare}), as in records.
+     * boundaries, critical-thickness model, gate stack and interface sheets. Doubles compare bit for bit ({@link Double#compare}), as in records.
      */
     @Override
     public boolean equals(Object o) {
@@ -216,13 +297,15 @@ public final class Structure {
                 && s.polarizationModel.equals(polarizationModel) && s.bandAlignment.equals(bandAlignment)
                 && s.strainShiftsBandEdges == strainShiftsBandEdges
                 && Double.compare(s.temperatureK, temperatureK) == 0 && s.top.equals(top) && s.bottom.equals(bottom)
-                && s.criticalThicknessModel.equals(criticalThicknessModel);
+                && s.criticalThicknessModel.equals(criticalThicknessModel) && s.gateStack.equals(gateStack)
+                && s.sheetsBottomUp.equals(sheetsBottomUp);
     }
 
     @Override
     public int hashCode() {
         return java.util.Objects.hash(parameters, bottomUp, referenceLatticeA, polarity, polarizationModel,
-                bandAlignment, strainShiftsBandEdges, temperatureK, top, bottom, criticalThicknessModel);
+                bandAlignment, strainShiftsBandEdges, temperatureK, top, bottom, criticalThicknessModel, gateStack,
+                sheetsBottomUp);
     }
 
     /**
@@ -262,6 +345,97 @@ public final class Structure {
     /** {@return the parameter set} */
     public ParameterSet parameters() {
         return parameters;
+    }
+
+    /**
+     * {@return the deposited insulator layers of the gate stack, from the top down (empty without
+     * one); they occupy depths [0, {@link #gateStackThickness()}] above the nitride layers}
+     */
+    public List<InsulatorLayer> gateStack() {
+        return gateStack;
+    }
+
+    /** {@return the total thickness of the gate stack (m), 0 without one} */
+    public double gateStackThickness() {
+        return gateStackThickness;
+    }
+
+    /**
+     * @param depth a depth in [0, {@link #gateStackThickness()}) (m)
+     * @return the insulator layer there (the upper one at an interface)
+     */
+    public InsulatorLayer insulatorAt(double depth) {
+        if (!(depth >= 0 && depth < gateStackThickness)) {
+            throw Require.invalid("depth inside the gate stack (m)", depth, "[0, " + gateStackThickness + ")");
+        }
+        double bottomOf = 0;
+        for (InsulatorLayer il : gateStack) {
+            bottomOf += il.thickness();
+            if (depth <= bottomOf) {
+                return il;
+            }
+        }
+        return gateStack.get(gateStack.size() - 1);
+    }
+
+    /**
+     * The band edges of an insulator of this stack: E_c = E_c(GaN) + its conduction-band offset,
+     * with E_c(GaN) the parameter set's GaN under this structure's band line-up at its temperature
+     * (unstrained), and E_v = E_c - E_g.
+     *
+     * @param layer an insulator layer
+     * @return E_c and E_v on the parameter set's energy scale (eV)
+     */
+    public BandEdges bandEdgesOf(InsulatorLayer layer) {
+        Require.nonNull("insulator layer", layer);
+        WurtziteMaterial gan = parameters.binary(org.wurtzkit.material.Binary.GAN);
+        double ec = bandAlignment.edges(parameters, gan, temperatureK).conductionEv()
+                + layer.insulator().conductionBandOffsetToGaNEv();
+        return new BandEdges(ec, ec - layer.insulator().bandGapEv());
+    }
+
+    /**
+     * {@return the fixed charges and interface states on the top faces of nitride layers,
+     * shallowest first, with the gap their states span}
+     */
+    public List<PlacedSheet> interfaceSheets() {
+        return sheets;
+    }
+
+    /**
+     * The same stack with every sheet's interface states replaced by a fixed charge: the sheet's
+     * fixed charge plus the given charge of its states. This is how states too slow to follow a
+     * signal are described (the high-frequency limit of a C-V measurement): their occupancy stays
+     * at its value at the operating point.
+     *
+     * @param stateCharge the charge of the states of each sheet of {@link #interfaceSheets()}, in
+     *                    that order (C/m^2), e.g. from a solution at the operating point
+     * @return the stack with frozen states
+     */
+    public Structure withInterfaceStatesFrozen(double[] stateCharge) {
+        Require.nonNull("frozen interface-state charges", stateCharge);
+        if (stateCharge.length != sheets.size()) {
+            throw Require.invalid("number of frozen interface-state charges", stateCharge.length,
+                    "[" + sheets.size() + ", " + sheets.size() + "] (one per interface sheet)");
+        }
+        Require.allFinite("frozen interface-state charges (C/m^2)", stateCharge, stateCharge.length);
+        Builder b = toBuilder();
+        b.sheets.clear();
+        int n = bottomUp.size();
+        int idx = 0;
+        for (int fromTop = 0; fromTop < n; fromTop++) {
+            List<InterfaceSheet> l = sheetsBottomUp.get(n - 1 - fromTop);
+            if (l == null) {
+                continue;
+            }
+            List<InterfaceSheet> frozen = new ArrayList<>();
+            for (InterfaceSheet sh : l) {
+                double extra = stateCharge[idx++] / org.wurtzkit.units.Constants.ELEMENTARY_CHARGE;
+                frozen.add(new InterfaceSheet(sh.fixedChargePerM2() + extra, List.of()));
+            }
+            b.sheets.put(n - 1 - fromTop, frozen);
+        }
+        return b.build();
     }
 
     /** {@return the layers in growth order, bottom (first grown) first} */
@@ -343,22 +517,32 @@ public final class Structure {
         return totalThickness;
     }
 
-    /** {@return depths of the internal interfaces below the surface, shallowest first (m)} */
+    /**
+     * {@return depths of the internal interfaces below the surface, shallowest first (m), those of
+     * the gate stack (insulator/insulator and insulator/nitride) included}
+     */
     public double[] interfaceDepths() {
-        double[] d = new double[states.size() - 1];
-        for (int i = 0; i < d.length; i++) {
-            d[i] = states.get(i).depthBottom();
+        int g = gateStack.size();
+        double[] d = new double[g + states.size() - 1];
+        double acc = 0;
+        for (int i = 0; i < g; i++) {
+            acc += gateStack.get(i).thickness();
+            d[i] = i == g - 1 ? gateStackThickness : acc;
+        }
+        for (int i = 0; i + 1 < states.size(); i++) {
+            d[g + i] = states.get(i).depthBottom();
         }
         return d;
     }
 
     /**
-     * @param depth a depth in [0, total thickness] (m)
+     * @param depth a depth in [gate-stack thickness, total thickness] (m): inside the nitride
+     *              layers (without a gate stack, [0, total thickness])
      * @return the index from the top of the layer containing it (the upper layer at an interface);
      *         O(log layers) by binary search
      */
     public int layerIndexAt(double depth) {
-        Require.inRange("depth (m)", depth, 0, totalThickness);
+        Require.inRange("depth (m)", depth, gateStackThickness, totalThickness);
         // the first layer whose bottom is at or below the depth; bottoms never decrease
         int lo = 0;
         int hi = bottoms.length - 1;
@@ -376,7 +560,8 @@ public final class Structure {
     /**
      * The state at a depth; inside a graded layer the composition is interpolated linearly.
      *
-     * @param depth a depth in [0, total thickness] (m); at an interface the upper layer is used
+     * @param depth a depth in the nitride layers, [gate-stack thickness, total thickness] (m); at an
+     *              interface the upper layer is used
      * @return material, strain and polarization there
      */
     public PointState pointAt(double depth) {
@@ -394,12 +579,23 @@ public final class Structure {
 
     /**
      * The bound sheet charges at the internal interfaces, shallowest first. Their sum equals
-     * P_z(bottom layer) - P_z(top layer) minus any bound charge inside graded layers.
+     * P_z(bottom layer) - P_z(top layer) minus any bound charge inside graded layers. An insulator
+     * has no polarization, so at an insulator/nitride interface sigma = P_z(nitride) - 0, as at a
+     * free surface, and between two insulators sigma = 0; with a gate stack these interfaces come
+     * first.
      *
      * @return sigma = P_z(lower) - P_z(upper) at every interface
      */
     public List<InterfaceCharge> interfaceCharges() {
         List<InterfaceCharge> out = new ArrayList<>();
+        double acc = 0;
+        for (int i = 0; i < gateStack.size(); i++) {
+            acc += gateStack.get(i).thickness();
+            boolean last = i == gateStack.size() - 1;
+            out.add(new InterfaceCharge(last ? gateStackThickness : acc, gateStack.get(i).name(),
+                    last ? states.get(0).layer().name() : gateStack.get(i + 1).name(),
+                    last ? states.get(0).top().alongGrowth() : 0));
+        }
         for (int i = 0; i + 1 < states.size(); i++) {
             LayerState up = states.get(i);
             LayerState low = states.get(i + 1);
@@ -409,8 +605,14 @@ public final class Structure {
         return Collections.unmodifiableList(out);
     }
 
-    /** {@return the bound charge at the top surface, sigma = P_z(top layer) - 0} */
+    /**
+     * {@return the bound charge at the top surface, sigma = P_z(top layer) - 0; zero on top of a gate
+     * stack (an insulator has no polarization)}
+     */
     public InterfaceCharge surfaceCharge() {
+        if (!gateStack.isEmpty()) {
+            return new InterfaceCharge(0, "vacuum", gateStack.get(0).name(), 0);
+        }
         LayerState t = states.get(0);
         return new InterfaceCharge(0, "vacuum", t.layer().name(), t.top().alongGrowth());
     }
@@ -465,7 +667,15 @@ public final class Structure {
                 .append(polarity == Polarity.METAL_FACE ? "metal-face" : "N-face").append(", ")
                 .append(Decimals.format(temperatureK, "K")).append("), top down:\n");
         sb.append("  top: ").append(top).append('\n');
+        for (InsulatorLayer il : gateStack) {
+            sb.append("  ").append(il).append('\n');
+        }
         for (LayerState s : states) {
+            for (PlacedSheet ps : sheets) {
+                if (ps.nitrideIndex() == s.indexFromTop()) {
+                    sb.append("  ").append(ps).append('\n');
+                }
+            }
             sb.append("  ").append(s.layer()).append('\n');
         }
         sb.append("  bottom: ").append(bottom);
@@ -490,6 +700,8 @@ public final class Structure {
         private TopBoundary top;
         private BottomBoundary bottom = new BottomBoundary.ZeroField();
         private CriticalThicknessModel criticalThicknessModel = CriticalThicknessModel.C_PLANE_WURTZITE;
+        private final List<InsulatorLayer> deposited = new ArrayList<>(); // bottom-up
+        private final java.util.Map<Integer, List<InterfaceSheet>> sheets = new java.util.TreeMap<>();
 
         private Builder(ParameterSet parameters) {
             this.parameters = Require.nonNull("parameter set", parameters);
@@ -502,7 +714,48 @@ public final class Structure {
          * @return this builder
          */
         public Builder grow(Layer layer) {
-            layers.add(Require.nonNull("layer", layer));
+            Require.nonNull("layer", layer);
+            if (!deposited.isEmpty()) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "nitride layer \"" + layer.name()
+                        + "\" cannot be grown on the amorphous insulator \"" + deposited.get(deposited.size() - 1).name()
+                        + "\": epitaxy needs a crystal below; grow every nitride layer before deposit(...)");
+            }
+            layers.add(layer);
+            return this;
+        }
+
+        /**
+         * Deposits an amorphous insulator on top of what was grown or deposited so far (gate stacks:
+         * SiO2, SiN, Al2O3, HfO2, or several of them). Nitride layers cannot be grown afterwards.
+         *
+         * @param layer the insulator layer
+         * @return this builder
+         */
+        public Builder deposit(InsulatorLayer layer) {
+            Require.nonNull("insulator layer", layer);
+            if (layers.isEmpty()) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "insulator \"" + layer.name()
+                        + "\" cannot be the bottom of the stack: grow at least one nitride layer before deposit(...)");
+            }
+            deposited.add(layer);
+            return this;
+        }
+
+        /**
+         * Puts a fixed charge and/or interface states on the top face of the nitride layer grown last:
+         * the interface with the next layer or insulator, or the free surface.
+         *
+         * @param sheet the charge
+         * @return this builder
+         */
+        public Builder sheetOnTop(InterfaceSheet sheet) {
+            Require.nonNull("interface sheet", sheet);
+            if (layers.isEmpty() || !deposited.isEmpty()) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "an interface sheet sits on the top face of"
+                        + " a nitride layer: call sheetOnTop(...) right after grow(...) of that layer, before any"
+                        + " deposit(...)" + (layers.isEmpty() ? " (no layer grown yet)" : ""));
+            }
+            sheets.computeIfAbsent(layers.size() - 1, k -> new ArrayList<>()).add(sheet);
             return this;
         }
 
@@ -646,6 +899,12 @@ public final class Structure {
             if (top == null) {
                 throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE,
                         "no top boundary: call top(TopBoundary.schottky(...)) or top(TopBoundary.freeSurface(...))");
+            }
+            if (!deposited.isEmpty() && top instanceof TopBoundary.FreeSurface fs && fs.donorDensityPerM2() > 0) {
+                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "the free surface above the insulator \""
+                        + deposited.get(deposited.size() - 1).name() + "\" has surface donors ("
+                        + fs.donorDensityPerM2() + " m^-2), which describe a nitride surface: put states at the"
+                        + " nitride's top face with sheetOnTop(...) and use TopBoundary.freeSurface(0, 0)");
             }
             return new Structure(this);
         }

@@ -15,7 +15,9 @@ public sealed interface TopBoundary permits TopBoundary.Schottky, TopBoundary.Fr
 
     /**
      * A Schottky (metal) gate: the conduction band at the surface is pinned at phi_B above the
-     * metal's Fermi level.
+     * metal's Fermi level. On a gate stack the surface is the top insulator's, so phi_B is the
+     * metal's Fermi level below that insulator's conduction band (work function minus electron
+     * affinity of the insulator, by the electron-affinity rule).
      *
      * @param barrierHeightEv phi_B (eV), in [0, 6]
      * @param biasV           gate bias with respect to the bottom contact (V), in [-100, 20]

@@ -3,6 +3,10 @@
  * {@link org.wurtzkit.structure.Layer}s bottom-up (uniform, graded or custom
  * {@link org.wurtzkit.structure.LayerMaterial}; shallow {@link org.wurtzkit.structure.Dopant}s,
  * {@link org.wurtzkit.structure.DeltaDoping} sheets and {@link org.wurtzkit.structure.DeepLevel}s),
+ * deposits an optional gate stack of amorphous {@link org.wurtzkit.structure.InsulatorLayer}s on
+ * top (no nitride may be grown on them; no polarization, no strain, no carriers), puts
+ * {@link org.wurtzkit.structure.InterfaceSheet}s (fixed charge and
+ * {@link org.wurtzkit.structure.InterfaceStates}) on the top faces of nitride layers,
  * closes it with a {@link org.wurtzkit.structure.TopBoundary} (Schottky gate or free surface) and a
  * {@link org.wurtzkit.structure.BottomBoundary}, and fixes the parameter set, the in-plane reference
  * lattice, polarity, polarization model and temperature. The built {@code Structure} is immutable

@@ -42,10 +42,65 @@ public final class CurvesPlot {
      * @return the plot
      */
     public static CurvesPlot of(String title, String xTitle, String yTitle) {
-        XYChart c = Style.xy(WIDTH, HEIGHT, Require.nonNull("title", title), Require.nonNull("x title", xTitle),
+        return of(title, xTitle, yTitle, WIDTH, HEIGHT);
+    }
+
+    /**
+     * An empty chart of a given size, with its legend inside the plot area (for panels side by side).
+     *
+     * @param title    the chart title
+     * @param xTitle   the x-axis title, with unit
+     * @param yTitle   the y-axis title, with unit
+     * @param widthPx  width (pixels), in [200, 4000]
+     * @param heightPx height (pixels), in [200, 4000]
+     * @return the plot
+     */
+    public static CurvesPlot of(String title, String xTitle, String yTitle, int widthPx, int heightPx) {
+        Require.inRange("width (px)", widthPx, 200, 4000);
+        Require.inRange("height (px)", heightPx, 200, 4000);
+        XYChart c = Style.xy(widthPx, heightPx, Require.nonNull("title", title), Require.nonNull("x title", xTitle),
                 Require.nonNull("y title", yTitle));
-        c.getStyler().setLegendPosition(Styler.LegendPosition.OutsideS);
+        c.getStyler().setLegendPosition(widthPx == WIDTH && heightPx == HEIGHT ? Styler.LegendPosition.OutsideS
+                : Styler.LegendPosition.InsideNW);
         return new CurvesPlot(c);
+    }
+
+    /**
+     * Several plots side by side in one figure.
+     *
+     * @param plots the plots, left to right
+     * @return the figure
+     */
+    public static Figure row(CurvesPlot... plots) {
+        java.util.List<XYChart> charts = new java.util.ArrayList<>();
+        for (CurvesPlot p : Require.nonNull("plots", plots)) {
+            charts.add(Require.nonNull("plot", p).chart);
+        }
+        return Figure.row(charts);
+    }
+
+    /** {@return this plot with the y axis starting at 0} */
+    public CurvesPlot yFromZero() {
+        chart.getStyler().setYAxisMin(0.0);
+        return this;
+    }
+
+    /**
+     * Adds a dashed curve without markers, in grey (a reference case, e.g. without a mechanism).
+     *
+     * @param name the legend entry
+     * @param x    the x values
+     * @param y    the y values, one per x
+     * @return this plot
+     */
+    public CurvesPlot dashed(String name, double[] x, double[] y) {
+        Require.nonNull("x values", x);
+        Require.nonNull("y values", y);
+        if (x.length != y.length || x.length == 0) {
+            throw Require.invalid("y values", y.length + " values", "one per x value (" + x.length + "), at least one");
+        }
+        Style.line(chart, Require.nonNull("name", name), x, y, Style.GREY, Style.DASHED);
+        return this;
     }
 
     /** {@return this plot with a logarithmic x axis} */

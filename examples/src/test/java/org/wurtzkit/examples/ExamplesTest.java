@@ -183,6 +183,31 @@ class ExamplesTest {
         }
     }
 
+    /**
+     * The MIS-HEMT example: its plot and tables, and the sign of dV_th/dt_ox that Gauss's law gives,
+     * -(P_z(GaN) + e Q_f)/eps_ox: rising with thickness when the fixed charge is below |P_z(GaN)|/e,
+     * falling above it (derived; the slope itself is checked in MisHemtTest).
+     */
+    @Test
+    void misHemt(@TempDir Path out) throws IOException {
+        MisHemtExample.Result r = MisHemtExample.run(out, MisHemtExample.Settings.quick(), log);
+        Outputs.assertPng(file(r, "mis-hemt.png"), 2 * MisHemtExample.PANEL_WIDTH, MisHemtExample.PANEL_HEIGHT);
+        List<CSVRecord> th = csv(r, "mis-hemt-threshold.csv", "insulator_thickness_nm", "fixed_charge_cm^-2",
+                "threshold_voltage_V");
+        assertEquals(2 * MisHemtExample.Settings.quick().thicknessesNm().length, th.size());
+        List<CSVRecord> cv = csv(r, "mis-hemt-cv.csv", "gate_bias_V", "capacitance_no_states_uF/cm^2",
+                "capacitance_states_quasi_static_uF/cm^2", "capacitance_states_high_frequency_uF/cm^2");
+        assertEquals(r.cv().get(0).biasV().length, cv.size());
+        double pzGaN = MisHemtExample.misHemt(1e13, null, 10).layerStates().get(2).top().alongGrowth();
+        for (int c = 0; c < 2; c++) {
+            double net = pzGaN + org.wurtzkit.units.Constants.ELEMENTARY_CHARGE
+                    * org.wurtzkit.units.Units.perCm2ToPerM2(MisHemtExample.FIXED_CHARGES[c]);
+            double[] v = r.thresholdV()[c];
+            assertTrue(Math.signum(v[v.length - 1] - v[0]) == -Math.signum(net),
+                    "Q_f = " + MisHemtExample.FIXED_CHARGES[c] + ": " + java.util.Arrays.toString(v));
+        }
+    }
+
     @Test
     void gateSweep(@TempDir Path out) throws IOException {
         GateSweepExample.Result r = GateSweepExample.run(out, GateSweepExample.Settings.quick(), log);

@@ -226,6 +226,15 @@ public final class ChargeBalanceModel {
         PointState ch = channel.top();
         double pCh = ch.alongGrowth();
         Builder b = builder().schottkyBarrierEv(gate.barrierHeightEv()).gateBias(gate.biasV());
+        if (!structure.interfaceSheets().isEmpty()) {
+            throw new InvalidParameterException("number of interface sheets (fixed charge, interface states)",
+                    Integer.toString(structure.interfaceSheets().size()),
+                    "[0, 0] (the analytic model holds polarization charge only; use the self-consistent solver)");
+        }
+        for (org.wurtzkit.structure.InsulatorLayer il : structure.gateStack()) {
+            // an insulator: no polarization, so its sheet relative to the channel is P_z(channel) - 0
+            b.addLayer(new BarrierLayer(il.name(), il.thickness(), il.insulator().relativePermittivity(), pCh));
+        }
         for (int i = 0; i < states.size() - 1; i++) {
             LayerState s = states.get(i);
             Layer l = s.layer();
@@ -241,7 +250,8 @@ public final class ChargeBalanceModel {
             b.addLayer(new BarrierLayer(l.name(), l.thickness(), s.top().material().permittivityStatic(),
                     pCh - s.top().alongGrowth()));
         }
-        double ecTop = structure.bandEdgesAt(states.get(0).top()).conductionEv();
+        double ecTop = structure.gateStack().isEmpty() ? structure.bandEdgesAt(states.get(0).top()).conductionEv()
+                : structure.bandEdgesOf(structure.gateStack().get(0)).conductionEv();
         double ecCh = structure.bandEdgesAt(ch).conductionEv();
         EffectiveMasses m = ch.material().masses();
         return b.surfaceOffsetEv(ecTop - ecCh)

@@ -93,9 +93,46 @@ final class ChargeModel {
                     dqi += box * cell.dp;
                 }
             }
-            q[i] = Device.Q * qi;
+            q[i] = Device.Q * (qi + d.fixedSheet[i]);
             dq[i] = Device.Q * dqi;
         }
+        for (int k = 0; k < d.sheetNode.length; k++) {
+            int i = d.sheetNode[k];
+            q[i] += Device.Q * stateCharge(d, k, phi[i]);
+            dq[i] += Device.Q * stateChargeDerivative(d, k, phi[i]);
+        }
+    }
+
+    /**
+     * Interface states of sheet k: donor-like states are +e when empty (1 - f), acceptor-like states
+     * -e when filled (f), with f the Fermi-Dirac occupancy at the sheet's Fermi level.
+     *
+     * @param d       the device
+     * @param k       the sheet of states
+     * @param phiNode the potential at its node (V)
+     * @return the states' charge divided by e (m^-2), signed
+     */
+    static double stateCharge(Device d, int k, double phiNode) {
+        double ecSheet = d.ec[d.sheetNode[k]] - phiNode; // the nitride's E_c: the cell below the node
+        double invVt = 1 / d.vt;
+        double sum = 0;
+        for (int j = d.sheetStart[k]; j < d.sheetStart[k + 1]; j++) {
+            double f = 1 / (1 + Math.exp((ecSheet - d.stateBelowEc[j] - d.sheetFermiEv[k]) * invVt));
+            sum += d.stateDonorLike[j] ? d.stateWeight[j] * (1 - f) : -d.stateWeight[j] * f;
+        }
+        return sum;
+    }
+
+    /** @return d(stateCharge)/dphi (m^-2 per V): with dx/dphi = -1/kT and df/dx = -f(1 - f), both kinds lose charge as phi rises */
+    static double stateChargeDerivative(Device d, int k, double phiNode) {
+        double ecSheet = d.ec[d.sheetNode[k]] - phiNode;
+        double invVt = 1 / d.vt;
+        double sum = 0;
+        for (int j = d.sheetStart[k]; j < d.sheetStart[k + 1]; j++) {
+            double f = 1 / (1 + Math.exp((ecSheet - d.stateBelowEc[j] - d.sheetFermiEv[k]) * invVt));
+            sum -= d.stateWeight[j] * f * (1 - f) * invVt;
+        }
+        return sum;
     }
 
     private double gapAt(int i) {
@@ -179,8 +216,8 @@ final class ChargeModel {
      * @param holes     holes, the classical part outside windows plus the hole subbands inside
      * @param donors    ionised donors, including empty donor-like traps
      * @param acceptors ionised acceptors, including filled acceptor-like traps
-     * @param boxCharge free charge per area in each node's box, delta sheets and surface states
-     *                  included (C/m^2)
+     * @param boxCharge free charge per area in each node's box, delta sheets, surface states, fixed
+     *                  interface charge and interface states included (C/m^2)
      */
     record Report(double[] electrons, double[] holes, double[] donors, double[] acceptors, double[] boxCharge) {
     }

@@ -66,6 +66,19 @@ final class Device {
     final double[] deltaEnergy;
     final boolean[] deltaIsDonor;
 
+    // fixed interface charge per node (m^-2, signed) and interface states, flattened: state j of
+    // sheet k (k in [0, sheetNode.length)) is at index sheetStart[k] <= j < sheetStart[k + 1]
+    final double[] fixedSheet;
+    final int[] sheetNode;
+    final int[] sheetStart;
+    final int[] sheetOwner; // index of the placed sheet (Structure.interfaceSheets()) that holds sheet k
+    final double[] sheetFermiEv; // Fermi level that occupies the sheet's states (eV)
+    final double[] stateBelowEc; // e: energy below the nitride's E_c at the sheet (eV)
+    final double[] stateWeight; // states in the quadrature interval (m^-2)
+    final boolean[] stateDonorLike;
+    /** Whether cell k is an insulator of the gate stack (no carriers, no dopants). */
+    final boolean[] insulatorCell;
+
     // boundaries
     final boolean topDirichlet;
     final double phiTop;
@@ -97,7 +110,7 @@ final class Device {
         this.vt = Constants.thermalVoltage(s.temperatureK());
         this.kT = Constants.BOLTZMANN * s.temperatureK();
 
-        List<double[]> windows = resolveWindows(s, o.quantumWindows());
+        List<double[]> windows = clipToNitride(resolveWindows(s, o.quantumWindows()), s.gateStackThickness());
         TreeSet<Double> breaks = new TreeSet<>();
         breaks.add(0.0);
         breaks.add(s.totalThickness());
@@ -135,12 +148,37 @@ final class Device {
         holeMassXY = new double[3][cells];
         holeOffset = new double[3][cells];
         layerOfCell = new int[cells];
+        insulatorCell = new boolean[cells];
         double t = s.temperatureK();
         WurtziteMaterial lastMaterial = null;
         ValenceBands lastBands = null;
         double lastNv = 0;
+        int nitrideLayers = s.layerStates().size();
+        double gateT = s.gateStackThickness();
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
+            if (mid < gateT) {
+                // an amorphous insulator: permittivity, band edges from its offset to GaN, no
+                // polarization, no carriers (nc = nv = 0), no dopants (an empty species row)
+                org.wurtzkit.structure.InsulatorLayer il = s.insulatorAt(mid);
+                insulatorCell[k] = true;
+                layerOfCell[k] = nitrideLayers + s.gateStack().indexOf(il);
+                eps[k] = il.insulator().relativePermittivity() * Constants.VACUUM_PERMITTIVITY;
+                px[k] = 0;
+                BandEdges edges = s.bandEdgesOf(il);
+                ec[k] = edges.conductionEv();
+                ev[k] = edges.valenceEv();
+                nc[k] = 0;
+                nv[k] = 0;
+                massZ[k] = 1; // never used: quantum windows stop at the insulator
+                massXY[k] = 1;
+                for (int b = 0; b < 3; b++) {
+                    holeMassZ[b][k] = 1; // never used either: no holes in an insulator
+                    holeMassXY[b][k] = 1;
+                    holeOffset[b][k] = 0;
+                }
+                continue;
+            }
             int li = s.layerIndexAt(mid);
             layerOfCell[k] = li;
             PointState p = s.pointAt(mid);
@@ -179,10 +217,11 @@ final class Device {
 
         List<LayerState> states = s.layerStates();
         int nl = states.size();
-        speciesDensity = new double[nl][];
-        speciesEnergy = new double[nl][];
-        speciesDegeneracy = new double[nl][];
-        speciesKind = new ChargeSpecies[nl][];
+        int rows = nl + s.gateStack().size(); // one empty row per insulator
+        speciesDensity = new double[rows][0];
+        speciesEnergy = new double[rows][0];
+        speciesDegeneracy = new double[rows][0];
+        speciesKind = new ChargeSpecies[rows][0];
         for (int li = 0; li < nl; li++) {
             Layer l = states.get(li).layer();
             int ns = l.dopants().size() + l.deepLevels().size();
@@ -234,6 +273,42 @@ final class Device {
             }
         }
 
+        fixedSheet = new double[n];
+        List<org.wurtzkit.structure.PlacedSheet> placed = s.interfaceSheets();
+        int nk = 0;
+        for (org.wurtzkit.structure.PlacedSheet ps : placed) {
+            nk += ps.sheet().states().size();
+        }
+        sheetNode = new int[nk];
+        sheetStart = new int[nk + 1];
+        sheetFermiEv = new double[nk];
+        sheetOwner = new int[nk];
+        int owner = 0;
+        List<double[]> quad = new ArrayList<>(); // {e, weight, donor ? 1 : 0}
+        int k = 0;
+        for (org.wurtzkit.structure.PlacedSheet ps : placed) {
+            int node = mesh.nearestNode(ps.depth());
+            fixedSheet[node] += ps.sheet().fixedChargePerM2();
+            for (org.wurtzkit.structure.InterfaceStates is : ps.sheet().states()) {
+                sheetNode[k] = node;
+                sheetStart[k] = quad.size();
+                sheetFermiEv[k] = interfaceStateFermiLevelEv(ps);
+                sheetOwner[k] = owner;
+                InterfaceStateQuadrature.append(is, ps.nitrideGapEv(), kT / Q, quad);
+                k++;
+            }
+            owner++;
+        }
+        sheetStart[nk] = quad.size();
+        stateBelowEc = new double[quad.size()];
+        stateWeight = new double[quad.size()];
+        stateDonorLike = new boolean[quad.size()];
+        for (int j = 0; j < quad.size(); j++) {
+            stateBelowEc[j] = quad.get(j)[0];
+            stateWeight[j] = quad.get(j)[1];
+            stateDonorLike[j] = quad.get(j)[2] > 0;
+        }
+
         TopBoundary top = s.top();
         if (top instanceof TopBoundary.Schottky sch) {
             topDirichlet = true;
@@ -259,9 +334,10 @@ final class Device {
         for (int j = 0; j < sheets.size(); j++) {
             if (sheets.get(j).sigma() > 0) {
                 chDepth = sheets.get(j).depth();
-                // interface j lies between layers j (above) and j + 1 (below), top-down
+                // the cells just above and below the interface name its two layers (a gate stack's
+                // insulators come first in the interface list, so the list index is no layer index)
                 int node = mesh.nearestNode(chDepth);
-                chLayer = ec[node] < ec[node - 1] ? j + 1 : j;
+                chLayer = ec[node] < ec[node - 1] ? layerOfCell[node] : layerOfCell[node - 1];
             }
         }
         channelDepth = chDepth;
@@ -272,7 +348,7 @@ final class Device {
             uniform &= v == 0;
         }
         quasiFermiUniform = uniform;
-        deepFollowHoles = new boolean[nl];
+        deepFollowHoles = new boolean[rows]; // insulator rows hold no deep levels: false
         for (int li = 0; li < nl; li++) {
             double donors = 0;
             double acceptors = 0;
@@ -327,6 +403,12 @@ final class Device {
         for (int k = 0; k < cells; k++) {
             efn[k] = 0;
             contactN[k] = FermiContact.CHANNEL;
+            if (insulatorCell[k]) {
+                // no carriers in an insulator (nc = nv = 0): the levels there are never used
+                efp[k] = 0;
+                contactP[k] = FermiContact.CHANNEL;
+                continue;
+            }
             double bottomOfLayer = states.get(layerOfCell[k]).depthBottom();
             boolean gateSide = bottomOfLayer <= gateSideBottom * (1 + 1e-12);
             efp[k] = gateSide ? gateLevel : 0;
@@ -366,6 +448,9 @@ final class Device {
             boolean electrons = rule.carrier() == Carrier.ELECTRONS;
             int[] owner = electrons ? ruleN : ruleP;
             for (int k = 0; k < cells; k++) {
+                if (insulatorCell[k]) {
+                    continue;
+                }
                 boolean covers;
                 if (rule.region() instanceof QuasiFermiLevels.Region.Layer l) {
                     covers = states.get(layerOfCell[k]).layer().name().equals(l.name());
@@ -392,6 +477,36 @@ final class Device {
                 }
             }
         }
+    }
+
+    /**
+     * The Fermi level that occupies the interface states of one sheet (eV, on the solver's scale with
+     * the bottom contact at 0). The one place where that choice is made: today every sheet takes the
+     * bottom (channel) contact's electron Fermi level, 0 eV. States under an insulator exchange
+     * electrons with the nitride, not with the gate metal, and a free surface has no contact of its
+     * own, so the channel's level is the right one in equilibrium; a solver with per-region
+     * quasi-Fermi levels should return the level of the region the sheet's nitride belongs to.
+     */
+    static double interfaceStateFermiLevelEv(org.wurtzkit.structure.PlacedSheet sheet) {
+        return 0;
+    }
+
+    /**
+     * Windows never reach into the gate stack: a top above the insulator's bottom is moved down to
+     * it (a hard wall; with conduction-band offsets of 2 eV and more the wave functions enter an
+     * insulator by a few angstroms only), and a window inside the insulator is dropped.
+     */
+    private static List<double[]> clipToNitride(List<double[]> windows, double gateT) {
+        if (gateT == 0) {
+            return windows;
+        }
+        List<double[]> out = new ArrayList<>();
+        for (double[] w : windows) {
+            if (w[1] > gateT) {
+                out.add(new double[] {Math.max(w[0], gateT), w[1]});
+            }
+        }
+        return out;
     }
 
     private static double[] mergeClose(TreeSet<Double> breaks, double tol) {

@@ -28,6 +28,11 @@ import org.wurtzkit.warnings.WarningKind;
  * ({@link #electricField()}) have one value per interval between nodes, at {@link #cellMidpoints()}.
  */
 public final class Solution {
+    /** Depth below a gate stack within which holes are summed for the warning of {@link #toString()} (m). */
+    static final double HOLE_WATCH_DEPTH = 5e-9;
+    /** Hole sheet under a gate stack above which {@link #toString()} warns (m^-2): 1e10 cm^-2. */
+    static final double HOLE_WARNING_PER_M2 = 1e14;
+
     /** Subbands listed one per line by {@link #toString()}; the rest are summed on one line. */
     private static final int SUBBANDS_SHOWN = 4;
 
@@ -89,6 +94,8 @@ public final class Solution {
      * that a Hall or C-V measurement resolves (common practice, no source).
      */
     public static final double SHEET_REPORT_THRESHOLD = 1e12;
+    private final double[] interfaceStateCharge;
+    private final double holesUnderInsulator;
 
     /**
      * Copies out what one solve computed: the potential and subbands are read, never kept; the
@@ -118,6 +125,10 @@ public final class Solution {
             ec[i] = d.ec[k] - phi[i];
             ev[i] = d.ev[k] - phi[i];
         }
+        interfaceStateCharge = new double[d.structure.interfaceSheets().size()];
+        for (int k = 0; k < d.sheetNode.length; k++) {
+            interfaceStateCharge[d.sheetOwner[k]] += Device.Q * ChargeModel.stateCharge(d, k, phi[d.sheetNode[k]]);
+        }
         n = report.electrons();
         p = report.holes();
         donors = report.donors();
@@ -137,6 +148,16 @@ public final class Solution {
             scale += Math.abs(q[i]);
         }
         electronSheet = eSheet;
+        double gateT = d.structure.gateStackThickness();
+        double under = 0;
+        if (gateT > 0) {
+            for (int i = 0; i < nn; i++) {
+                if (d.x[i] >= gateT && d.x[i] <= gateT + HOLE_WATCH_DEPTH) {
+                    under += p[i] * d.box(i);
+                }
+            }
+        }
+        holesUnderInsulator = under;
         holeSheet = hSheet;
         midpoints = new double[nn - 1];
         field = new double[nn - 1];
@@ -247,7 +268,14 @@ public final class Solution {
 
     private List<InterfaceEdges> readInterfaces(Device d, double[] phi) {
         double[] at = structure.interfaceDepths();
-        List<org.wurtzkit.structure.LayerState> layers = structure.layerStates();
+        // the layers top-down, the gate stack's insulators first: interface j lies between names j and j + 1
+        List<String> names = new ArrayList<>();
+        for (org.wurtzkit.structure.InsulatorLayer il : structure.gateStack()) {
+            names.add(il.name());
+        }
+        for (org.wurtzkit.structure.LayerState st : structure.layerStates()) {
+            names.add(st.layer().name());
+        }
         List<InterfaceEdges> out = new ArrayList<>(at.length);
         for (int j = 0; j < at.length; j++) {
             int i = java.util.Arrays.binarySearch(depth, at[j]);
@@ -256,7 +284,7 @@ public final class Solution {
                 i = ins == 0 ? 0 : ins >= depth.length ? depth.length - 1
                         : at[j] - depth[ins - 1] <= depth[ins] - at[j] ? ins - 1 : ins;
             }
-            out.add(new InterfaceEdges(j, depth[i], layers.get(j).layer().name(), layers.get(j + 1).layer().name(),
+            out.add(new InterfaceEdges(j, depth[i], names.get(j), names.get(j + 1),
                     d.ec[i - 1] - phi[i], d.ec[i] - phi[i], d.ev[i - 1] - phi[i], d.ev[i] - phi[i]));
         }
         return List.copyOf(out);
@@ -466,6 +494,9 @@ public final class Solution {
                 continue;
             }
             int li = d.layerOfCell[Math.min(i, nn - 2)];
+            if (li >= nl) {
+                continue; // an insulator cell of the gate stack: no carriers there
+            }
             double w = d.box(i);
             for (int c = 0; c < 2; c++) {
                 double v = (c == 0 ? n[i] : p[i]) * w;
@@ -786,6 +817,20 @@ public final class Solution {
         return sheets;
     }
 
+    /**
+     * {@return the charge of the interface states of each sheet of
+     * {@link Structure#interfaceSheets()}, in that order (C/m^2, signed; the sheets' fixed charges
+     * not included)}
+     */
+    public double[] interfaceStateCharge() {
+        return interfaceStateCharge.clone();
+    }
+
+    /** {@return holes within 5 nm below the gate stack (m^-2); 0 without a gate stack} */
+    public double holesUnderGateStack() {
+        return holesUnderInsulator;
+    }
+
     /** {@return sheet charge on the gate metal (C/m^2); 0 for a free surface} */
     public double gateCharge() {
         return gateCharge;
@@ -904,6 +949,11 @@ public final class Solution {
         }
         sb.append("  ").append(record);
         sb.append(Warning.lines(warnings));
+        if (holesUnderInsulator > HOLE_WARNING_PER_M2) {
+            sb.append("\n  warning: ").append(Decimals.format(Units.perM2ToPerCm2(holesUnderInsulator), "cm^-2"))
+                    .append(" of holes within 5 nm under the gate stack; their supply is set by the hole quasi-Fermi")
+                    .append(" level option, which an insulator makes uncertain");
+        }
         return sb.toString();
     }
 }

@@ -36,6 +36,18 @@
  * Every carrier density uses its own carrier's quasi-Fermi level in its region
  * ({@link org.wurtzkit.solvers.sp.QuasiFermiLevels}); the solution groups the carriers into sheets
  * ({@link org.wurtzkit.solvers.sp.CarrierSheet}) and reports the channel 2DEG apart.
+ * <h2>Gate stacks</h2>
+ * Insulator cells of a gate stack ({@code Structure.gateStack()}) take the insulator's permittivity
+ * and band edges (offset to GaN), no polarization, no carriers (N_c = N_v = 0) and no dopants;
+ * quantum windows stop at the insulator (a hard wall). The fixed charge of every interface sheet
+ * is a nodal charge; interface states are integrated over the gap (package-private
+ * {@code InterfaceStateQuadrature}) and occupied from the Fermi level chosen in one package-private
+ * method, {@code Device.interfaceStateFermiLevelEv}: today the channel's electron level, 0 eV, for
+ * every sheet. Holes under an insulator follow {@link org.wurtzkit.solvers.sp.QuasiFermiLevels} like
+ * holes anywhere else, which is shaky there (the insulator cuts them off from the gate): a
+ * structure whose barrier face carries a strongly negative net sheet may show a hole layer under the
+ * insulator.
+ * <p>
  * A sweep starts each point from a potential extrapolated through the last converged solutions
  * ({@link org.wurtzkit.solvers.sp.PotentialPredictor}),
  * which skips the classical start; the convergence test is unchanged, so the start never moves the

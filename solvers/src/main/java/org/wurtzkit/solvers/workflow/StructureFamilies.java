@@ -1,6 +1,8 @@
 package org.wurtzkit.solvers.workflow;
 
+import java.util.ArrayList;
 import java.util.List;
+import org.wurtzkit.structure.InsulatorLayer;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.Composition;
@@ -102,8 +104,97 @@ public final class StructureFamilies {
         return found;
     }
 
-    /** The template with layer {@code index} (bottom-up) replaced, or removed when {@code layer} is null. */
+    /**
+     * The thickness of one insulator of the gate stack, in nm (parameter
+     * {@code <insulator>_thickness}, unit {@code nm}), everything else kept.
+     *
+     * @param template      a template with a gate stack
+     * @param insulatorName the insulator layer to vary
+     * @return the family
+     */
+    public static StructureFamily insulatorThicknessNm(Structure template, String insulatorName) {
+        Require.nonNull("template structure", template);
+        Require.nonNull("insulator name", insulatorName);
+        List<InsulatorLayer> stack = template.gateStack();
+        int found = -1;
+        int count = 0;
+        for (int i = 0; i < stack.size(); i++) {
+            if (stack.get(i).name().equals(insulatorName)) {
+                found = i;
+                count++;
+            }
+        }
+        if (count != 1) {
+            throw new InvalidParameterException("number of insulator layers named \"" + insulatorName + "\"",
+                    Integer.toString(count), "[1, 1] (insulators of the template: "
+                            + stack.stream().map(InsulatorLayer::name).toList() + ")");
+        }
+        int index = found;
+        Column c = Column.of(insulatorName + "_thickness", "nm");
+        return new StructureFamily() {
+            @Override
+            public Column parameter() {
+                return c;
+            }
+
+            @Override
+            public Structure at(double nm) {
+                Require.inRange("thickness of insulator \"" + insulatorName + "\" (nm)", nm, Double.MIN_VALUE,
+                        Units.mToNm(Layer.MAX_THICKNESS));
+                List<InsulatorLayer> l = new ArrayList<>(stack);
+                l.set(index, stack.get(index).withThickness(nm * Units.NM));
+                return template.withGateStack(l);
+            }
+        };
+    }
+
+    /**
+     * The depth of a gate recess into one layer (typically the barrier), in nm (parameter
+     * {@code <layer>_recess_depth}, unit {@code nm}): the layer keeps its template thickness minus
+     * the recess, everything else (gate stack, interface sheets) is kept, so the sheets on the
+     * recessed face describe the etched surface. A recess through the whole layer is refused.
+     *
+     * @param template  the un-recessed stack (its thickness of the layer is the access region's)
+     * @param layerName the layer the recess etches into
+     * @return the family
+     */
+    public static StructureFamily recessDepthNm(Structure template, String layerName) {
+        int index = find(template, layerName);
+        Layer old = template.layersBottomUp().get(index);
+        double full = old.thicknessNm();
+        Column c = Column.of(layerName + "_recess_depth", "nm");
+        return new StructureFamily() {
+            @Override
+            public Column parameter() {
+                return c;
+            }
+
+            @Override
+            public Structure at(double nm) {
+                Require.inRange("recess depth into layer \"" + layerName + "\" (nm)", nm, 0, full);
+                if (nm >= full) {
+                    throw new InvalidParameterException("recess depth into layer \"" + layerName + "\" (nm)",
+                            Double.toString(nm), "[0, " + full + ") (the layer's thickness; a recess must leave some)");
+                }
+                return template.withLayer(index, old.withThickness((full - nm) * Units.NM));
+            }
+        };
+    }
+
+    /**
+     * The template with layer {@code index} (bottom-up) replaced, or removed when {@code layer} is
+     * null. A template with a gate stack or interface sheets keeps them (a layer of such a template
+     * cannot be removed).
+     */
     static Structure rebuild(Structure template, int index, Layer layer) {
+        if (!template.gateStack().isEmpty() || !template.interfaceSheets().isEmpty()) {
+            if (layer == null) {
+                throw new InvalidParameterException("thickness of layer \""
+                        + template.layersBottomUp().get(index).name() + "\" (nm)", "0",
+                        "(0, ...) (a layer of a stack with a gate stack or interface sheets cannot be removed)");
+            }
+            return template.withLayer(index, layer);
+        }
         Structure.Builder b = Structure.builder(template.parameters());
         List<Layer> layers = template.layersBottomUp();
         for (int i = 0; i < layers.size(); i++) {
