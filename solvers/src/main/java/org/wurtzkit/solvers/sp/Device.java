@@ -292,7 +292,6 @@ final class Device {
             for (org.wurtzkit.structure.InterfaceStates is : ps.sheet().states()) {
                 sheetNode[k] = node;
                 sheetStart[k] = quad.size();
-                sheetFermiEv[k] = interfaceStateFermiLevelEv(ps);
                 sheetOwner[k] = owner;
                 InterfaceStateQuadrature.append(is, ps.nitrideGapEv(), kT / Q, quad);
                 k++;
@@ -343,6 +342,9 @@ final class Device {
         channelDepth = chDepth;
         channelLayer = chLayer;
         resolveQuasiFermiLevels(s, o.quasiFermiLevels());
+        for (int j = 0; j < sheetNode.length; j++) {
+            sheetFermiEv[j] = interfaceStateFermiLevelEv(sheetNode[j]);
+        }
         boolean uniform = true;
         for (double v : efn) {
             uniform &= v == 0;
@@ -480,15 +482,15 @@ final class Device {
     }
 
     /**
-     * The Fermi level that occupies the interface states of one sheet (eV, on the solver's scale with
-     * the bottom contact at 0). The one place where that choice is made: today every sheet takes the
-     * bottom (channel) contact's electron Fermi level, 0 eV. States under an insulator exchange
-     * electrons with the nitride, not with the gate metal, and a free surface has no contact of its
-     * own, so the channel's level is the right one in equilibrium; a solver with per-region
-     * quasi-Fermi levels should return the level of the region the sheet's nitride belongs to.
+     * The Fermi level that occupies the interface states of a sheet at a node (eV, on the solver's
+     * scale with the bottom contact at 0), the one place where that choice is made: the electrons'
+     * quasi-Fermi level of the nitride cell just below the sheet, i.e. of the region the states sit
+     * in ({@link QuasiFermiLevels}). States under an insulator exchange electrons with the nitride,
+     * not with the gate metal, and a free surface has no contact of its own; with the default rules
+     * that level is the channel's, 0 eV.
      */
-    static double interfaceStateFermiLevelEv(org.wurtzkit.structure.PlacedSheet sheet) {
-        return 0;
+    private double interfaceStateFermiLevelEv(int node) {
+        return efn[Math.min(node, n - 2)];
     }
 
     /**

@@ -42,8 +42,8 @@
  * quantum windows stop at the insulator (a hard wall). The fixed charge of every interface sheet
  * is a nodal charge; interface states are integrated over the gap (package-private
  * {@code InterfaceStateQuadrature}) and occupied from the Fermi level chosen in one package-private
- * method, {@code Device.interfaceStateFermiLevelEv}: today the channel's electron level, 0 eV, for
- * every sheet. Holes under an insulator follow {@link org.wurtzkit.solvers.sp.QuasiFermiLevels} like
+ * method, {@code Device.interfaceStateFermiLevelEv}: the electrons' quasi-Fermi level of the
+ * nitride region the states sit in (with the default rules the channel's, 0 eV). Holes under an insulator follow {@link org.wurtzkit.solvers.sp.QuasiFermiLevels} like
  * holes anywhere else, which is shaky there (the insulator cuts them off from the gate): a
  * structure whose barrier face carries a strongly negative net sheet may show a hole layer under the
  * insulator.

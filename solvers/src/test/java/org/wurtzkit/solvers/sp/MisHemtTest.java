@@ -91,6 +91,27 @@ class MisHemtTest {
     }
 
     /**
+     * Interface states are occupied from the electrons' quasi-Fermi level of the region they sit in:
+     * a rule that holds the barrier's electrons 0.2 eV higher fills more of the barrier's interface
+     * states, so their charge grows more negative (Fermi-Dirac occupancy of acceptor-like states
+     * above the neutral level; common practice, no source). With the default rules the level is the
+     * channel's, 0 eV, and the solve is the one without any rule.
+     */
+    @Test
+    void interfaceStatesFollowTheQuasiFermiLevelOfTheirRegion() {
+        InterfaceSheet sheet = InterfaceSheet.fixedPerCm2(2.0e13).withStates(InterfaceStates.uniformPerCm2PerEv(1e12, 1.0));
+        Structure s = misHemt(15, sheet, 0);
+        double base = SOLVER.solve(s).interfaceStateCharge()[0];
+        SelfConsistentSolver raised = new SelfConsistentSolver(SolverOptions.defaults().withQuasiFermiLevels(
+                QuasiFermiLevels.defaults().withLayer(Carrier.ELECTRONS, "barrier", FermiContact.floating(0.2))));
+        double up = raised.solve(s).interfaceStateCharge()[0];
+        assertTrue(up < base, "a higher level in the states' region must fill more states: " + up + " vs " + base);
+        SelfConsistentSolver channel = new SelfConsistentSolver(SolverOptions.defaults().withQuasiFermiLevels(
+                QuasiFermiLevels.defaults().withLayer(Carrier.ELECTRONS, "barrier", FermiContact.CHANNEL)));
+        assertEquals(base, channel.solve(s).interfaceStateCharge()[0], 0.0, "the channel's level is the default");
+    }
+
+    /**
      * The single donor level of J. P. Ibbetson et al., Appl. Phys. Lett. 77, 250 (2000), given as
      * interface states (a discrete level, neutral level at E_c) on a free surface, is the built-in
      * free-surface model: the same sheet density.
