@@ -565,7 +565,21 @@ public final class Structure {
      * @return material, strain and polarization there
      */
     public PointState pointAt(double depth) {
-        LayerState s = states.get(layerIndexAt(depth));
+        return pointAt(layerIndexAt(depth), depth);
+    }
+
+    /**
+     * The state at a depth inside a layer already found, for callers that walk the depths in order
+     * (a mesh) and so find each layer in O(1) rather than by search.
+     *
+     * @param layerIndexFromTop the index from the top of the layer that holds the depth
+     * @param depth             a depth inside that layer, [its top, its bottom] (m)
+     * @return material, strain and polarization there
+     */
+    public PointState pointAt(int layerIndexFromTop, double depth) {
+        Require.inRange("layer index (from the top)", layerIndexFromTop, 0, states.size() - 1);
+        LayerState s = states.get(layerIndexFromTop);
+        Require.inRange("depth in layer \"" + s.layer().name() + "\" (m)", depth, s.depthTop(), s.depthBottom());
         if (!s.layer().material().isGraded()) {
             return s.top();
         }

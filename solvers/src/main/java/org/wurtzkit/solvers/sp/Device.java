@@ -155,6 +155,7 @@ final class Device {
         double lastNv = 0;
         int nitrideLayers = s.layerStates().size();
         double gateT = s.gateStackThickness();
+        int walk = 0;
         for (int k = 0; k < cells; k++) {
             double mid = 0.5 * (x[k] + x[k + 1]);
             if (mid < gateT) {
@@ -179,9 +180,14 @@ final class Device {
                 }
                 continue;
             }
-            int li = s.layerIndexAt(mid);
+            // the cells run down the stack: the layer pointer only moves on, O(cells + layers) in all
+            // (the upper layer at an interface, as Structure.layerIndexAt)
+            while (walk < nitrideLayers - 1 && mid > s.layerStates().get(walk).depthBottom()) {
+                walk++;
+            }
+            int li = walk;
             layerOfCell[k] = li;
-            PointState p = s.pointAt(mid);
+            PointState p = s.pointAt(li, mid);
             WurtziteMaterial m = p.material();
             eps[k] = m.permittivityStaticAlongC() * Constants.VACUUM_PERMITTIVITY;
             px[k] = -p.alongGrowth();
