@@ -182,6 +182,30 @@ public final class StructureJson {
                         null);
             }
         }
+        // model choices added to the structure after format version 1 was fixed: refuse rather than
+        // drop them, so that a written stack never reads back as a different one
+        List<String> cannot = new java.util.ArrayList<>();
+        if (!s.gateStack().isEmpty()) {
+            cannot.add("a gate stack of " + s.gateStack().size() + " insulator layer(s)");
+        }
+        if (!s.interfaceSheets().isEmpty()) {
+            cannot.add(s.interfaceSheets().size() + " interface sheet(s) (fixed charge, interface states)");
+        }
+        if (!s.criticalThicknessModel().equals(org.wurtzkit.strain.CriticalThicknessModel.C_PLANE_WURTZITE)) {
+            cannot.add("a critical-thickness model other than the default");
+        }
+        for (Layer l : s.layersBottomUp()) {
+            for (org.wurtzkit.structure.Dopant d : l.dopants()) {
+                if (d.ionization() != org.wurtzkit.structure.Dopant.Ionization.FROM_FERMI_LEVEL) {
+                    cannot.add("a fully ionized dopant in layer \"" + l.name() + "\"");
+                }
+            }
+        }
+        if (!cannot.isEmpty()) {
+            throw new StructureFormatException("(writing)", "(root)", 0, StructureFormatException.Reason.NOT_WRITABLE,
+                    "format version " + FORMAT_VERSION + " cannot hold " + String.join(", ", cannot)
+                            + "; a later format version will", null);
+        }
         g.writeStartObject();
         g.writeNumberField("formatVersion", FORMAT_VERSION);
         g.writeObjectFieldStart("parameterSet");

@@ -154,6 +154,28 @@ class StructureJsonTest {
         assertEquals(s, codec.read(codec.writeCompact(s), "codec"));
     }
 
+    /**
+     * Model choices that format version 1 cannot hold are refused, not dropped: a gate stack, an
+     * interface sheet and a fully ionized dopant would otherwise read back as another stack.
+     */
+    @Test
+    void modelChoicesBeyondVersionOneAreRefusedNotDropped() {
+        Structure.Builder b = Structure.builder(ParameterSets.defaultSet())
+                .grow(Layer.of("buffer", org.wurtzkit.material.Composition.GAN, 500 * NM));
+        Structure gated = b.grow(Layer.of("barrier", org.wurtzkit.material.Composition.alGaN(0.25), 20 * NM))
+                .deposit(org.wurtzkit.structure.InsulatorLayer.ofNm(org.wurtzkit.material.Insulators.AL2O3, 10))
+                .top(TopBoundary.schottky(3)).build();
+        StructureFormatException e = assertThrows(StructureFormatException.class, () -> StructureJson.write(gated));
+        assertEquals(StructureFormatException.Reason.NOT_WRITABLE, e.reason());
+        assertTrue(e.getMessage().contains("gate stack"), e.getMessage());
+        Structure full = Structure.builder(ParameterSets.defaultSet())
+                .grow(Layer.of("buffer", org.wurtzkit.material.Composition.GAN, 500 * NM)
+                        .withDopant(org.wurtzkit.structure.Dopant.donorsPerCm3(1e17, 0.02).fullyIonized()))
+                .top(TopBoundary.schottky(1)).build();
+        StructureFormatException f = assertThrows(StructureFormatException.class, () -> StructureJson.write(full));
+        assertTrue(f.getMessage().contains("fully ionized dopant in layer \"buffer\""), f.getMessage());
+    }
+
     @Test
     void aCustomMaterialLayerIsRefusedWithAReason() {
         WurtziteMaterial gan = ParameterSets.defaultSet().binary(org.wurtzkit.material.Binary.GAN);
