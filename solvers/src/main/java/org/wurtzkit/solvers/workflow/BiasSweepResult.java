@@ -2,9 +2,7 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
 import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
@@ -286,21 +284,7 @@ public final class BiasSweepResult implements CsvTable {
      */
     @Override
     public Optional<ResultProvenance> provenance() {
-        Map<String, String> run = new LinkedHashMap<>();
-        run.put("computation", "bias sweep");
-        StringBuilder b = new StringBuilder();
-        for (double v : bias) {
-            b.append(b.length() == 0 ? "" : " ").append(Double.toString(v));
-        }
-        run.put("biasesV", b.toString());
-        List<String> warnings = new ArrayList<>();
-        for (PointFailure f : failures) {
-            warnings.add("point failed: " + f);
-        }
-        for (org.wurtzkit.structure.LayerState s : structure.layersBeyondCriticalThickness()) {
-            warnings.add(s.layer().name() + " is thicker than its critical thickness (an estimate); it may relax");
-        }
-        return Optional.of(ResultProvenance.of(structure, options.settings(), run, warnings));
+        return Optional.of(SweepProvenance.of("bias sweep", "biasesV", bias, structure, options, failures, warnings));
     }
 
     @Override

@@ -2,9 +2,7 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
 import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.solvers.sp.Solution;
@@ -192,28 +190,14 @@ public final class TemperatureSweepResult implements CsvTable {
 
     /**
      * What produced this sweep: the structure, the solver options, the temperatures in solving order
-     * and a warning for every failed point and every layer beyond its critical thickness. Running
+     * and a warning for every failed point, then the sweep's own warnings. Running
      * the sweep again with them gives the same numbers bit for bit.
      *
      * @return the provenance (computed on each call; it hashes the parameter set)
      */
     @Override
     public Optional<ResultProvenance> provenance() {
-        Map<String, String> run = new LinkedHashMap<>();
-        run.put("computation", "temperature sweep");
-        StringBuilder b = new StringBuilder();
-        for (double t : temperature) {
-            b.append(b.length() == 0 ? "" : " ").append(Double.toString(t));
-        }
-        run.put("temperaturesK", b.toString());
-        List<String> warnings = new ArrayList<>();
-        for (PointFailure f : failures) {
-            warnings.add("point failed: " + f);
-        }
-        for (org.wurtzkit.structure.LayerState s : structure.layersBeyondCriticalThickness()) {
-            warnings.add(s.layer().name() + " is thicker than its critical thickness (an estimate); it may relax");
-        }
-        return Optional.of(ResultProvenance.of(structure, options.settings(), run, warnings));
+        return Optional.of(SweepProvenance.of("temperature sweep", "temperaturesK", temperature, structure, options, failures, warnings));
     }
 
     @Override
