@@ -225,7 +225,7 @@ public record SolverOptions(double tolerance, int maxIterations, double newtonTo
     /**
      * Every option as ordered name/value text, for the provenance of a result: numbers written with
      * {@link Double#toString(double)} (which reads back to the same double), the mesh policy as its
-     * three numbers, the quantum region as {@code automatic <extension m>}, {@code none} or
+     * three numbers, the quantum windows as {@code automatic <extension m>}, {@code none} or
      * {@code windows <top m> <bottom m>, ...}, the quasi-Fermi rules as {@code <carrier>|layer|<name>|<contact>} or
      * {@code <carrier>|depths|<top m>|<bottom m>|<contact>} joined by {@code ;} (contact {@code gate},
      * {@code channel} or {@code floating <eV>}; empty for the defaults), quantum holes as true or false.
