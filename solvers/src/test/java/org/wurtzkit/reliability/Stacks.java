@@ -31,16 +31,16 @@ final class Stacks {
     private Stacks() {
     }
 
-    private static double logUniform(SplittableRandom r, double lo, double hi) {
+    static double logUniform(SplittableRandom r, double lo, double hi) {
         return lo * Math.pow(hi / lo, r.nextDouble());
     }
 
-    private static double uniform(SplittableRandom r, double lo, double hi) {
+    static double uniform(SplittableRandom r, double lo, double hi) {
         return lo + (hi - lo) * r.nextDouble();
     }
 
     /** Rounds to 4 significant digits, so that reproducers print short numbers. */
-    private static double round(double v) {
+    static double round(double v) {
         return new BigDecimal(v).round(new MathContext(4, RoundingMode.HALF_EVEN)).doubleValue();
     }
 

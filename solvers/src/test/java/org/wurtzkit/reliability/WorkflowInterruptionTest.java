@@ -144,25 +144,7 @@ class WorkflowInterruptionTest {
         AtomicInteger count = new AtomicInteger();
         CountDownLatch fourDone = new CountDownLatch(4);
         DesignMap m = map(threads, 200, counting(count, 20, k -> fourDone.countDown()));
-        AtomicReference<Throwable> thrown = new AtomicReference<>();
-        Thread t = new Thread(() -> {
-            try {
-                m.run();
-            } catch (Throwable x) {
-                thrown.set(x);
-            }
-        });
-        t.start();
-        assertTrue(fourDone.await(GUARD_SECONDS, TimeUnit.SECONDS));
-        int atInterrupt = count.get();
-        t.interrupt();
-        t.join(TimeUnit.SECONDS.toMillis(GUARD_SECONDS));
-        assertFalse(t.isAlive(), "the map did not stop");
-        assertInstanceOf(CancellationException.class, thrown.get());
-        // the workers of a pool may still be finishing their point when run() has returned
-        Thread.sleep(200);
-        assertTrue(count.get() <= atInterrupt + threads,
-                count.get() + " points evaluated, " + atInterrupt + " when interrupted, " + threads + " threads");
+        interruptFromOutside(m::run, "map", count, fourDone, threads);
     }
 
     /**
@@ -225,24 +207,7 @@ class WorkflowInterruptionTest {
         AtomicInteger count = new AtomicInteger();
         CountDownLatch fourDone = new CountDownLatch(4);
         ToleranceStudy st = study(threads, 200, counting(count, 20, k -> fourDone.countDown()));
-        AtomicReference<Throwable> thrown = new AtomicReference<>();
-        Thread t = new Thread(() -> {
-            try {
-                st.run();
-            } catch (Throwable x) {
-                thrown.set(x);
-            }
-        });
-        t.start();
-        assertTrue(fourDone.await(GUARD_SECONDS, TimeUnit.SECONDS));
-        int atInterrupt = count.get();
-        t.interrupt();
-        t.join(TimeUnit.SECONDS.toMillis(GUARD_SECONDS));
-        assertFalse(t.isAlive(), "the tolerance study did not stop");
-        assertInstanceOf(CancellationException.class, thrown.get(), String.valueOf(thrown.get()));
-        Thread.sleep(200);
-        assertTrue(count.get() <= atInterrupt + threads,
-                count.get() + " samples evaluated, " + atInterrupt + " when interrupted, " + threads + " threads");
+        interruptFromOutside(st::run, "tolerance study", count, fourDone, threads);
         assertTrue(count.get() < st.size(), count.get() + " of " + st.size() + " samples evaluated");
     }
 
@@ -315,5 +280,32 @@ class WorkflowInterruptionTest {
         assertThrows(CancellationException.class, () -> spread.run(ReliabilityStructures::forSet,
                 List.of(ParameterSets.defaultSet(), ParameterSets.named("ambacher-2002"))));
         assertTrue(Thread.interrupted(), "the interrupt flag stays set (and is cleared here)");
+    }
+
+    /**
+     * Runs a workflow in its own thread, interrupts that thread once four items are done, and checks
+     * that it stops with CancellationException after at most one more item per worker thread.
+     */
+    private static void interruptFromOutside(Runnable run, String what, AtomicInteger count, CountDownLatch fourDone,
+            int threads) throws InterruptedException {
+        AtomicReference<Throwable> thrown = new AtomicReference<>();
+        Thread t = new Thread(() -> {
+            try {
+                run.run();
+            } catch (Throwable x) {
+                thrown.set(x);
+            }
+        });
+        t.start();
+        assertTrue(fourDone.await(GUARD_SECONDS, TimeUnit.SECONDS));
+        int atInterrupt = count.get();
+        t.interrupt();
+        t.join(TimeUnit.SECONDS.toMillis(GUARD_SECONDS));
+        assertFalse(t.isAlive(), "the " + what + " did not stop");
+        assertInstanceOf(CancellationException.class, thrown.get(), String.valueOf(thrown.get()));
+        // the workers of a pool may still be finishing their item when run() has returned
+        Thread.sleep(200);
+        assertTrue(count.get() <= atInterrupt + threads,
+                count.get() + " items evaluated, " + atInterrupt + " when interrupted, " + threads + " threads");
     }
 }

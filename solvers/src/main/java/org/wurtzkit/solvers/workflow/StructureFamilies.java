@@ -88,18 +88,28 @@ public final class StructureFamilies {
     private static int find(Structure template, String layerName) {
         Require.nonNull("template structure", template);
         Require.nonNull("layer name", layerName);
-        List<Layer> layers = template.layersBottomUp();
+        return unique(template.layersBottomUp(), Layer::name, "layers", layerName);
+    }
+
+    /**
+     * The index of the one item of a list with a given name.
+     *
+     * @throws InvalidParameterException when none or several items have that name
+     */
+    private static <T> int unique(List<T> items, java.util.function.Function<T, String> name, String what,
+            String wanted) {
         int found = -1;
         int count = 0;
-        for (int i = 0; i < layers.size(); i++) {
-            if (layers.get(i).name().equals(layerName)) {
+        for (int i = 0; i < items.size(); i++) {
+            if (name.apply(items.get(i)).equals(wanted)) {
                 found = i;
                 count++;
             }
         }
         if (count != 1) {
-            throw new InvalidParameterException("number of layers named \"" + layerName + "\"", Integer.toString(count),
-                    "[1, 1] (layers of the template: " + layers.stream().map(Layer::name).toList() + ")");
+            throw new InvalidParameterException("number of " + what + " named \"" + wanted + "\"",
+                    Integer.toString(count), "[1, 1] (" + what + " of the template: "
+                            + items.stream().map(name).toList() + ")");
         }
         return found;
     }
@@ -114,22 +124,8 @@ public final class StructureFamilies {
      */
     public static StructureFamily insulatorThicknessNm(Structure template, String insulatorName) {
         Require.nonNull("template structure", template);
-        Require.nonNull("insulator name", insulatorName);
         List<InsulatorLayer> stack = template.gateStack();
-        int found = -1;
-        int count = 0;
-        for (int i = 0; i < stack.size(); i++) {
-            if (stack.get(i).name().equals(insulatorName)) {
-                found = i;
-                count++;
-            }
-        }
-        if (count != 1) {
-            throw new InvalidParameterException("number of insulator layers named \"" + insulatorName + "\"",
-                    Integer.toString(count), "[1, 1] (insulators of the template: "
-                            + stack.stream().map(InsulatorLayer::name).toList() + ")");
-        }
-        int index = found;
+        int index = unique(stack, InsulatorLayer::name, "insulator layers", insulatorName);
         Column c = Column.of(insulatorName + "_thickness", "nm");
         return new StructureFamily() {
             @Override
