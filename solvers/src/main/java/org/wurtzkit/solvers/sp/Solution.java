@@ -382,7 +382,8 @@ public final class Solution {
      */
     public double sheetDensityPerCm2() {
         double channel = 0;
-        for (CarrierSheet c : sheets) {
+        for (int k = 0; k < sheets.size(); k++) { // indexed: no iterator per call
+            CarrierSheet c = sheets.get(k);
             if (c.role() == CarrierSheet.Role.CHANNEL) {
                 channel = c.sheetDensity();
             }
@@ -403,7 +404,8 @@ public final class Solution {
     /** {@return the SI twin of {@link #parasiticSheetDensityPerCm2()}: the parasitic sheet density (m^-2)} */
     public double parasiticSheetDensity() {
         double parasitic = 0;
-        for (CarrierSheet c : sheets) {
+        for (int k = 0; k < sheets.size(); k++) {
+            CarrierSheet c = sheets.get(k);
             if (c.role() == CarrierSheet.Role.UNDER_GATE) {
                 parasitic += c.sheetDensity();
             }
