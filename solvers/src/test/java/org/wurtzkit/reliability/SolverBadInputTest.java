@@ -40,6 +40,7 @@ import org.wurtzkit.structure.Dopant;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /**
  * Bad-input table of the solvers module (issue #7): solver options, mesh policy, quantum windows
@@ -57,8 +58,7 @@ class SolverBadInputTest {
     private static final SolverOptions D = SolverOptions.defaults();
 
     private static Structure hemt() {
-        return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build();
+        return StandardStacks.hemt(SET, 1000, 0.25, 25, 0, TopBoundary.schottky(1).atBiasV(0));
     }
 
     private static SolverOptions newtonTolerance(double v) {

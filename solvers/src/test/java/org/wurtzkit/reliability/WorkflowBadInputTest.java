@@ -37,6 +37,7 @@ import org.wurtzkit.solvers.workflow.ThresholdExtraction;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /**
  * Bad-input table of the design workflows (issue #7): bias grids with no or one point, NaN and
@@ -52,8 +53,7 @@ class WorkflowBadInputTest {
     private static final double INF = Double.POSITIVE_INFINITY;
 
     static Structure hemt() {
-        return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1).atBiasV(0)).build();
+        return StandardStacks.hemt(SET, 1000, 0.25, 25, 0, TopBoundary.schottky(1).atBiasV(0));
     }
 
     static Stream<Arguments> biasGrids() {

@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.wurtzkit.units.Units.NM;
 
 import java.util.List;
 import java.util.concurrent.CancellationException;
@@ -22,7 +21,6 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.workflow.Axis;
@@ -40,9 +38,9 @@ import org.wurtzkit.solvers.workflow.ThresholdExtraction;
 import org.wurtzkit.solvers.workflow.Distribution;
 import org.wurtzkit.solvers.workflow.Tolerance;
 import org.wurtzkit.solvers.workflow.ToleranceStudy;
-import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /**
  * Interruption of the long workflows (issue #14): a design map (one thread and several), a
@@ -59,8 +57,7 @@ class WorkflowInterruptionTest {
     private static final long GUARD_SECONDS = 20;
 
     private static Structure hemt() {
-        return Structure.builder(ParameterSets.defaultSet()).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM)).top(TopBoundary.schottky(1, 0)).build();
+        return StandardStacks.hemt(ParameterSets.defaultSet(), 1000, 0.25, 25, 0, TopBoundary.schottky(1, 0));
     }
 
     /**

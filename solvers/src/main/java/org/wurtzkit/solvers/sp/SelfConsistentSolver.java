@@ -187,7 +187,7 @@ public final class SelfConsistentSolver {
         if (nw == 0) {
             ConvergenceRecord rec = new ConvergenceRecord(true, 0, newtonSteps, new double[0],
                     "classical solve converged");
-            return new Solution(d, phi, null, null, charges.report(phi, null, null), rec, cold);
+            return SolutionAssembler.assemble(d, phi, null, null, charges.report(phi, null, null), rec, cold);
         }
         QuantumStates qs = new QuantumStates(d);
         double[] ref = new double[d.n];
@@ -226,7 +226,7 @@ public final class SelfConsistentSolver {
                                 options.tolerance(), it + 1, mixing == null ? ""
                                         : String.format(Locale.ROOT, " (Anderson mixing from iteration %d)",
                                                 mixingFrom + 1)));
-                return new Solution(d, phi, ref, qs, charges.report(phi, ref, qs), rec, cold);
+                return SolutionAssembler.assemble(d, phi, ref, qs, charges.report(phi, ref, qs), rec, cold);
             }
             // 5. a change that stalls (charge sloshing between coupled wells, or a degenerate gas in
             // many subbands, where the predictor over- or under-corrects) switches on Anderson mixing

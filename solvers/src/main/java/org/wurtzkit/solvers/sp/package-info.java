@@ -29,7 +29,11 @@
  * (1965)) gives the next input; a converged solve returns the unmixed Newton-Poisson solution, so
  * the change it reports is that of the potential it returns. An eigen-solver failure inside the
  * loop ends the solve as a {@code NotConvergedException} with the record so far.</li>
- * <li><b>Result or failure.</b> A converged solve returns a {@code Solution} (copies, no NaN); one
+ * <li><b>Result or failure.</b> A converged solve hands its last potential, subbands and charge
+ * report once to the package-private {@code SolutionAssembler}, the one place that derives the band
+ * edges, field, neutrality check, plot lines, subbands, warnings and read-outs (the carrier sheets,
+ * interface edges and well minima by static factories of their own records); it returns a
+ * {@code Solution}, a plain holder of those values (copies out, no NaN). A solve
  * that runs out of budget throws {@link org.wurtzkit.solvers.sp.NotConvergedException} carrying its
  * record and last finite iterate.</li>
  * </ol>

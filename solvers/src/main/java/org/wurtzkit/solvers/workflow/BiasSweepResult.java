@@ -1,7 +1,5 @@
 package org.wurtzkit.solvers.workflow;
 
-import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
@@ -34,14 +32,10 @@ public final class BiasSweepResult implements CsvTable {
 
     private final Structure structure;
     private final double[] bias;
+    private final SweepPoints points;
     private final double[] sheet; // cm^-2, exactly as Solution#sheetDensityPerCm2 reports it
-    private final double[] gateCharge; // C/m^2
     private final double[] allElectrons; // m^-2
-    private final int[] iterations;
-    private final Solution[] solutions;
-    private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
-    private final String[] status;
     private final CapacitanceVoltage cv;
     private final SolverOptions options;
     private final List<Warning> warnings;
@@ -52,34 +46,14 @@ public final class BiasSweepResult implements CsvTable {
         this.structure = structure;
         this.options = options;
         this.bias = grid.values();
-        this.solutions = solutions.clone();
-        this.sheet = new double[n];
-        this.gateCharge = new double[n];
+        this.points = new SweepPoints(solutions, reasons, i -> "gate bias = " + bias[i] + " V", s -> "ok");
+        this.sheet = points.sheet;
+        this.failures = points.failures;
         this.allElectrons = new double[n];
-        this.iterations = new int[n];
-        this.status = new String[n];
-        this.failureAt = new PointFailure[n];
-        List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            Solution s = solutions[i];
-            if (s == null) {
-                sheet[i] = Double.NaN;
-                gateCharge[i] = Double.NaN;
-                allElectrons[i] = Double.NaN;
-                iterations[i] = -1;
-                failureAt[i] = reasons[i].at(i, "gate bias = " + bias[i] + " V");
-                f.add(failureAt[i]);
-                status[i] = "failed: " + reasons[i].message();
-            } else {
-                sheet[i] = s.sheetDensityPerCm2();
-                gateCharge[i] = s.gateCharge();
-                allElectrons[i] = s.electronSheetDensity();
-                iterations[i] = s.convergence().iterations();
-                status[i] = "ok";
-            }
+            allElectrons[i] = solutions[i] == null ? Double.NaN : solutions[i].electronSheetDensity();
         }
-        this.failures = Collections.unmodifiableList(f);
-        this.cv = new CapacitanceVoltage(bias, gateCharge, this::provenance);
+        this.cv = new CapacitanceVoltage(bias, points.gateCharge, this::provenance);
         String[] labels = new String[n];
         for (int i = 0; i < n; i++) {
             labels[i] = "V_g = " + Decimals.format(bias[i], "V");
@@ -117,21 +91,17 @@ public final class BiasSweepResult implements CsvTable {
 
     /** {@return 2DEG sheet density, the subband electrons of the quantum windows (m^-2)} */
     public double[] sheetDensity() {
-        double[] out = new double[sheet.length];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = Units.perCm2ToPerM2(sheet[i]);
-        }
-        return out;
+        return points.sheetDensity();
     }
 
     /** {@return 2DEG sheet density (cm^-2), exactly as {@link Solution#sheetDensityPerCm2()} reports it} */
     public double[] sheetDensityPerCm2() {
-        return sheet.clone();
+        return points.sheetDensityPerCm2();
     }
 
     /** {@return sheet charge on the gate metal (C/m&sup2;)} */
     public double[] gateCharge() {
-        return gateCharge.clone();
+        return points.gateCharge();
     }
 
     /** {@return all electrons of the stack (m^-2)} */
@@ -150,7 +120,7 @@ public final class BiasSweepResult implements CsvTable {
 
     /** {@return outer Schroedinger-Poisson iterations per point, -1 for a failed point} */
     public int[] iterations() {
-        return iterations.clone();
+        return points.iterations();
     }
 
     /**
@@ -158,7 +128,7 @@ public final class BiasSweepResult implements CsvTable {
      * @return true if point i was computed (the one verb of every workflow result)
      */
     public boolean succeeded(int i) {
-        return failureAt[i] == null;
+        return points.succeeded(i);
     }
 
     /**
@@ -166,7 +136,7 @@ public final class BiasSweepResult implements CsvTable {
      * @return why point i failed (with the kind of failure), or empty
      */
     public Optional<PointFailure> failure(int i) {
-        return Optional.ofNullable(failureAt[i]);
+        return points.failure(i);
     }
 
     /**
@@ -174,7 +144,7 @@ public final class BiasSweepResult implements CsvTable {
      * @return the full solution at point i (band diagram, subbands, ...), empty for a failed point
      */
     public Optional<Solution> solution(int i) {
-        return Optional.ofNullable(solutions[i]);
+        return points.solution(i);
     }
 
     /** {@return the failed points with their reasons, in sweep order (empty if all converged)} */
@@ -300,8 +270,8 @@ public final class BiasSweepResult implements CsvTable {
     @Override
     public List<String> row(int i) {
         return List.of(CsvTable.cell(bias[i]), CsvTable.cell(sheet[i]),
-                CsvTable.cell(gateCharge[i]), CsvTable.cell(Units.perM2ToPerCm2(allElectrons[i])),
-                iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+                CsvTable.cell(points.gateCharge[i]), CsvTable.cell(Units.perM2ToPerCm2(allElectrons[i])),
+                points.iterations[i] < 0 ? "" : Integer.toString(points.iterations[i]), points.status[i]);
     }
 
     /**

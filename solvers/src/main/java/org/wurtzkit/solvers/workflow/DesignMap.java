@@ -59,10 +59,10 @@ public final class DesignMap {
                         "[1, " + (Integer.MAX_VALUE - 8) + "]");
             }
         }
-        this.solver = b.solver;
+        this.solver = b.run.solver();
         this.evaluator = b.evaluator;
-        this.threads = b.threads;
-        this.progress = b.progress;
+        this.threads = b.run.threads();
+        this.progress = b.run.progress();
     }
 
     /**
@@ -143,10 +143,8 @@ public final class DesignMap {
     public static final class Builder {
         private final StructureFactory factory;
         private final List<Axis> axes = new ArrayList<>();
-        private SelfConsistentSolver solver = new SelfConsistentSolver();
         private PointEvaluator evaluator = PointEvaluator.solve(Quantity.SHEET_DENSITY, Quantity.GATE_CHARGE);
-        private int threads = Runtime.getRuntime().availableProcessors();
-        private ProgressListener progress = ProgressListener.NONE;
+        private RunSettings run = RunSettings.defaults();
 
         private Builder(StructureFactory factory) {
             this.factory = Require.nonNull("structure factory", factory);
@@ -166,7 +164,7 @@ public final class DesignMap {
          * @return this builder
          */
         public Builder solver(SelfConsistentSolver s) {
-            this.solver = Require.nonNull("solver", s);
+            run = run.withSolver(s);
             return this;
         }
 
@@ -198,7 +196,7 @@ public final class DesignMap {
          * @return this builder
          */
         public Builder threads(int n) {
-            this.threads = Require.inRange("thread count", n, 1, 1024);
+            run = run.withThreads(n);
             return this;
         }
 
@@ -207,7 +205,7 @@ public final class DesignMap {
          * @return this builder
          */
         public Builder progress(ProgressListener p) {
-            this.progress = Require.nonNull("progress listener", p);
+            run = run.withProgress(p);
             return this;
         }
 

@@ -125,7 +125,7 @@ public final class DesignTradeoff {
         }
         this.factory = b.factory;
         this.axes = List.copyOf(b.axes);
-        this.solver = b.solver;
+        this.solver = b.run.solver();
         this.reverseBiasV = b.reverseBiasV;
         this.definition = b.fixedSweep != null ? b.fixedSweep.definition() : b.definition;
         this.fixedSweep = b.fixedSweep;
@@ -136,8 +136,8 @@ public final class DesignTradeoff {
         this.bandToleranceV = b.bandToleranceV;
         this.mobility = b.mobility;
         this.leakage = b.leakage;
-        this.threads = b.threads;
-        this.progress = b.progress;
+        this.threads = b.run.threads();
+        this.progress = b.run.progress();
     }
 
     /**
@@ -306,7 +306,6 @@ public final class DesignTradeoff {
     public static final class Builder {
         private final StructureFactory factory;
         private final List<Axis> axes = new ArrayList<>();
-        private SelfConsistentSolver solver = new SelfConsistentSolver();
         private double reverseBiasV = Double.NaN;
         private ThresholdDefinition definition = ThresholdDefinition.constantDensity(DEFAULT_THRESHOLD_LEVEL_PER_CM2);
         private ThresholdExtraction fixedSweep;
@@ -317,8 +316,7 @@ public final class DesignTradeoff {
         private double bandToleranceV = Double.NaN;
         private MobilityOptions mobility = MobilityOptions.defaults();
         private LeakageOptions leakage = LeakageOptions.defaults();
-        private int threads = Runtime.getRuntime().availableProcessors();
-        private ProgressListener progress = ProgressListener.NONE;
+        private RunSettings run = RunSettings.defaults();
 
         private Builder(StructureFactory factory) {
             this.factory = Require.nonNull("structure factory", factory);
@@ -435,7 +433,7 @@ public final class DesignTradeoff {
          * @return this builder
          */
         public Builder solver(SelfConsistentSolver s) {
-            this.solver = Require.nonNull("solver", s);
+            run = run.withSolver(s);
             return this;
         }
 
@@ -444,7 +442,7 @@ public final class DesignTradeoff {
          * @return this builder
          */
         public Builder threads(int n) {
-            this.threads = Require.inRange("thread count", n, 1, 1024);
+            run = run.withThreads(n);
             return this;
         }
 
@@ -453,7 +451,7 @@ public final class DesignTradeoff {
          * @return this builder
          */
         public Builder progress(ProgressListener p) {
-            this.progress = Require.nonNull("progress listener", p);
+            run = run.withProgress(p);
             return this;
         }
 

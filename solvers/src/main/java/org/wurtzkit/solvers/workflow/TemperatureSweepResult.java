@@ -1,7 +1,5 @@
 package org.wurtzkit.solvers.workflow;
 
-import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 import org.wurtzkit.provenance.ResultProvenance;
@@ -30,14 +28,9 @@ public final class TemperatureSweepResult implements CsvTable {
 
     private final Structure structure;
     private final double[] temperature;
-    private final double[] sheet; // cm^-2
-    private final double[] gateCharge;
+    private final SweepPoints points;
     private final double[] groundSubband;
     private final double[] bottomGap;
-    private final int[] iterations;
-    private final Solution[] solutions;
-    private final String[] status;
-    private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
     private final SolverOptions options;
     private final List<Warning> warnings;
@@ -48,40 +41,25 @@ public final class TemperatureSweepResult implements CsvTable {
         this.structure = structure;
         this.options = options;
         this.temperature = temperature.clone();
-        this.solutions = solutions.clone();
-        sheet = new double[n];
-        gateCharge = new double[n];
+        this.points = new SweepPoints(solutions, reasons, i -> "temperature = " + temperature[i] + " K",
+                s -> s.subbands().isEmpty() ? "ok (no subbands)" : "ok");
+        this.failures = points.failures;
         groundSubband = new double[n];
         bottomGap = new double[n];
-        iterations = new int[n];
-        status = new String[n];
-        failureAt = new PointFailure[n];
-        List<PointFailure> f = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             Solution s = solutions[i];
             if (s == null) {
-                sheet[i] = Double.NaN;
-                gateCharge[i] = Double.NaN;
                 groundSubband[i] = Double.NaN;
                 bottomGap[i] = Double.NaN;
-                iterations[i] = -1;
-                status[i] = "failed: " + reasons[i].message();
-                failureAt[i] = reasons[i].at(i, "temperature = " + temperature[i] + " K");
-                f.add(failureAt[i]);
                 continue;
             }
-            sheet[i] = s.sheetDensityPerCm2();
-            gateCharge[i] = s.gateCharge();
             List<Subband> bands = s.subbands();
             // NaN when the stack has no subband at all (no quantum window); documented in the accessor
             groundSubband[i] = bands.isEmpty() ? Double.NaN : lowest(bands);
             double[] ec = s.conductionBand();
             double[] ev = s.valenceBand();
             bottomGap[i] = ec[ec.length - 1] - ev[ev.length - 1];
-            iterations[i] = s.convergence().iterations();
-            status[i] = bands.isEmpty() ? "ok (no subbands)" : "ok";
         }
-        this.failures = Collections.unmodifiableList(f);
         String[] labels = new String[n];
         for (int i = 0; i < n; i++) {
             labels[i] = "T = " + Decimals.format(temperature[i], "K");
@@ -124,21 +102,17 @@ public final class TemperatureSweepResult implements CsvTable {
 
     /** {@return 2DEG sheet density (cm^-2)} */
     public double[] sheetDensityPerCm2() {
-        return sheet.clone();
+        return points.sheetDensityPerCm2();
     }
 
     /** {@return 2DEG sheet density (m^-2); the twin of {@link #sheetDensityPerCm2()}} */
     public double[] sheetDensity() {
-        double[] out = new double[sheet.length];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = org.wurtzkit.units.Units.perCm2ToPerM2(sheet[i]);
-        }
-        return out;
+        return points.sheetDensity();
     }
 
     /** {@return gate charge (C/m&sup2;), 0 for a free surface} */
     public double[] gateCharge() {
-        return gateCharge.clone();
+        return points.gateCharge();
     }
 
     /**
@@ -156,7 +130,7 @@ public final class TemperatureSweepResult implements CsvTable {
 
     /** {@return outer iterations per point, -1 for a failed point} */
     public int[] iterations() {
-        return iterations.clone();
+        return points.iterations();
     }
 
     /**
@@ -164,7 +138,7 @@ public final class TemperatureSweepResult implements CsvTable {
      * @return true if point i was computed (the one verb of every workflow result)
      */
     public boolean succeeded(int i) {
-        return failureAt[i] == null;
+        return points.succeeded(i);
     }
 
     /**
@@ -172,7 +146,7 @@ public final class TemperatureSweepResult implements CsvTable {
      * @return why point i failed (with the kind of failure), or empty
      */
     public Optional<PointFailure> failure(int i) {
-        return Optional.ofNullable(failureAt[i]);
+        return points.failure(i);
     }
 
     /**
@@ -180,7 +154,7 @@ public final class TemperatureSweepResult implements CsvTable {
      * @return the solution there, empty for a failed point
      */
     public Optional<Solution> solution(int i) {
-        return Optional.ofNullable(solutions[i]);
+        return points.solution(i);
     }
 
     /** {@return the failed points, in sweep order} */
@@ -212,9 +186,9 @@ public final class TemperatureSweepResult implements CsvTable {
 
     @Override
     public List<String> row(int i) {
-        return List.of(CsvTable.cell(temperature[i]), CsvTable.cell(sheet[i]), CsvTable.cell(gateCharge[i]),
+        return List.of(CsvTable.cell(temperature[i]), CsvTable.cell(points.sheet[i]), CsvTable.cell(points.gateCharge[i]),
                 CsvTable.cell(groundSubband[i]), CsvTable.cell(bottomGap[i]),
-                iterations[i] < 0 ? "" : Integer.toString(iterations[i]), status[i]);
+                points.iterations[i] < 0 ? "" : Integer.toString(points.iterations[i]), points.status[i]);
     }
 
     /**

@@ -93,9 +93,9 @@ public final class ToleranceStudy {
             cols.addAll(e.columns());
         }
         this.outputs = List.copyOf(cols);
-        this.solver = b.solver;
-        this.threads = b.threads;
-        this.progress = b.progress;
+        this.solver = b.run.solver();
+        this.threads = b.run.threads();
+        this.progress = b.run.progress();
         Layer bottom = template.layersBottomUp().get(0);
         this.defaultLattice = template.referenceLatticeA() == bottom.material().at(0, template.parameters()).latticeA();
         double[] nominal = new double[tolerances.size()];
@@ -305,9 +305,7 @@ public final class ToleranceStudy {
         private long seed = 1L;
         private boolean sensitivity;
         private List<PointEvaluator> evaluators = List.of(PointEvaluator.solve(Quantity.SHEET_DENSITY));
-        private SelfConsistentSolver solver = new SelfConsistentSolver();
-        private int threads = Runtime.getRuntime().availableProcessors();
-        private ProgressListener progress = ProgressListener.NONE;
+        private RunSettings run = RunSettings.defaults();
 
         private Builder(Structure template) {
             this.template = Require.nonNull("template structure", template);
@@ -398,7 +396,7 @@ public final class ToleranceStudy {
          * @return this builder
          */
         public Builder solver(SelfConsistentSolver s) {
-            this.solver = Require.nonNull("solver", s);
+            run = run.withSolver(s);
             return this;
         }
 
@@ -408,7 +406,7 @@ public final class ToleranceStudy {
          * @return this builder
          */
         public Builder threads(int n) {
-            this.threads = Require.inRange("thread count", n, 1, 1024);
+            run = run.withThreads(n);
             return this;
         }
 
@@ -417,7 +415,7 @@ public final class ToleranceStudy {
          * @return this builder
          */
         public Builder progress(ProgressListener p) {
-            this.progress = Require.nonNull("progress listener", p);
+            run = run.withProgress(p);
             return this;
         }
 

@@ -15,6 +15,7 @@ import org.wurtzkit.structure.Dopant;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /**
  * Holes and acceptors at their own quasi-Fermi level ({@link QuasiFermiLevels}): the p-GaN gate
@@ -28,10 +29,7 @@ class HoleQuasiFermiTest {
 
     /** GaN 1 um / Al0.2Ga0.8N 15 nm / p-GaN 70 nm (Mg 3e19 cm^-3, 0.17 eV) under a 3.3 eV Schottky gate. */
     static Structure pGanGate(double biasV) {
-        return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.2), 15 * NM))
-                .grow(Layer.of("p-GaN", Composition.GAN, 70 * NM).withDopant(Dopant.acceptorsPerCm3(MG_PER_CM3, MG_IONIZATION_EV)))
-                .top(TopBoundary.schottky(3.3, biasV)).build();
+        return StandardStacks.pGanGate(SET, 0.2, 15, 70, Dopant.acceptorsPerCm3(MG_PER_CM3, MG_IONIZATION_EV), 3.3, biasV);
     }
 
     /** Index of the node nearest a depth. */

@@ -11,7 +11,6 @@ import org.wurtzkit.material.Insulator;
 import org.wurtzkit.material.Insulators;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
-import org.wurtzkit.structure.InsulatorLayer;
 import org.wurtzkit.structure.InterfaceSheet;
 import org.wurtzkit.structure.InterfaceStates;
 import org.wurtzkit.structure.Layer;
@@ -34,9 +33,7 @@ class MisHemtTest {
     private static final double N_TH = 1e11; // cm^-2, threshold definition
 
     static Structure misHemt(double toxNm, InterfaceSheet sheet, double biasV) {
-        return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 20 * NM)).sheetOnTop(sheet)
-                .deposit(InsulatorLayer.ofNm(OX, toxNm)).top(TopBoundary.schottky(PHI_B, biasV)).build();
+        return StandardStacks.misHemt(SET, 0.25, 20, sheet, OX, toxNm, PHI_B, biasV);
     }
 
     static double threshold(double toxNm, InterfaceSheet sheet) {

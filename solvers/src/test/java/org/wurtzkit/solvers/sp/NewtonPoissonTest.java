@@ -6,16 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.wurtzkit.units.Units.NM;
 
 import java.util.Arrays;
 import org.junit.jupiter.api.Test;
 import org.wurtzkit.errors.ErrorKind;
-import org.wurtzkit.material.Composition;
-import org.wurtzkit.material.ParameterSets;
-import org.wurtzkit.structure.Layer;
-import org.wurtzkit.structure.Structure;
-import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /**
  * The Newton-Poisson solver and the failure paths of a solve: a failed inner or eigen step must end
@@ -25,24 +20,14 @@ import org.wurtzkit.structure.TopBoundary;
 class NewtonPoissonTest {
     private static final SolverOptions CLASSICAL = SolverOptions.defaults().withQuantumWindows(QuantumWindows.none());
 
-    private static Structure hemt() {
-        return Structure.builder(ParameterSets.defaultSet())
-                .grow(Layer.of("buffer", Composition.GAN, 2000 * NM))
-                .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
-                .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(1.0).atBiasV(0))
-                .build();
-    }
-
     /**
      * Driven directly from the solver's cold start, it reaches the public classical solve's potential
      * bit for bit, and the step count it returns is the one the solve records.
      */
     @Test
     void directSolveMatchesThePublicClassicalSolve() {
-        Solution reference = new SelfConsistentSolver(CLASSICAL).solve(hemt());
-        Device d = new Device(hemt(), CLASSICAL);
+        Solution reference = new SelfConsistentSolver(CLASSICAL).solve(StandardStacks.referenceHemt(0));
+        Device d = new Device(StandardStacks.referenceHemt(0), CLASSICAL);
         NewtonPoisson poisson = new NewtonPoisson(d, new ChargeModel(d), CLASSICAL);
         double[] phi = new double[d.n];
         Arrays.fill(phi, d.bottomDirichlet ? d.phiBottom : d.ec[d.n - 2] - 0.25);
@@ -59,7 +44,7 @@ class NewtonPoissonTest {
     @Test
     void exhaustedStepBudgetCarriesTheRecordAndAFiniteIterate() {
         SelfConsistentSolver solver = new SelfConsistentSolver(CLASSICAL.withMaxNewtonIterations(3));
-        NotConvergedException e = assertThrows(NotConvergedException.class, () -> solver.solve(hemt()));
+        NotConvergedException e = assertThrows(NotConvergedException.class, () -> solver.solve(StandardStacks.referenceHemt(0)));
         ConvergenceRecord r = e.record();
         assertEquals(ErrorKind.NOT_CONVERGED, e.kind());
         assertFalse(r.converged());
@@ -81,7 +66,7 @@ class NewtonPoissonTest {
      */
     @Test
     void eigenFailureBecomesNotConvergedWithTheRecord() {
-        Device d = new Device(hemt(), SolverOptions.defaults());
+        Device d = new Device(StandardStacks.referenceHemt(0), SolverOptions.defaults());
         double[] phi = new double[d.n];
         for (int i = 0; i < d.n; i++) {
             phi[i] = 0.1 * Math.sin(i);

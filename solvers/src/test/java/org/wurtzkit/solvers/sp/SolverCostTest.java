@@ -2,17 +2,12 @@ package org.wurtzkit.solvers.sp;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.wurtzkit.units.Units.NM;
 
 import org.junit.jupiter.api.Test;
-import org.wurtzkit.material.Composition;
-import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.workflow.BiasGrid;
 import org.wurtzkit.solvers.workflow.BiasSweep;
 import org.wurtzkit.solvers.workflow.BiasSweepResult;
-import org.wurtzkit.structure.Layer;
-import org.wurtzkit.structure.Structure;
-import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /**
  * The cost of a solve pinned, not only its answer: on the reference HEMT (the stack of the
@@ -26,23 +21,13 @@ import org.wurtzkit.structure.TopBoundary;
  */
 class SolverCostTest {
 
-    private static Structure referenceHemt(double biasV) {
-        return Structure.builder(ParameterSets.defaultSet())
-                .grow(Layer.of("buffer", Composition.GAN, 2000 * NM))
-                .grow(Layer.of("spacer", Composition.ALN, 1 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
-                .grow(Layer.of("cap", Composition.GAN, 2 * NM))
-                .top(TopBoundary.schottky(1.0).atBiasV(biasV))
-                .build();
-    }
-
     /**
      * Cold Schroedinger-Poisson solve at 0 V: measured 5 outer iterations and 23 Newton steps (24
      * before limited Newton steps were first tried clamped node by node, issue #14).
      */
     @Test
     void coldSolveOfTheReferenceHemt() {
-        ConvergenceRecord r = new SelfConsistentSolver().solve(referenceHemt(0)).convergence();
+        ConvergenceRecord r = new SelfConsistentSolver().solve(StandardStacks.referenceHemt(0)).convergence();
         assertTrue(r.converged(), r.message());
         assertTrue(r.iterations() <= 5 + 1, "outer iterations " + r.iterations() + " (measured 5)");
         assertTrue(r.newtonIterations() <= 23 + 3, "Newton steps " + r.newtonIterations() + " (measured 23)");
@@ -55,7 +40,7 @@ class SolverCostTest {
     @Test
     void classicalSolveOfTheReferenceHemt() {
         ConvergenceRecord r = new SelfConsistentSolver(SolverOptions.defaults().withQuantumWindows(QuantumWindows.none()))
-                .solve(referenceHemt(0)).convergence();
+                .solve(StandardStacks.referenceHemt(0)).convergence();
         assertTrue(r.converged(), r.message());
         assertEquals(0, r.iterations(), "a classical solve has no outer iteration");
         assertTrue(r.newtonIterations() <= 13 + 1, "Newton steps " + r.newtonIterations() + " (measured 13)");
@@ -68,7 +53,7 @@ class SolverCostTest {
      */
     @Test
     void continuedGateSweepOfTheReferenceHemt() {
-        BiasSweepResult s = new BiasSweep().run(referenceHemt(0), BiasGrid.linear(0, -1, 21));
+        BiasSweepResult s = new BiasSweep().run(StandardStacks.referenceHemt(0), BiasGrid.linear(0, -1, 21));
         assertTrue(s.failures().isEmpty(), () -> s.failures().toString());
         int outer = 0;
         int newton = 0;

@@ -5,11 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.wurtzkit.units.Units.NM;
 
 import org.junit.jupiter.api.Test;
-import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSets;
-import org.wurtzkit.structure.Layer;
-import org.wurtzkit.structure.Structure;
-import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /**
  * The subband density against its definition, n_i = sum_k g_k ln(1 + e^eta) |psi_k,i|^2 (the
@@ -21,10 +18,7 @@ class SubbandDensityTest {
     private static final SolverOptions OPTIONS = SolverOptions.defaults();
 
     private static Device device() {
-        return new Device(Structure.builder(ParameterSets.defaultSet())
-                .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.3), 20 * NM))
-                .top(TopBoundary.schottky(1.0).atBiasV(0)).build(), OPTIONS);
+        return new Device(StandardStacks.gatedHemt(ParameterSets.defaultSet(), 0.3, 20, 0, 1.0), OPTIONS);
     }
 
     /** A potential with a triangular well at the interface, so that several subbands are bound. */

@@ -36,6 +36,7 @@ import org.wurtzkit.structure.Dopant;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 import org.wurtzkit.units.Constants;
 
 /** Gate leakage of computed band diagrams: a Schottky diode on n-GaN and Al0.25Ga0.75N/GaN HEMTs. */
@@ -49,13 +50,7 @@ class GateLeakageTest {
     private static BiasSweepResult[] capped;
 
     static Structure hemt(double capNm) {
-        Structure.Builder b = Structure.builder(SET)
-                .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 20 * NM));
-        if (capNm > 0) {
-            b.grow(Layer.of("cap", Composition.GAN, capNm * NM));
-        }
-        return b.top(TopBoundary.schottky(1.0, 0)).build();
+        return StandardStacks.gatedHemt(SET, 0.25, 20, capNm, 1.0);
     }
 
     static Structure diode(double donorsPerCm3, double phiB) {
@@ -344,9 +339,7 @@ class GateLeakageTest {
         }
         assertThrows(InvalidParameterException.class,
                 () -> GateLeakage.atReverseBias(hemt(0), -1, SWEEP, LeakageOptions.defaults()));
-        Structure free = Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 20 * NM))
-                .top(new TopBoundary.FreeSurface(1.0, 1e17)).build();
+        Structure free = StandardStacks.hemt(SET, 500, 0.25, 20, 0, new TopBoundary.FreeSurface(1.0, 1e17));
         WurtzkitException e = assertThrows(WurtzkitException.class,
                 () -> GateLeakage.of(SOLVER.solve(free), LeakageOptions.defaults()));
         assertEquals(ErrorKind.INVALID_STRUCTURE, e.kind());

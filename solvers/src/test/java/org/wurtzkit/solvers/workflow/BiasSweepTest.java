@@ -194,10 +194,8 @@ class BiasSweepTest {
      */
     @Test
     void aFailingStretchCostsOneAttemptPerPointAndSaysWhy() {
-        Structure s = Structure.builder(org.wurtzkit.material.ParameterSets.defaultSet())
-                .grow(org.wurtzkit.structure.Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(org.wurtzkit.structure.Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
-                .top(TopBoundary.schottky(1, 0)).build();
+        Structure s = StandardStacks.hemt(org.wurtzkit.material.ParameterSets.defaultSet(), 1000, 0.25, 25, 0,
+                TopBoundary.schottky(1, 0));
         BiasSweepResult r = new BiasSweep(new SelfConsistentSolver(
                 org.wurtzkit.solvers.sp.SolverOptions.defaults().withMaxIterations(3))).run(s, -8, -7.9, 0, 0.05, 0.1);
         assertTrue(r.succeeded(0) && r.succeeded(1), () -> r.failures().toString());

@@ -7,7 +7,6 @@ import static org.wurtzkit.units.Units.NM;
 import java.util.List;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.junit.jupiter.api.Test;
-import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.Insulator;
 import org.wurtzkit.material.Insulators;
 import org.wurtzkit.material.ParameterSet;
@@ -16,13 +15,12 @@ import org.wurtzkit.solvers.sp.QuantumWindows;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
-import org.wurtzkit.structure.InsulatorLayer;
 import org.wurtzkit.structure.InterfaceSheet;
 import org.wurtzkit.structure.InterfaceStates;
-import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.testing.GateStacks;
+import org.wurtzkit.testing.StandardStacks;
 import org.wurtzkit.units.Constants;
 import org.wurtzkit.units.Units;
 
@@ -44,9 +42,7 @@ class MisGateTest {
      * with the gate gather under the negative polarization sheet (see SolverOptions.holeFermiLevel).
      */
     static Structure misHemt(double qf, double toxNm) {
-        return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 18 * NM)).sheetOnTop(InterfaceSheet.fixedPerCm2(qf))
-                .deposit(InsulatorLayer.ofNm(Insulators.AL2O3, toxNm)).top(TopBoundary.schottky(PHI_B, 0)).build();
+        return StandardStacks.misHemt(SET, 0.25, 18, InterfaceSheet.fixedPerCm2(qf), Insulators.AL2O3, toxNm, PHI_B, 0);
     }
 
     /**
@@ -126,9 +122,7 @@ class MisGateTest {
     @Test
     void sweepGivesThresholdGateAndAccessSheetDensities() {
         Structure template = misHemt(2.5e13, 10);
-        Structure access = Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 18 * NM)).top(TopBoundary.freeSurface(1.65, 1e14))
-                .build();
+        Structure access = StandardStacks.hemt(SET, 500, 0.25, 18, 0, TopBoundary.freeSurface(1.65, 1e14));
         MisGate gate = new MisGate(SOLVER, new ThresholdExtraction(BiasGrid.linear(0, -10, 51),
                 new ThresholdDefinition.ConstantDensity(1e11)));
         List<MisGate.Point> pts = gate.sweep(StructureFamilies.insulatorThicknessNm(template, "Al2O3"),

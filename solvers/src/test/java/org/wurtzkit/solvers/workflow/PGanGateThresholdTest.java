@@ -10,9 +10,8 @@ import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.structure.Dopant;
 import org.wurtzkit.structure.InterfaceCharge;
-import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
-import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 import org.wurtzkit.units.Constants;
 
 /**
@@ -29,10 +28,7 @@ class PGanGateThresholdTest {
     private static final double PHI_B = 3.3;
 
     static Structure pGanGate(double mgPerCm3, double pGanNm, double x, double barrierNm) {
-        return Structure.builder(SET).grow(Layer.of("buffer", Composition.GAN, 1000 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(x), barrierNm * NM))
-                .grow(Layer.of("p-GaN", Composition.GAN, pGanNm * NM).withDopant(Dopant.magnesiumInGaNPerCm3(mgPerCm3)))
-                .top(TopBoundary.schottky(PHI_B, 0)).build();
+        return StandardStacks.pGanGate(SET, x, barrierNm, pGanNm, Dopant.magnesiumInGaNPerCm3(mgPerCm3), PHI_B, 0);
     }
 
     static double vth(double mg, double pNm, double x, double dNm) {

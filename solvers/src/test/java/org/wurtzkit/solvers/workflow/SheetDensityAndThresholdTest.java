@@ -16,6 +16,7 @@ import org.wurtzkit.solvers.analytic.ChargeBalanceModel;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
+import org.wurtzkit.testing.StandardStacks;
 
 /** n_s and V_th of every design-map point in one call, the bias range placed by the closed-form model. */
 class SheetDensityAndThresholdTest {
@@ -60,11 +61,7 @@ class SheetDensityAndThresholdTest {
 
     @Test
     void pointsTheModelCannotHoldFailWithTheReason() {
-        Structure free = Structure.builder(Hemts.DEFAULT_SET)
-                .grow(Layer.of("buffer", Composition.GAN, 500 * NM))
-                .grow(Layer.of("barrier", Composition.alGaN(0.25), 25 * NM))
-                .top(TopBoundary.freeSurfacePerCm2(1.65, 1.6e13))
-                .build();
+        Structure free = StandardStacks.hemt(Hemts.DEFAULT_SET, 500, 0.25, 25, 0, TopBoundary.freeSurfacePerCm2(1.65, 1.6e13));
         SheetDensityAndThreshold eval = SheetDensityAndThreshold.of(LEVEL);
         InvalidParameterException e = assertThrows(InvalidParameterException.class,
                 () -> eval.evaluate(free, Hemts.SOLVER));
