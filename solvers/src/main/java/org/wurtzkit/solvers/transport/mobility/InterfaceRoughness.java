@@ -23,7 +23,8 @@ import org.wurtzkit.units.Units;
  * (some carry (n_s/2)^2/2 where this one has n_s^2/4), so fitted values are only transferable with
  * the formula they were fitted with. Defaults ({@link #DEFAULT}): Delta = 0.26 nm, one bilayer step
  * c/2 of GaN (common practice, no source), Lambda = 3 nm, inside the 1-3 nm of published fits (from
- * memory).
+ * memory). The same pair is used at every interface; {@link InterfaceRoughnessByBarrier} gives an
+ * interface of another kind (the AlN/GaN interface under an AlN interlayer) its own.
  *
  * @param rmsHeight         Delta (m), in [0, 2 nm]
  * @param correlationLength Lambda (m), in [0.1 nm, 100 nm]
