@@ -1,7 +1,10 @@
 package org.wurtzkit.solvers.transport.mobility;
 
+import java.util.Locale;
 import java.util.Optional;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.units.Units;
 
 /**
@@ -20,12 +23,15 @@ import org.wurtzkit.units.Units;
  * (some carry (n_s/2)^2/2 where this one has n_s^2/4), so fitted values are only transferable with
  * the formula they were fitted with. Defaults ({@link #DEFAULT}): Delta = 0.26 nm, one bilayer step
  * c/2 of GaN (common practice, no source), Lambda = 3 nm, inside the 1-3 nm of published fits (from
- * memory).
+ * memory). The same pair is used at every interface; {@link InterfaceRoughnessByBarrier} gives an
+ * interface of another kind (the AlN/GaN interface under an AlN interlayer) its own.
  *
  * @param rmsHeight         Delta (m), in [0, 2 nm]
  * @param correlationLength Lambda (m), in [0.1 nm, 100 nm]
  */
 public record InterfaceRoughness(double rmsHeight, double correlationLength) implements ScatteringMechanism {
+    /** The mechanism's name, {@value}. */
+    public static final String NAME = "interface roughness";
     /** Delta 0.26 nm, Lambda 3 nm. */
     public static final InterfaceRoughness DEFAULT = ofNm(0.26, 3);
 
@@ -53,7 +59,7 @@ public record InterfaceRoughness(double rmsHeight, double correlationLength) imp
 
     @Override
     public String name() {
-        return "interface roughness";
+        return NAME;
     }
 
     @Override
@@ -69,12 +75,39 @@ public record InterfaceRoughness(double rmsHeight, double correlationLength) imp
                 * sum;
     }
 
+    /**
+     * Warns when the subband has no rough interface, and when its rough interface faces a binary barrier
+     * (an AlN interlayer): the one (Delta, Lambda) of this mechanism, in practice fitted to AlGaN/GaN, is
+     * then applied to an interface of another kind, whose roughness is a sample property of its own
+     * (Miyoshi et al., Appl. Phys. Lett. 85, 1710 (2004), report lower roughness scattering with a 1 nm
+     * AlN interlayer); {@link InterfaceRoughnessByBarrier} sets it per barrier.
+     *
+     * @param s the subband
+     * @return the warning, if any
+     */
     @Override
     public Optional<String> warning(SubbandScattering s) {
         if (s.interfaceField() == 0) {
             return Optional.of("interface roughness: a subband has no interface near its peak (or no field"
                     + " there); its roughness rate is 0");
         }
+        Optional<WurtziteMaterial> barrier = s.interfaceBarrier();
+        if (barrier.isPresent() && isBinary(barrier.get())) {
+            return Optional.of(String.format(Locale.ROOT, "interface roughness: the rough interface faces the binary"
+                    + " %s; the same Delta = %.3g nm, Lambda = %.3g nm as at an alloy interface is applied to it,"
+                    + " although its roughness is a property of its own (a 1 nm AlN interlayer is measured to cut"
+                    + " roughness scattering too): set it per barrier with InterfaceRoughnessByBarrier",
+                    barrier.get().name(), rmsHeight * 1e9, correlationLength * 1e9));
+        }
         return Optional.empty();
+    }
+
+    /**
+     * @param m a material
+     * @return whether it declares a composition with one cation only (GaN, AlN, InN)
+     */
+    static boolean isBinary(WurtziteMaterial m) {
+        Composition c = m.composition();
+        return c != null && Math.max(c.aluminium(), Math.max(c.gallium(), c.indium())) == 1;
     }
 }

@@ -227,8 +227,18 @@ public final class Mobility {
                 }
                 fieldEff = den > 0 ? Math.abs(num / den) : 0;
             }
+            // the material on the barrier side of the rough interface: the cell just across it from the peak
+            WurtziteMaterial barrier = null;
+            if (iface >= 0) {
+                int c = 0;
+                while (c < n - 2 && x[c + 1] <= iface) {
+                    c++;
+                }
+                // cell c is the first whose bottom lies below the interface: the cell just under it
+                barrier = below ? (c > 0 ? cellMaterial[c - 1] : null) : cellMaterial[c];
+            }
             SubbandScattering s = new SubbandScattering(t, chan[i], b.inPlaneMass(), b.sheetDensity(), qs, x, psi2,
-                    alloy, fieldEff, ions, surface, options.quadraturePoints());
+                    alloy, fieldEff, barrier, ions, surface, options.quadraturePoints());
             for (int k = 0; k < mechs.size(); k++) {
                 ScatteringMechanism m = mechs.get(k);
                 double r = m.momentumRelaxationRate(s);

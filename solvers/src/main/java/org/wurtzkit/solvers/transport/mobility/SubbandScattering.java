@@ -1,9 +1,11 @@
 package org.wurtzkit.solvers.transport.mobility;
 
+import java.util.Optional;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegrator;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactory;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.units.Constants;
 
 /**
@@ -57,6 +59,7 @@ public final class SubbandScattering {
     private final double psi4;
     private final double alloyIntegral;
     private final double interfaceField;
+    private final WurtziteMaterial interfaceBarrier;
     private final double[] ionSheet;
     private final double surfaceSheet;
     private final double[] u;
@@ -84,6 +87,31 @@ public final class SubbandScattering {
     SubbandScattering(double temperatureK, ChannelParameters channel, double massRelative, double sheetDensity,
             double screening, double[] depth, double[] psiSquared, double[] alloyStrength, double interfaceField,
             double[] ionDensity, double surfaceSheet, int quadraturePoints) {
+        this(temperatureK, channel, massRelative, sheetDensity, screening, depth, psiSquared, alloyStrength,
+                interfaceField, null, ionDensity, surfaceSheet, quadraturePoints);
+    }
+
+    /**
+     * As the constructor above, with the material on the far side of the rough interface.
+     *
+     * @param temperatureK      lattice temperature (K)
+     * @param channel           material constants where the subband lives
+     * @param massRelative      in-plane mass (m0)
+     * @param sheetDensity      electrons in the subband (m^-2), &gt; 0
+     * @param screening         screening wave vector q_s (1/m), &ge; 0
+     * @param depth             mesh nodes (m), strictly increasing
+     * @param psiSquared        |psi|^2 per node (1/m)
+     * @param alloyStrength     per node Omega_0 sum x_i x_j U_ij^2 (J^2 m^3), or null for none
+     * @param interfaceField    effective field at the rough interface (V/m), 0 if there is none
+     * @param interfaceBarrier  material on the barrier side of the rough interface, or null if unknown
+     * @param ionDensity        ionised impurities per node (m^-3, box-averaged), or null for none
+     * @param surfaceSheet      charged surface states at the first node (m^-2, magnitude)
+     * @param quadraturePoints  nodes of the graded rule, in [12, 1000], used in panels of 6
+     */
+    SubbandScattering(double temperatureK, ChannelParameters channel, double massRelative, double sheetDensity,
+            double screening, double[] depth, double[] psiSquared, double[] alloyStrength, double interfaceField,
+            WurtziteMaterial interfaceBarrier, double[] ionDensity, double surfaceSheet, int quadraturePoints) {
+        this.interfaceBarrier = interfaceBarrier;
         this.temperatureK = Require.positive("temperature (K)", temperatureK);
         this.channel = Require.nonNull("channel parameters", channel);
         this.mass = Require.positive("in-plane mass (m0)", massRelative) * Constants.ELECTRON_MASS;
@@ -378,6 +406,14 @@ public final class SubbandScattering {
     /** @return the effective field at the rough interface (V/m); 0 if the subband has none */
     public double interfaceField() {
         return interfaceField;
+    }
+
+    /**
+     * @return the material on the barrier side of the rough interface (e.g. an AlN interlayer or the
+     *         AlGaN barrier), empty if the subband has no interface or the caller did not say
+     */
+    public Optional<WurtziteMaterial> interfaceBarrier() {
+        return Optional.ofNullable(interfaceBarrier);
     }
 
     /**

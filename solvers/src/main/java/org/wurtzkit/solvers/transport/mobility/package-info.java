@@ -19,5 +19,13 @@
  * 1e13 cm^-2 the ground subband holds most of them) and it overestimates the mobility of the excited
  * subbands, whose intersubband channels are left out. Screening is static and diagonal
  * (Thomas-Fermi, with each subband's screening form factor).
+ *
+ * <p>Interfaces. Each subband scatters at the interface nearest its peak; the material across it is
+ * {@link org.wurtzkit.solvers.transport.mobility.SubbandScattering#interfaceBarrier()}. The roughness of an
+ * AlN/GaN interface (under an AlN interlayer) is not that of an AlGaN/GaN one; the default applies the one
+ * {@link org.wurtzkit.solvers.transport.mobility.InterfaceRoughness#DEFAULT} to both and says so in a
+ * warning, and {@link org.wurtzkit.solvers.transport.mobility.InterfaceRoughnessByBarrier} sets it per
+ * barrier. With a 1 nm AlN interlayer the alloy scattering vanishes and the roughness of that interface
+ * decides how much of the measured low-temperature gain the model shows.
  */
 package org.wurtzkit.solvers.transport.mobility;

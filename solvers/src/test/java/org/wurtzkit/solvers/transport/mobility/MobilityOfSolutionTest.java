@@ -19,8 +19,9 @@ import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Constants;
 
 /**
- * Mobility of self-consistent AlGaN/GaN solutions (default parameter set, default options) against
- * measured Hall data and the trends they show.
+ * Mobility of self-consistent AlGaN/GaN solutions (default parameter set, default options): sheet
+ * resistance, temperature trend, screening, N-face. The measured check with and without an AlN
+ * interlayer is {@link AlnInterlayerMobilityTest}.
  */
 class MobilityOfSolutionTest {
     private static final SelfConsistentSolver SOLVER = new SelfConsistentSolver();
@@ -39,32 +40,6 @@ class MobilityOfSolutionTest {
 
     static MobilityResult mobility(boolean aln, double t) {
         return Mobility.of(SOLVER.solve(hemt(aln, t)), MobilityOptions.defaults());
-    }
-
-    @Test
-    void alnInterlayerRemovesAlloyScatteringAndRaisesTheMobility() {
-        MobilityResult plain300 = mobility(false, 300);
-        MobilityResult aln300 = mobility(true, 300);
-        MobilityResult plain77 = mobility(false, 77);
-        MobilityResult aln77 = mobility(true, 77);
-        String alloy = new AlloyDisorder().name();
-        // the AlN interlayer keeps the wavefunction out of the disordered AlGaN: alloy-limited mobility
-        // rises by orders of magnitude (Hsu & Walukiewicz, Phys. Rev. B 56, 1520 (1997), predicted;
-        // Smorchkova et al., J. Appl. Phys. 90, 5196 (2001), measured) - 100x is a conservative floor
-        assertTrue(aln300.mobility(alloy) > 100 * plain300.mobility(alloy),
-                aln300.mobility(alloy) + " vs " + plain300.mobility(alloy));
-        // measured direction: higher Hall mobility with the interlayer at 300 K and 77 K (Smorchkova et al.
-        // 2001, from memory, low confidence)
-        assertTrue(aln300.mobility() > plain300.mobility(), aln300 + " vs " + plain300);
-        assertTrue(aln77.mobility() > plain77.mobility(), aln77 + " vs " + plain77);
-        // measured 300 K Hall mobility (Smorchkova et al. 2001, from memory, low confidence): about
-        // 1000-1300 cm^2/Vs without and 1500-2000 with a ~1 nm AlN interlayer. Tolerance: a factor 1.5 on
-        // each bound, because the phonon constants alone move the acoustic-limited mobility by x3-4
-        // (v_L 6.6 vs 8.0 km/s, Xi 8.3 vs 12-15 eV) and the POP rate is an estimate
-        assertInBand(plain300.mobilityCm2PerVs(), 1000 / 1.5, 1300 * 1.5, "300 K, no interlayer");
-        assertInBand(aln300.mobilityCm2PerVs(), 1500 / 1.5, 2000 * 1.5, "300 K, AlN interlayer");
-        // both warn that the polar-optical rate is an estimate
-        assertTrue(plain300.warnings().stream().anyMatch(w -> w.startsWith("polar optical phonons")));
     }
 
     @Test
