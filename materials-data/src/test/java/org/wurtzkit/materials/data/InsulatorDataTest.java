@@ -135,9 +135,13 @@ class InsulatorDataTest {
         assertTrue(ParameterSetHash.canonicalText(ParameterSets.defaultSet()).contains("insulator.Al2O3=9.0,8.8,2.13\n"));
     }
 
-    /** Values outside the {@link Insulator} ranges: set, file, key and line of the value. */
+    /**
+     * Values outside the {@link Insulator} ranges: set, file, key and line of the value. The
+     * permittivity typed in F/m (6.2e-11, i.e. kappa 7 times eps_0) is below vacuum's 1.
+     */
     @ParameterizedTest(name = "{0} = {1}")
     @CsvSource({"relativePermittivity, -7.1, relative permittivity", "relativePermittivity, 0, relative permittivity",
+        "relativePermittivity, 6.2e-11, [1, 1000]",
         "bandGap, 0, band gap", "bandGap, 25, band gap", "conductionBandOffsetToGaN, 12, conduction-band offset"})
     void outOfRangeValuesNameSetFileKeyAndLine(String key, String value, String words) {
         String text = withInsulators(key.equals("relativePermittivity") ? value : "7.1",
@@ -147,7 +151,8 @@ class InsulatorDataTest {
         assertEquals(FILE, e.fileName());
         assertEquals("insulators.TNL-SiN." + key, e.key(), e.getMessage());
         assertEquals(TestText.lineOfKey(text, "TNL-SiN", key, 1), e.line(), e.getMessage());
-        assertTrue(e.problem().contains(words) && e.problem().contains("TNL-SiN"), e.problem());
+        assertTrue(e.problem().contains(words), e.problem());
+        assertTrue(e.problem().contains("TNL-SiN"), e.problem());
     }
 
     /** Malformed blocks: each a clear error with key and line. */
