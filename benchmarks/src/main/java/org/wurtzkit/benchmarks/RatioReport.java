@@ -41,7 +41,8 @@ import org.wurtzkit.structure.TopBoundary;
  * </pre>
  *
  * Options: {@code --full}, {@code --verbose} (JMH's own output), {@code --out FILE} (also write
- * the Markdown to FILE).
+ * the Markdown to FILE), {@code --only TEXT} (run only the jobs of the pass whose include pattern
+ * contains TEXT, e.g. {@code --full --only GateStack} for the gate-stack ratio with its three forks).
  *
  * <p>Error bars: for every figure the median of the measurement iterations (all forks pooled),
  * the min-max range of those iterations and JMH's 99.9 % confidence half-width of the mean. A
@@ -194,16 +195,26 @@ public final class RatioReport {
         boolean full = false;
         boolean verbose = false;
         Path out = null;
+        String only = null;
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
                 case "--full" -> full = true;
                 case "--verbose" -> verbose = true;
                 case "--out" -> out = Path.of(args[++i]);
+                case "--only" -> only = args[++i];
                 default -> throw new IllegalArgumentException("unknown option " + args[i]
-                        + " (use --full, --verbose, --out FILE)");
+                        + " (use --full, --verbose, --out FILE, --only TEXT)");
             }
         }
-        List<Job> jobs = full ? fullRun() : shortPass();
+        List<Job> jobs = new ArrayList<>(full ? fullRun() : shortPass());
+        if (only != null) {
+            String text = only;
+            jobs.removeIf(j -> !j.include().contains(text));
+            if (jobs.isEmpty()) {
+                throw new IllegalArgumentException("--only " + only + " matches no job of the "
+                        + (full ? "full run" : "short pass"));
+            }
+        }
         Map<String, Figure> figures = new LinkedHashMap<>();
         long start = System.nanoTime();
         for (int j = 0; j < jobs.size(); j++) {
@@ -307,7 +318,7 @@ public final class RatioReport {
     /** Deterministic iteration counts of the solves the timing benchmarks run. */
     private record Counts(int nodes, int coldOuter, int coldNewton, int restartOuter, int restartNewton,
             int classicalNewton, int sweepColdOuter, int sweepColdNewton, int sweepContOuter, int sweepContNewton,
-            int workflowOuter, int workflowNewton, Map<String, int[]> classicalMesh) {
+            int workflowOuter, int workflowNewton, Map<String, int[]> classicalMesh, int[] gateStack) {
     }
 
     private static Counts iterationCounts() {
@@ -348,9 +359,11 @@ public final class RatioReport {
             Solution s = NewtonStepBenchmark.classicalSolver(Integer.parseInt(n)).solve(ref);
             mesh.put(n, new int[] {s.nodeCount(), s.convergence().newtonIterations()});
         }
+        Solution mis = solver.solve(GateStackBenchmark.misHemt());
+        int[] gateStack = {mis.nodeCount(), mis.convergence().iterations(), mis.convergence().newtonIterations()};
         return new Counts(cold.nodeCount(), cold.convergence().iterations(), cold.convergence().newtonIterations(),
                 restart.convergence().iterations(), restart.convergence().newtonIterations(),
-                classical.convergence().newtonIterations(), co, cn, wo, wn, fo, fn, mesh);
+                classical.convergence().newtonIterations(), co, cn, wo, wn, fo, fn, mesh, gateStack);
     }
 
     // ------------------------------------------------------------------ report
@@ -452,6 +465,11 @@ public final class RatioReport {
         ratioRow(b, "MIS-HEMT cold solve / same stack without the insulator (10 nm Al2O3)",
                 f.get("GateStackBenchmark.misHemtColdSolve"), f.get("GateStackBenchmark.withoutInsulatorColdSolve"), 1.5,
                 false);
+        if (f.get("GateStackBenchmark.misHemtColdSolve") != null) {
+            b.append(String.format(Locale.ROOT, "| (context) gate-stack iteration counts | MIS-HEMT: %d nodes, %d outer, "
+                    + "%d Newton | without the insulator: %d nodes, %d outer, %d Newton | — | — |%n", c.gateStack()[0],
+                    c.gateStack()[1], c.gateStack()[2], c.nodes(), c.coldOuter(), c.coldNewton()));
+        }
         ratioRow(b, "101-point sweep: cold / continuation (workflow BiasSweep, quadratic predictor)",
                 f.get("SweepBenchmark.coldPoints"), f.get("SweepBenchmark.continuationWorkflow"), 3, true);
         ratioRow(b, "(context) 101-point sweep: cold / plain continuation (solve(s, previous) loop)",

@@ -116,6 +116,12 @@ public final class DerivedParameterSet implements ParameterSet {
         return sources;
     }
 
+    /** {@return the base set's insulators} */
+    @Override
+    public List<Insulator> insulators() {
+        return base.insulators();
+    }
+
     @Override
     public String toString() {
         return name + " (derived from " + base.name() + ")";

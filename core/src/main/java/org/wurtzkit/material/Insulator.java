@@ -18,7 +18,7 @@ import org.wurtzkit.units.Decimals;
  * ({@link #fromElectronAffinity} is offered for insulators without measured offsets).
  *
  * @param name                        a name for reports, e.g. "SiO2"
- * @param relativePermittivity        static relative permittivity kappa, &gt; 0 and at most 1000
+ * @param relativePermittivity        static relative permittivity kappa, in [1, 1000]
  * @param bandGapEv                   band gap (eV), &gt; 0 and at most 20
  * @param conductionBandOffsetToGaNEv E_c(insulator) - E_c(GaN) (eV), in [-5, 10]
  * @param source                      where the values come from (authors, journal, year; verified or from memory)
@@ -30,7 +30,7 @@ public record Insulator(String name, double relativePermittivity, double bandGap
      * Validates.
      *
      * @param name a name for reports, e.g. "SiO2"
-     * @param relativePermittivity static relative permittivity kappa, &gt; 0 and at most 1000
+     * @param relativePermittivity static relative permittivity kappa, in [1, 1000]
      * @param bandGapEv band gap (eV), &gt; 0 and at most 20
      * @param conductionBandOffsetToGaNEv E_c(insulator) - E_c(GaN) (eV), in [-5, 10]
      * @param source where the values come from (authors, journal, year; verified or from memory)
@@ -39,7 +39,9 @@ public record Insulator(String name, double relativePermittivity, double bandGap
         Require.nonNull("insulator name", name);
         Require.nonNull("source of insulator \"" + name + "\"", source);
         Require.positive("relative permittivity of insulator \"" + name + "\"", relativePermittivity);
-        Require.inRange("relative permittivity of insulator \"" + name + "\"", relativePermittivity, 0, 1000);
+        // no passive medium has a static relative permittivity below vacuum's 1 (common practice, no
+        // source); a permittivity typed in F/m (e.g. 8e-11) is caught here
+        Require.inRange("relative permittivity of insulator \"" + name + "\"", relativePermittivity, 1, 1000);
         Require.positive("band gap of insulator \"" + name + "\" (eV)", bandGapEv);
         Require.inRange("band gap of insulator \"" + name + "\" (eV)", bandGapEv, 0, 20);
         Require.inRange("conduction-band offset of insulator \"" + name + "\" to GaN (eV)",

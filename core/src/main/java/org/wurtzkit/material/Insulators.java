@@ -4,10 +4,14 @@ import java.util.List;
 import org.wurtzkit.errors.Require;
 
 /**
- * Built-in gate dielectrics on GaN. They live in core as records, not in a materials-data JSON set,
- * because they are four rows of four numbers each that do not depend on the nitride parameter set
- * (offsets are measured to GaN, whatever set describes the nitrides), and solver tests need them
- * without service discovery. A user adds another with the {@link Insulator} constructor.
+ * Built-in gate dielectrics on GaN: the one home of their numbers. They live in core as records
+ * because they are four rows of three numbers each that do not depend on the nitride parameter set
+ * (offsets are measured to GaN, whatever set describes the nitrides), and core and solver code
+ * needs them without service discovery. The built-in parameter-set files of materials-data carry
+ * them by reference ({@code "insulators": {"Al2O3": {"builtIn": "Al2O3"}, ...}}), so
+ * {@code ParameterSets.defaultSet().insulator("Al2O3")} is {@link #AL2O3}. A user adds another with
+ * the {@link Insulator} constructor, or with its values and sources in a parameter-set file
+ * ({@link ParameterSet#insulators()}).
  *
  * <p>Values and sources (verified = read in the published abstract or table; from memory = recalled,
  * not checked against the original):

@@ -1,8 +1,9 @@
 package org.wurtzkit.material;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
-import org.wurtzkit.material.PolarizationModel;
+import org.wurtzkit.errors.Require;
 
 /**
  * A named, published (or a team's own measured) set of wurtzite parameters: the three binaries,
@@ -77,6 +78,42 @@ public interface ParameterSet {
      */
     default DerivedParameterSet.Builder derive(String name) {
         return DerivedParameterSet.builder(this, name);
+    }
+
+    /**
+     * The gate dielectrics the set declares, each with its values and sources: the built-in sets
+     * carry the four of {@link Insulators} (SiO2, Si3N4, Al2O3, HfO2), a team's file may add its
+     * own. A set that declares none (the default) returns an empty list.
+     *
+     * @return the insulators, in the order the set declares them, names unique
+     */
+    default List<Insulator> insulators() {
+        return List.of();
+    }
+
+    /**
+     * An insulator of the set by name, for a structure's gate stack:
+     * {@code builder.deposit(InsulatorLayer.ofNm(set.insulator("Al2O3"), 10))}.
+     *
+     * @param name the insulator's name as the set declares it (case-insensitive)
+     * @return that insulator
+     * @throws org.wurtzkit.errors.InvalidParameterException if the set declares no insulator of that
+     *         name; the message lists the set's insulators and the nearest of them ("did you mean")
+     */
+    default Insulator insulator(String name) {
+        Require.nonNull("insulator name", name);
+        List<String> names = new ArrayList<>();
+        for (Insulator i : insulators()) {
+            if (i.name().equalsIgnoreCase(name)) {
+                return i;
+            }
+            names.add(i.name());
+        }
+        List<String> near = ParameterSets.nearest(name, names);
+        String guess = near.isEmpty() ? "" : " (did you mean " + String.join(" or ", near.stream()
+                .map(n -> "\"" + n + "\"").toList()) + "?)";
+        throw Require.invalid("insulator name in parameter set \"" + name() + "\"", "\"" + name + "\"",
+                (names.isEmpty() ? "none: the set declares no insulators" : "one of " + names) + guess);
     }
 
     /**

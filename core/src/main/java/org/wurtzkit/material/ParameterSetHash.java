@@ -18,7 +18,10 @@ import org.wurtzkit.errors.Require;
  * <li>{@code bowing.<name>=<value>} for the six bowing parameters of {@link AlloyBowing}, in the
  * order of its components;</li>
  * <li>{@code polarizationModel=<spontaneous>,<piezoelectric>} (the set's recommended model);</li>
- * <li>{@code alloyGapTemperatureRule=<rule>}.</li>
+ * <li>{@code alloyGapTemperatureRule=<rule>};</li>
+ * <li>for every insulator of {@link ParameterSet#insulators()}, in the set's order,
+ * {@code insulator.<name>=<kappa>,<gap eV>,<conduction-band offset to GaN eV>} (no line for a set
+ * without insulators, so the hash of such a set is what it was before insulators existed).</li>
  * </ol>
  * Numbers are written with {@link Double#toString(double)} (the shortest text that reads back to
  * the same double), so the hash changes exactly when some value changes. The set's name,
@@ -54,6 +57,11 @@ public final class ParameterSetHash {
         sb.append("polarizationModel=").append(pm.spontaneous().name()).append(',')
                 .append(pm.piezoelectric().name()).append('\n');
         sb.append("alloyGapTemperatureRule=").append(set.alloyGapTemperatureRule().name()).append('\n');
+        for (Insulator i : set.insulators()) {
+            sb.append("insulator.").append(i.name()).append('=').append(Double.toString(i.relativePermittivity()))
+                    .append(',').append(Double.toString(i.bandGapEv())).append(',')
+                    .append(Double.toString(i.conductionBandOffsetToGaNEv())).append('\n');
+        }
         return sb.toString();
     }
 

@@ -756,6 +756,22 @@ public final class Structure {
         }
 
         /**
+         * Deposits the builder's parameter set's insulator of that name
+         * ({@link ParameterSet#insulator(String)}): {@code depositNm("Al2O3", 10)} is
+         * {@code deposit(InsulatorLayer.ofNm(set.insulator("Al2O3"), 10))}.
+         *
+         * @param insulatorName the insulator's name in the parameter set (case-insensitive)
+         * @param thicknessNm   its thickness (nm)
+         * @return this builder
+         * @throws org.wurtzkit.errors.InvalidParameterException if the set declares no insulator of
+         *         that name (the message lists the set's insulators and the nearest one) or the
+         *         thickness is out of range
+         */
+        public Builder depositNm(String insulatorName, double thicknessNm) {
+            return deposit(InsulatorLayer.ofNm(parameters.insulator(insulatorName), thicknessNm));
+        }
+
+        /**
          * Puts a fixed charge and/or interface states on the top face of the nitride layer grown last:
          * the interface with the next layer or insulator, or the free surface.
          *

@@ -135,6 +135,9 @@ class GateStackTest {
         e = assertThrows(InvalidParameterException.class, () -> new Insulator("X", 3.9, -1, 2, "t"));
         assertTrue(e.allowedRange().contains("(0, +inf)"), e.getMessage());
         assertThrows(InvalidParameterException.class, () -> new Insulator("X", Double.NaN, 5, 2, "t"));
+        // below vacuum's 1 (common practice, no source): a permittivity typed in F/m
+        e = assertThrows(InvalidParameterException.class, () -> new Insulator("X", 3.9 * 8.854e-12, 5, 2, "t"));
+        assertTrue(e.parameter().contains("relative permittivity"), e.getMessage());
         assertThrows(InvalidParameterException.class, () -> new InsulatorLayer("ox", Insulators.SIO2, 0));
     }
 

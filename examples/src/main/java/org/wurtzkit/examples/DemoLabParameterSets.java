@@ -15,7 +15,10 @@ import org.wurtzkit.materials.data.JsonParameterSetReader;
  * vurgaftman-meyer-2003 set with five values replaced by made-up numbers (GaN C13, C33 and static
  * permittivity, AlN e33 and spontaneous polarization) that cite the fictional lab; it describes no
  * measurement and exists only to show the mechanism, and to give the parameter-set spread a third
- * member that is labelled as invented wherever it appears.
+ * member that is labelled as invented wherever it appears. Its {@code "insulators"} block carries the
+ * four built-in dielectrics by reference and adds the lab's own PECVD film {@code "TNL-SiN"}
+ * (permittivity 7.0, gap 4.9 eV, offset to GaN 2.2 eV, all invented), the way a team declares a
+ * dielectric it has characterised.
  */
 public final class DemoLabParameterSets implements ParameterSetProvider {
     /** Name of the invented set. */

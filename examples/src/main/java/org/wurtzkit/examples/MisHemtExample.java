@@ -10,7 +10,6 @@ import java.util.List;
 import java.util.Locale;
 import org.wurtzkit.plot.CurvesPlot;
 import org.wurtzkit.material.Composition;
-import org.wurtzkit.material.Insulators;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.workflow.BiasGrid;
@@ -19,7 +18,6 @@ import org.wurtzkit.solvers.workflow.MisGate;
 import org.wurtzkit.solvers.workflow.StructureFamilies;
 import org.wurtzkit.solvers.workflow.ThresholdDefinition;
 import org.wurtzkit.solvers.workflow.ThresholdExtraction;
-import org.wurtzkit.structure.InsulatorLayer;
 import org.wurtzkit.structure.InterfaceSheet;
 import org.wurtzkit.structure.InterfaceStates;
 import org.wurtzkit.structure.Layer;
@@ -110,7 +108,7 @@ public final class MisHemtExample {
                 .grow(Layer.of("spacer", Composition.ALN, DemoLab.SPACER_NM * NM))
                 .grow(Layer.of("barrier", Composition.alGaN(DemoLab.AL_FRACTION), DemoLab.BARRIER_NM * NM))
                 .sheetOnTop(sheet)
-                .deposit(InsulatorLayer.ofNm(Insulators.AL2O3, toxNm))
+                .depositNm("Al2O3", toxNm) // the built-in Al2O3, by name from the set
                 .top(TopBoundary.schottky(GATE_BARRIER_EV, 0)).build();
     }
 

@@ -49,4 +49,22 @@ class DemoLabParameterSetsTest {
             }
         }
     }
+
+    /**
+     * The lab's file declares the built-in dielectrics by reference and its own invented PECVD SiN
+     * with its (invented) source; a gate stack takes it by name.
+     */
+    @Test
+    void declaresTheLabsOwnInventedInsulator() {
+        ParameterSet lab = ParameterSets.named(DemoLabParameterSets.NAME);
+        assertEquals(org.wurtzkit.material.Insulators.AL2O3, lab.insulator("Al2O3"));
+        org.wurtzkit.material.Insulator sin = lab.insulator("TNL-SiN");
+        assertEquals(7.0, sin.relativePermittivity(), 0.0);
+        assertTrue(sin.source().contains("INVENTED"), sin.source());
+        org.wurtzkit.structure.Structure s = org.wurtzkit.structure.Structure.builder(lab)
+                .grow(org.wurtzkit.structure.Layer.of("buffer", org.wurtzkit.material.Composition.GAN, 500e-9))
+                .grow(org.wurtzkit.structure.Layer.of("barrier", org.wurtzkit.material.Composition.alGaN(0.25), 20e-9))
+                .depositNm("TNL-SiN", 8).top(org.wurtzkit.structure.TopBoundary.schottky(2.0)).build();
+        assertEquals(sin, s.gateStack().get(0).insulator());
+    }
 }

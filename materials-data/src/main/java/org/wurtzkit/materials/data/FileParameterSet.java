@@ -9,6 +9,7 @@ import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.AlloyBowing;
 import org.wurtzkit.material.AlloyScattering;
 import org.wurtzkit.material.Binary;
+import org.wurtzkit.material.Insulator;
 import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.Source;
@@ -32,11 +33,13 @@ public final class FileParameterSet implements ParameterSet {
     private final List<Source> sources;
     private final Map<String, String> notes;
     private final java.util.OptionalDouble conductionBandOffsetFraction;
+    private final List<Insulator> insulators;
 
     FileParameterSet(String name, String description, String fileName, PolarizationModel model,
             Map<Binary, WurtziteMaterial> binaries, AlloyBowing bowing, AlloyScattering alloyScattering, List<Source> sources,
-            Map<String, String> notes, java.util.OptionalDouble conductionBandOffsetFraction) {
+            Map<String, String> notes, java.util.OptionalDouble conductionBandOffsetFraction, List<Insulator> insulators) {
         this.conductionBandOffsetFraction = conductionBandOffsetFraction;
+        this.insulators = List.copyOf(insulators);
         this.name = name;
         this.description = description;
         this.fileName = fileName;
@@ -77,6 +80,12 @@ public final class FileParameterSet implements ParameterSet {
     @Override
     public java.util.OptionalDouble conductionBandOffsetFraction() {
         return conductionBandOffsetFraction;
+    }
+
+    /** {@return the insulators of the file's {@code "insulators"} block, in file order} */
+    @Override
+    public List<Insulator> insulators() {
+        return insulators;
     }
 
     @Override

@@ -22,6 +22,8 @@ import org.wurtzkit.material.AlloyScattering;
 import org.wurtzkit.material.Binary;
 import org.wurtzkit.material.Bowing;
 import org.wurtzkit.material.Composition;
+import org.wurtzkit.material.Insulator;
+import org.wurtzkit.material.Insulators;
 import org.wurtzkit.material.MaterialParameter;
 import org.wurtzkit.material.Provenance;
 import org.wurtzkit.material.Source;
@@ -62,6 +64,14 @@ import org.wurtzkit.material.PolarizationModel;
  *   "bowing": {
  *     "gap":          { "AlGaN": { "value": 0.7, "source": "VM03" }, "InGaN": {...}, "InAlN": {...} },
  *     "polarization": { "AlGaN": { "value": 0,   "source": "VM03" }, "InGaN": {...}, "InAlN": {...} }
+ *   },
+ *   "insulators": {                                  // optional: gate dielectrics, by name
+ *     "Al2O3":   { "builtIn": "Al2O3" },            // the library's own record (Insulators)
+ *     "LAB-SiN": {                                   // a team's own film, every value with its source
+ *       "relativePermittivity":      { "value": 7.1, "source": "LAB" },
+ *       "bandGap":                   { "value": 5.1, "source": "LAB", "unit": "eV" },
+ *       "conductionBandOffsetToGaN": { "value": 2.3, "source": "LAB", "unit": "eV" }
+ *     }
  *   }
  * }
  * }</pre>
@@ -81,8 +91,17 @@ import org.wurtzkit.material.PolarizationModel;
  * <li>{@code "source"} is one source key or an array of them; each must be in {@code "sources"},
  * and each source must be cited at least once. {@code "rule"} (default "tabulated") becomes
  * {@link Provenance#rule()}; {@code "note"} is kept in {@link FileParameterSet#notes()}.</li>
+ * <li>{@code "insulators"} (optional) declares the set's gate dielectrics
+ * ({@link org.wurtzkit.material.ParameterSet#insulators()}), keyed by name (unique, case
+ * ignored): either a reference {@code {"builtIn": "<name>"}} to one of
+ * {@link Insulators#all()}, whose values and sources are the library's (one home for each number:
+ * the built-in sets refer to them this way, and the key must be the built-in's name), or the three
+ * values of an {@link Insulator} with their sources: {@code relativePermittivity} (unit "1"),
+ * {@code bandGap} and {@code conductionBandOffsetToGaN} (E_c(insulator) - E_c(GaN), eV). The values
+ * must pass the {@link Insulator} record's ranges. The insulator's {@link Insulator#source()} lists
+ * each value's citations and note.</li>
  * <li>Unknown keys, duplicated keys, non-numeric or non-finite values and values that
- * {@link WurtziteMaterial.Builder} rejects are errors. Every error is a
+ * {@link WurtziteMaterial.Builder} or {@link Insulator} rejects are errors. Every error is a
  * {@link ParameterSetFormatException} naming the set, the file, the key and the line.</li>
  * </ul>
  *
@@ -130,7 +149,10 @@ public final class JsonParameterSetReader {
             .build();
 
     private static final String[] ROOT_KEYS = {"formatVersion", "name", "description",
-        "recommendedPolarizationModel", "conductionBandOffsetFraction", "sources", "binaries", "alloyScattering", "bowing"};
+        "recommendedPolarizationModel", "conductionBandOffsetFraction", "sources", "binaries", "alloyScattering", "bowing",
+        "insulators"};
+    private static final String[] INSULATOR_KEYS = {"relativePermittivity", "bandGap", "conductionBandOffsetToGaN"};
+    private static final String[] BUILT_IN_KEYS = {"builtIn"};
     private static final String[] SOURCE_KEYS = {"citation", "note"};
     private static final String[] ENTRY_KEYS = {"value", "source", "note", "rule", "unit"};
     private static final String[] BOWING_KINDS = {"gap", "polarization"};
@@ -295,6 +317,9 @@ public final class JsonParameterSetReader {
                 lineUp = java.util.OptionalDouble.of(e.fileValue());
             }
 
+            JsonTree.Member insulatorsMember = root.get("insulators");
+            List<Insulator> insulators = insulatorsMember == null ? List.of() : readInsulators(insulatorsMember);
+
             for (Map.Entry<String, Source> s : sources.entrySet()) {
                 if (!usedSources.contains(s.getKey())) {
                     throw fail("sources." + s.getKey(), sourceLines.get(s.getKey()),
@@ -302,7 +327,68 @@ public final class JsonParameterSetReader {
                 }
             }
             return new FileParameterSet(name, description, fileName, model, materials, bowing, alloyScattering,
-                    new ArrayList<>(sources.values()), notes, lineUp);
+                    new ArrayList<>(sources.values()), notes, lineUp, insulators);
+        }
+
+        private List<Insulator> readInsulators(JsonTree.Member member) {
+            JsonTree.Obj obj = object(member, "insulators");
+            List<Insulator> out = new ArrayList<>();
+            Map<String, String> seen = new LinkedHashMap<>();
+            for (JsonTree.Member m : obj.members().values()) {
+                String path = "insulators." + m.key();
+                if (m.key().isBlank()) {
+                    throw fail(path, m.line(), "an insulator name must not be blank");
+                }
+                String earlier = seen.put(m.key().toLowerCase(Locale.ROOT), m.key());
+                if (earlier != null) {
+                    throw fail(path, m.line(), "insulator \"" + m.key() + "\" differs from \"" + earlier
+                            + "\" only in case; names are looked up ignoring case");
+                }
+                JsonTree.Obj e = object(m, path);
+                JsonTree.Member builtIn = e.get("builtIn");
+                if (builtIn != null) {
+                    checkKeys(e, path, BUILT_IN_KEYS);
+                    String ref = string(builtIn, path + ".builtIn");
+                    Insulator i;
+                    try {
+                        i = Insulators.named(ref);
+                    } catch (InvalidParameterException ex) {
+                        throw fail(path + ".builtIn", builtIn.value().line(), ex.getMessage());
+                    }
+                    if (!i.name().equals(m.key())) {
+                        throw fail(path, m.line(), "the built-in insulator \"" + i.name() + "\" keeps its name;"
+                                + " allowed key: {" + i.name() + "}");
+                    }
+                    out.add(i);
+                    continue;
+                }
+                checkKeys(e, path, INSULATOR_KEYS);
+                Entry kappa = entry(required(e, path, INSULATOR_KEYS[0]), path + "." + INSULATOR_KEYS[0], "1");
+                Entry gap = entry(required(e, path, INSULATOR_KEYS[1]), path + "." + INSULATOR_KEYS[1], "eV");
+                Entry cbo = entry(required(e, path, INSULATOR_KEYS[2]), path + "." + INSULATOR_KEYS[2], "eV");
+                String source = INSULATOR_KEYS[0] + ": " + cite(kappa, path + "." + INSULATOR_KEYS[0]) + "; "
+                        + INSULATOR_KEYS[1] + ": " + cite(gap, path + "." + INSULATOR_KEYS[1]) + "; "
+                        + INSULATOR_KEYS[2] + ": " + cite(cbo, path + "." + INSULATOR_KEYS[2]);
+                try {
+                    out.add(new Insulator(m.key(), kappa.fileValue(), gap.fileValue(), cbo.fileValue(), source));
+                } catch (InvalidParameterException ex) {
+                    String p = ex.parameter();
+                    Entry bad = p.startsWith("relative permittivity") ? kappa : p.startsWith("band gap") ? gap : cbo;
+                    String key = bad == kappa ? INSULATOR_KEYS[0] : bad == gap ? INSULATOR_KEYS[1] : INSULATOR_KEYS[2];
+                    throw fail(path + "." + key, bad.line(), ex.getMessage());
+                }
+            }
+            return List.copyOf(out);
+        }
+
+        /** The citations of an entry's sources, then its note in brackets if it has one. */
+        private String cite(Entry e, String path) {
+            List<String> c = new ArrayList<>();
+            for (Source src : e.sources()) {
+                c.add(src.citation());
+            }
+            String note = notes.get(path);
+            return String.join(" + ", c) + (note == null ? "" : " [" + note + "]");
         }
 
         private void readSources(JsonTree.Obj obj) {

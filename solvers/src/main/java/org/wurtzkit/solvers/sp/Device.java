@@ -358,16 +358,7 @@ final class Device {
         quasiFermiUniform = uniform;
         deepFollowHoles = new boolean[rows]; // insulator rows hold no deep levels: false
         for (int li = 0; li < nl; li++) {
-            double donors = 0;
-            double acceptors = 0;
-            for (Dopant dp : states.get(li).layer().dopants()) {
-                if (dp.kind() == Dopant.Kind.DONOR) {
-                    donors += dp.densityPerM3();
-                } else {
-                    acceptors += dp.densityPerM3();
-                }
-            }
-            deepFollowHoles[li] = acceptors > donors;
+            deepFollowHoles[li] = grownPType(states.get(li));
         }
         BottomBoundary bottom = s.bottom();
         if (bottom instanceof BottomBoundary.FixedFermiLevel f) {
@@ -398,6 +389,20 @@ final class Device {
         }
     }
 
+    /** Whether a layer is grown p-type: its shallow acceptors outnumber its shallow donors. */
+    private static boolean grownPType(LayerState state) {
+        double donors = 0;
+        double acceptors = 0;
+        for (Dopant dp : state.layer().dopants()) {
+            if (dp.kind() == Dopant.Kind.DONOR) {
+                donors += dp.densityPerM3();
+            } else {
+                acceptors += dp.densityPerM3();
+            }
+        }
+        return acceptors > donors;
+    }
+
     /**
      * Fills efn and efp per cell: the documented defaults of {@link QuasiFermiLevels}, then each rule
      * over the cells whose midpoints it covers.
@@ -408,6 +413,12 @@ final class Device {
         double channel = channelDepth;
         double gateSideBottom = Double.isNaN(channel) ? states.get(0).depthBottom() : channel;
         double gateLevel = FermiContact.GATE.levelEv(gateBiasV);
+        // an insulator between gate metal and nitride (QuasiFermiLevels.HolesUnderInsulator): the
+        // holes above the channel follow the channel in p-type layers (all of them with
+        // CHANNEL_EVERYWHERE) and take the level giving fewer holes, max(gate, channel), elsewhere
+        QuasiFermiLevels.HolesUnderInsulator under = q.holesUnderInsulator();
+        boolean insulated = !s.gateStack().isEmpty() && under != QuasiFermiLevels.HolesUnderInsulator.GATE;
+        double scarceLevel = Math.max(gateLevel, 0);
         for (int k = 0; k < cells; k++) {
             efn[k] = 0;
             contactN[k] = FermiContact.CHANNEL;
@@ -419,8 +430,15 @@ final class Device {
             }
             double bottomOfLayer = states.get(layerOfCell[k]).depthBottom();
             boolean gateSide = bottomOfLayer <= gateSideBottom * (1 + 1e-12);
-            efp[k] = gateSide ? gateLevel : 0;
-            contactP[k] = gateSide ? FermiContact.GATE : FermiContact.CHANNEL;
+            if (gateSide && insulated) {
+                boolean toChannel = under == QuasiFermiLevels.HolesUnderInsulator.CHANNEL_EVERYWHERE
+                        || grownPType(states.get(layerOfCell[k]));
+                efp[k] = toChannel ? 0 : scarceLevel;
+                contactP[k] = toChannel || scarceLevel == 0 ? FermiContact.CHANNEL : FermiContact.GATE;
+            } else {
+                efp[k] = gateSide ? gateLevel : 0;
+                contactP[k] = gateSide ? FermiContact.GATE : FermiContact.CHANNEL;
+            }
         }
         List<QuasiFermiLevels.Rule> rules = q.rules();
         if (rules.isEmpty()) {

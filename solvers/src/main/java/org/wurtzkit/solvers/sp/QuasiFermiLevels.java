@@ -21,6 +21,30 @@ import org.wurtzkit.errors.Require;
  * a free surface (no gate) the two contacts coincide at 0 eV. So a p-GaN gate layer, and the
  * barrier under it, follow the gate (holes drain into the gate metal), while a buried p-type back
  * barrier under the channel follows the channel and keeps its holes whatever the gate does.</li>
+ * <li><b>Holes under an insulator</b> ({@link HolesUnderInsulator}, default
+ * {@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS}): with a gate stack ({@code Structure.gateStack()}
+ * not empty) the gate metal cannot exchange holes with the nitride, since no steady current crosses
+ * an ideal insulator. A layer above the channel grown p-type (shallow acceptors outnumbering shallow
+ * donors) then follows the channel: its holes are majority carriers, which come to equilibrium with
+ * the semiconductor's own contacts in a steady state without current, and the gate bias drops across
+ * the insulator and the accumulation or depletion layer under it (the ideal MIS capacitor of S. M. Sze
+ * and K. K. Ng, Physics of Semiconductor Devices, 3rd ed., Wiley 2007, ch. 4: one flat Fermi level in
+ * the semiconductor at every gate bias). So a p-GaN layer under 10 nm of Al2O3 accumulates holes at
+ * its top face at reverse bias and is depleted at forward bias, where the rule without an insulator
+ * (holes at the gate's level) would leave its top face unchanged and shift the whole layer with the
+ * gate. In the other layers above the channel (an undoped or n-type barrier) holes are minority
+ * carriers whose only supply under an insulator is thermal generation, negligible in a wide-gap
+ * nitride on the time scale of a gate sweep: such a layer goes into deep depletion rather than
+ * inversion (Sze and Ng, ch. 4), and the solve gives it the level of the contact that supplies fewer
+ * holes, max(gate, channel): the gate's at reverse bias (no hole inversion layer screens the gate,
+ * so an MIS-HEMT pinches off), the channel's at forward bias (the gate cannot inject holes through
+ * the insulator). {@link HolesUnderInsulator#CHANNEL_EVERYWHERE} puts every layer above the channel
+ * at the channel's level (full equilibrium, hole inversion included); {@link HolesUnderInsulator#GATE}
+ * keeps the rule without an insulator (an insulator that leaks holes freely). A layer whose holes
+ * are cut off from both contacts on the time scale of interest (a floating p-GaN) takes a rule with
+ * {@link FermiContact#floating(double)}. The supply of a p-layer's holes behind a barrier is slow
+ * too, so a fast measurement may not reach this steady state; {@code Solution.toString()} says so
+ * when holes gather under the insulator.</li>
  * </ul>
  * Rules override the defaults where they apply; a rule names a layer (every layer of that name) or
  * a depth range, and applies to the mesh cells whose midpoints lie inside it.
@@ -41,16 +65,37 @@ import org.wurtzkit.errors.Require;
  * the carrier concerned is depleted.
  *
  * @param rules the rules, in the order given; for each carrier no two may overlap
+ * @param holesUnderInsulator the default contact of the holes above the channel when an insulator
+ *        separates them from the gate metal
  */
-public record QuasiFermiLevels(List<Rule> rules) {
+public record QuasiFermiLevels(List<Rule> rules, HolesUnderInsulator holesUnderInsulator) {
     private static final QuasiFermiLevels DEFAULTS = new QuasiFermiLevels(List.of());
+
+    /**
+     * The contact of the holes above the channel when a gate stack separates them from the gate
+     * metal (the rules override it where they apply).
+     */
+    public enum HolesUnderInsulator {
+        /**
+         * Layers grown p-type follow the channel's contacts (0 eV); the other layers take the level
+         * giving fewer holes, max(gate, channel) (deep depletion rather than inversion). The default.
+         */
+        CHANNEL_FOR_P_LAYERS,
+        /** Every layer above the channel follows the channel's contacts (full equilibrium). */
+        CHANNEL_EVERYWHERE,
+        /** The gate's level, as without an insulator: an insulator leaking holes freely. */
+        GATE
+    }
 
     /**
      * Copies and validates the rules: none null, no two for the same carrier overlapping.
      *
      * @param rules the rules, in the order given; for each carrier no two may overlap
+     * @param holesUnderInsulator the default contact of the holes above the channel under a gate
+     *        stack, not null
      */
     public QuasiFermiLevels {
+        Require.nonNull("holes-under-insulator rule", holesUnderInsulator);
         Require.nonNull("quasi-Fermi rules", rules);
         rules = List.copyOf(rules);
         for (int i = 0; i < rules.size(); i++) {
@@ -65,9 +110,28 @@ public record QuasiFermiLevels(List<Rule> rules) {
         }
     }
 
-    /** {@return the documented defaults: no rules} */
+    /**
+     * Rules with the default holes under an insulator ({@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS}).
+     *
+     * @param rules the rules, in the order given; for each carrier no two may overlap
+     */
+    public QuasiFermiLevels(List<Rule> rules) {
+        this(rules, HolesUnderInsulator.CHANNEL_FOR_P_LAYERS);
+    }
+
+    /** {@return the documented defaults: no rules, {@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS}} */
     public static QuasiFermiLevels defaults() {
         return DEFAULTS;
+    }
+
+    /**
+     * {@return a copy with the given contact for the holes above the channel under a gate stack}
+     *
+     * @param choice {@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS} (the default),
+     *        {@link HolesUnderInsulator#CHANNEL_EVERYWHERE} or {@link HolesUnderInsulator#GATE}
+     */
+    public QuasiFermiLevels withHolesUnderInsulator(HolesUnderInsulator choice) {
+        return new QuasiFermiLevels(rules, Require.nonNull("holes-under-insulator rule", choice));
     }
 
     /**
@@ -103,7 +167,7 @@ public record QuasiFermiLevels(List<Rule> rules) {
     public QuasiFermiLevels with(Rule rule) {
         List<Rule> r = new ArrayList<>(rules);
         r.add(Require.nonNull("quasi-Fermi rule", rule));
-        return new QuasiFermiLevels(r);
+        return new QuasiFermiLevels(r, holesUnderInsulator);
     }
 
     /**

@@ -12,11 +12,14 @@ import org.wurtzkit.errors.InvalidParameterException;
  * rules joined by {@code ;}, each {@code <carrier>|layer|<name>|<contact>} or
  * {@code <carrier>|depths|<top m>|<bottom m>|<contact>}, with the contact {@code gate}, {@code channel}
  * or {@code floating <eV>} and numbers written by {@link Double#toString(double)}, so that reading
- * gives back an equal record; the defaults (no rules) are the empty text.
+ * gives back an equal record; a non-default {@link QuasiFermiLevels.HolesUnderInsulator} adds the
+ * item {@code holesUnderInsulator|<choice>} (lower case); the defaults (no rules) are the empty text.
  */
 final class QuasiFermiLevelsText {
     private static final String ALLOWED = "rules \"<carrier>|layer|<name>|<contact>\" or "
-            + "\"<carrier>|depths|<top m>|<bottom m>|<contact>\" joined by ';'";
+            + "\"<carrier>|depths|<top m>|<bottom m>|<contact>\" and optionally \"holesUnderInsulator|<channel_everywhere or gate>\", joined by ';'";
+
+    private static final String HOLES_UNDER_INSULATOR = "holesUnderInsulator";
 
     private QuasiFermiLevelsText() {
     }
@@ -41,6 +44,12 @@ final class QuasiFermiLevelsText {
             }
             sb.append('|').append(contact(r.contact()));
         }
+        if (q.holesUnderInsulator() != QuasiFermiLevels.HolesUnderInsulator.CHANNEL_FOR_P_LAYERS) {
+            if (sb.length() > 0) {
+                sb.append(';');
+            }
+            sb.append(HOLES_UNDER_INSULATOR).append('|').append(q.holesUnderInsulator().name().toLowerCase(Locale.ROOT));
+        }
         return sb.toString();
     }
 
@@ -59,6 +68,11 @@ final class QuasiFermiLevelsText {
         try {
             for (String rule : text.split(";", -1)) {
                 String[] f = rule.split("\\|", -1);
+                if (f.length == 2 && HOLES_UNDER_INSULATOR.equals(f[0])) {
+                    q = q.withHolesUnderInsulator(
+                            QuasiFermiLevels.HolesUnderInsulator.valueOf(f[1].toUpperCase(Locale.ROOT)));
+                    continue;
+                }
                 Carrier carrier = Carrier.valueOf(f[0].toUpperCase(Locale.ROOT));
                 if (f.length == 4 && "layer".equals(f[1])) {
                     q = q.withLayer(carrier, f[2], contact(f[3], text));

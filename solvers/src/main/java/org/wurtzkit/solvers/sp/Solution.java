@@ -558,8 +558,9 @@ public final class Solution {
         sb.append(Warning.lines(warnings));
         if (holesUnderInsulator > HOLE_WARNING_PER_M2) {
             sb.append("\n  warning: ").append(Decimals.format(Units.perM2ToPerCm2(holesUnderInsulator), "cm^-2"))
-                    .append(" of holes within 5 nm under the gate stack; their supply is set by the hole quasi-Fermi")
-                    .append(" level option, which an insulator makes uncertain");
+                    .append(" of holes within 5 nm under the gate stack, at the hole quasi-Fermi level of")
+                    .append(" QuasiFermiLevels (by default the channel's): a steady state, which a measurement faster")
+                    .append(" than their supply (generation, leakage through the barrier) does not reach");
         }
         return sb.toString();
     }

@@ -47,10 +47,12 @@
  * is a nodal charge; interface states are integrated over the gap (package-private
  * {@code InterfaceStateQuadrature}) and occupied from the Fermi level chosen in one package-private
  * method, {@code Device.interfaceStateFermiLevelEv}: the electrons' quasi-Fermi level of the
- * nitride region the states sit in (with the default rules the channel's, 0 eV). Holes under an insulator follow {@link org.wurtzkit.solvers.sp.QuasiFermiLevels} like
- * holes anywhere else, which is shaky there (the insulator cuts them off from the gate): a
- * structure whose barrier face carries a strongly negative net sheet may show a hole layer under the
- * insulator.
+ * nitride region the states sit in (with the default rules the channel's, 0 eV). Under an insulator,
+ * which cuts them off from the gate metal, the holes of a p-type layer follow the channel by default
+ * and other layers go into deep depletion rather than inversion
+ * ({@link org.wurtzkit.solvers.sp.QuasiFermiLevels.HolesUnderInsulator}); a structure whose barrier
+ * face carries a strongly negative net sheet may show a hole layer under the insulator, a steady
+ * state that the solution's text flags, since a fast measurement may not reach it.
  * <p>
  * A sweep starts each point from a potential extrapolated through the last converged solutions
  * ({@link org.wurtzkit.solvers.sp.PotentialPredictor}),

@@ -91,6 +91,11 @@ final class PerturbedParameterSet implements ParameterSet {
     }
 
     @Override
+    public List<org.wurtzkit.material.Insulator> insulators() {
+        return base.insulators();
+    }
+
+    @Override
     public List<Source> sources() {
         List<Source> s = new ArrayList<>(base.sources());
         s.add(SOURCE);
