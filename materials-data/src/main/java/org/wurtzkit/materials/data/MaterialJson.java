@@ -105,7 +105,8 @@ final class MaterialJson {
                 g.writeStartObject();
                 StructureJson.number(g, "fraction", x[i]);
                 StructureJson.quantity(g, "gapAtZeroKelvin", b[i].gap0KEv(), StructureJson.Units.EV);
-                StructureJson.quantity(g, "varshniAlpha", b[i].alphaEvPerK(), StructureJson.Units.EV_PER_K);
+                StructureJson.quantity(g, "varshniAlpha", b[i].alphaEvPerK(), StructureJson.Units.MEV_PER_K,
+                        StructureJson.Units.EV_PER_K);
                 StructureJson.quantity(g, "varshniBeta", b[i].betaK(), StructureJson.Units.KELVIN);
                 g.writeEndObject();
             }
@@ -136,6 +137,13 @@ final class MaterialJson {
             JsonTree.Obj po = t.object(t.required(params, pp, p.key()).value(), kp);
             t.onlyKeys(po, kp, Set.of("value", "unit", "rule", "sources"));
             double v = t.valueAndUnit(po, kp, units(p));
+            double inFileUnit = v / p.fileToSi();
+            if (!(inFileUnit >= p.plausibleMinInFileUnit() && inFileUnit <= p.plausibleMaxInFileUnit())) {
+                // the material builder refuses it too; said here at the parameter's own key and line
+                throw t.fail(kp, po.line(), StructureFormatException.Reason.INVALID_VALUE, p.key() + " = "
+                        + inFileUnit + " " + p.fileUnit() + " is outside its plausible range "
+                        + p.plausibleRangeText() + " for a wurtzite nitride (a value outside it is usually a unit slip)");
+            }
             String rule = t.string(t.required(po, kp, "rule").value(), kp + ".rule");
             List<JsonTree.Node> list = t.array(t.required(po, kp, "sources").value(), kp + ".sources");
             List<Source> sources = new ArrayList<>();

@@ -535,7 +535,8 @@ public final class StructureJson {
         static final List<Unit> SHEET_PER_EV = List.of(PER_M2_EV, PER_CM2_EV);
         static final List<Unit> J_PER_M2 = List.of(new Unit("J/m^2", 1));
         static final List<Unit> DEGREE = List.of(new Unit("deg", 1));
-        static final List<Unit> EV_PER_K = List.of(new Unit("eV/K", 1));
+        static final Unit MEV_PER_K = new Unit("meV/K", 1e-3);
+        static final List<Unit> EV_PER_K = List.of(MEV_PER_K, new Unit("eV/K", 1));
 
         private Units() {
         }
@@ -662,18 +663,24 @@ public final class StructureJson {
         try (JsonParser p = FACTORY.createParser(new StringReader(json))) {
             parsed = JsonTree.read(p);
         } catch (JsonTree.SyntaxFailure f) {
-            throw new StructureFormatException(fileName, f.path(), f.line(), StructureFormatException.Reason.SYNTAX,
-                    f.problem(), f.getCause());
+            throw new StructureFormatException(fileName, arrayPath(f.path()), f.line(),
+                    StructureFormatException.Reason.SYNTAX, f.problem(), f.getCause());
         } catch (IOException e) {
             throw new StructureFormatException(fileName, "(root)", 0, StructureFormatException.Reason.SYNTAX,
                     "the text cannot be read: " + e, e);
         }
         if (parsed.firstDuplicate() != null) {
             JsonTree.Duplicate d = parsed.firstDuplicate();
-            throw new StructureFormatException(fileName, d.path(), d.line(), StructureFormatException.Reason.SYNTAX,
+            throw new StructureFormatException(fileName, arrayPath(d.path()), d.line(),
+                    StructureFormatException.Reason.SYNTAX,
                     "the key is given twice (first on line " + d.firstLine() + ")", null);
         }
         return parsed.root();
+    }
+
+    /** A tree path in the stack reader's spelling: "layers[0].name", not "layers.[0].name". */
+    private static String arrayPath(String treePath) {
+        return treePath.replace(".[", "[");
     }
 
     /** Checks and converts one stack object; every failure names file, key path and line. */

@@ -73,6 +73,8 @@ class StructureJsonRoundTripProperties {
                 .anyMatch(p -> !p.sheet().states().isEmpty()));
         Statistics.label("custom material").collect(s.layersBottomUp().stream()
                 .anyMatch(l -> l.material() instanceof LayerMaterial.Custom));
+        Statistics.label("custom per-binary gap").collect(s.layersBottomUp().stream()
+                .anyMatch(l -> l.material() instanceof LayerMaterial.Custom c && c.material().bandGap().perBinary() != null));
         String text = StructureJson.write(s);
         Structure back = StructureJson.reader().read(text, "property");
         assertEquals(s, back);
@@ -182,17 +184,23 @@ class StructureJsonRoundTripProperties {
         return Combinators.combine(real(-1e19, 1e19), states.list().ofMaxSize(2)).as(SheetSpec::new);
     }
 
+    /** The default set with the per-binary Varshni rule, whose alloys carry a per-binary gap form. */
+    static final org.wurtzkit.material.ParameterSet PER_BINARY_GAP = ParameterSets.defaultSet()
+            .derive("per-binary-gap").alloyGapTemperatureRule(
+                    org.wurtzkit.material.AlloyGapTemperatureRule.VARSHNI_PER_BINARY_THEN_BOWING).build();
+
     /**
-     * A custom material: an alloy of the default set re-made under its own name, with C13 and the
-     * parallel electron mass changed by up to 5 % under a team's own source, and at times its own
-     * 0 K gap (which replaces the binaries' per-binary gap form by one Varshni law).
+     * A custom material: an alloy of the default set, or of its per-binary-gap variant, re-made under
+     * its own name, with C13 and the parallel electron mass changed by up to 5 % under a team's own
+     * source, and at times its own 0 K gap (which replaces a per-binary gap form by one Varshni law).
      */
     static Arbitrary<WurtziteMaterial> customMaterials() {
         return Combinators.combine(Arbitraries.strings().ofMinLength(1).ofMaxLength(12), compositions(),
-                real(0.95, 1.05), real(0.95, 1.05), Arbitraries.of(true, false),
+                real(0.95, 1.05), real(0.95, 1.05), Arbitraries.integers().between(0, 3),
                 Arbitraries.strings().alpha().ofMinLength(1).ofMaxLength(6), Arbitraries.strings().ofMaxLength(30),
-                Arbitraries.of(true, false)).as((name, c, f13, fm, ownGap, key, citation, keepComposition) -> {
-                    WurtziteMaterial base = ParameterSets.defaultSet().material(c);
+                Arbitraries.of(true, false)).as((name, c, f13, fm, choice, key, citation, keepComposition) -> {
+                    boolean ownGap = (choice & 1) != 0;
+                    WurtziteMaterial base = ((choice & 2) != 0 ? PER_BINARY_GAP : ParameterSets.defaultSet()).material(c);
                     Source team = new Source(key, citation, "invented for a property test");
                     WurtziteMaterial.Builder b = base.toBuilder(name)
                             .composition(keepComposition ? c : null)

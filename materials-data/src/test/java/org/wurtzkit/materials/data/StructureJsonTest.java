@@ -149,7 +149,8 @@ class StructureJsonTest {
         StructureJson.writeFile(s, f);
         assertEquals(s, StructureJson.readFile(f));
         StructureCodec codec = StructureCodec.installed().orElseThrow();
-        assertEquals(1, codec.formatVersion());
+        assertEquals(StructureJson.FORMAT_VERSION, codec.formatVersion());
+        assertEquals(2, codec.formatVersion());
         assertEquals(Files.readString(f), codec.write(s));
         assertEquals(s, codec.read(codec.writeCompact(s), "codec"));
     }
