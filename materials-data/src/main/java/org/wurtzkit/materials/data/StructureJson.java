@@ -475,6 +475,28 @@ public final class StructureJson {
         g.writeEndObject();
     }
 
+    /**
+     * The shortest decimal text t with {@code parseDouble(t) * factor == si} bit for bit, or null:
+     * the quotient si / factor rounded to 1, 2, ... 17 significant digits, the first that converts
+     * back exactly. 15 nm made as 15 * 1e-9 m goes out as "15.0" although 1.5e-8 / 1e-9 is
+     * 15.000000000000002 (division does not undo multiplication in binary floating point; common
+     * practice, no source).
+     */
+    private static String shortestText(double si, double factor) {
+        double x = si / factor;
+        if (x != 0 && Double.isFinite(x)) {
+            java.math.BigDecimal exact = new java.math.BigDecimal(x);
+            for (int digits = 1; digits <= 17; digits++) {
+                String t = Double.toString(exact.round(new java.math.MathContext(digits)).doubleValue());
+                if (Double.doubleToRawLongBits(Double.parseDouble(t) * factor) == Double.doubleToRawLongBits(si)) {
+                    return t;
+                }
+            }
+        }
+        String t = Double.toString(x);
+        return Double.doubleToRawLongBits(Double.parseDouble(t) * factor) == Double.doubleToRawLongBits(si) ? t : null;
+    }
+
     /** The shortest exact text of {@code si} in a unit of the family: {text, unit symbol}. */
     private static String[] shortestExact(double si, Unit preferred, List<Unit> family) {
         Unit unit = null;
@@ -483,10 +505,8 @@ public final class StructureJson {
         order.remove(preferred);
         order.add(0, preferred);
         for (Unit u : order) {
-            String t = Double.toString(si / u.toSi);
-            double back = Double.parseDouble(t) * u.toSi;
-            if (Double.doubleToRawLongBits(back) == Double.doubleToRawLongBits(si)
-                    && (text == null || t.length() < text.length())) {
+            String t = shortestText(si, u.toSi);
+            if (t != null && (text == null || t.length() < text.length())) {
                 unit = u;
                 text = t;
             }
