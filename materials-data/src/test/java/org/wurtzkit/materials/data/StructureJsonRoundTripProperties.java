@@ -66,7 +66,7 @@ class StructureJsonRoundTripProperties {
      * equal, writing is a fixed point, and version 1 refuses exactly those that hold something only
      * version 2 can.
      */
-    @Property(tries = 150)
+    @Property(tries = 100)
     void anyVersionTwoStructureSurvivesWriteAndRead(@ForAll("versionTwoStructures") Structure s) {
         Statistics.label("gate stack").collect(!s.gateStack().isEmpty());
         Statistics.label("interface states").collect(s.interfaceSheets().stream()
