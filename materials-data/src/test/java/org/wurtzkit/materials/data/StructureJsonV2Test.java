@@ -93,6 +93,25 @@ class StructureJsonV2Test {
         assertEquals(text, rewritten, "the golden file is exactly what the writer writes (set hash aside)");
     }
 
+    /**
+     * What version 2 cannot hold, and says so: a custom material whose per-binary gap form has a
+     * binary that is itself per-binary (no rule of the library makes one; built here by hand).
+     */
+    @Test
+    void aNestedPerBinaryGapIsTheOneThingVersionTwoRefuses() {
+        WurtziteMaterial gan = ParameterSets.defaultSet().binary(org.wurtzkit.material.Binary.GAN);
+        org.wurtzkit.material.BandGap inner = new org.wurtzkit.material.BandGap(3.51, 0.909e-3, 830,
+                new org.wurtzkit.material.BandGap.PerBinary(new double[] {1},
+                        new org.wurtzkit.material.BandGap[] {gan.bandGap()}, 0));
+        WurtziteMaterial nested = gan.toBuilder("nested").perBinaryGap(new org.wurtzkit.material.BandGap.PerBinary(
+                new double[] {1}, new org.wurtzkit.material.BandGap[] {inner}, 0)).build();
+        Structure s = Structure.builder(ParameterSets.defaultSet()).grow(Layer.of("own", nested, 100 * NM))
+                .top(TopBoundary.schottky(1)).build();
+        StructureFormatException e = assertThrows(StructureFormatException.class, () -> StructureJson.write(s));
+        assertEquals(StructureFormatException.Reason.NOT_WRITABLE, e.reason());
+        assertTrue(e.getMessage().contains("\"own\"") && e.getMessage().contains("itself per-binary"), e.getMessage());
+    }
+
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "\"name\": \"spacer\"|\"name\": \"spacer\", \"sheetsOnTop\": []|layersFromSurface[2].sheetsOnTop",
