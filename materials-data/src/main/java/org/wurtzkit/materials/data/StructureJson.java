@@ -115,7 +115,8 @@ import org.wurtzkit.structure.TopBoundary;
  * added is an error in a version-1 file). {@link #write(Structure)} writes the newest version;
  * {@link #write(Structure, int)} writes version 1 on request, and refuses (NOT_WRITABLE) a structure
  * that version 1 cannot hold instead of dropping what it cannot hold. The reader never writes, so a
- * version-1 file stays version 1 until someone writes it again.
+ * version-1 file stays version 1 until someone writes it again; {@link #formatVersionOf} tells which
+ * version a text declares, to write a changed stack back in the same version.
  *
  * <p>Rules of change: an unknown key is an error, so that a typo never passes silently. A later
  * version adds a new section either as an optional key of a new {@code formatVersion} (this reader
@@ -698,6 +699,36 @@ public final class StructureJson {
         return parsed.root();
     }
 
+    /** The declared format version of a stack object, checked to be one this class reads. */
+    private static int version(TreeReader t, JsonTree.Obj root) {
+        JsonTree.Member version = t.required(root, "", "formatVersion");
+        double v = t.number(version.value(), "formatVersion");
+        if (v != 1 && v != 2) {
+            throw t.fail("formatVersion", version.value().line(), StructureFormatException.Reason.UNSUPPORTED_VERSION,
+                    "format version " + ((JsonTree.Num) version.value()).text() + " is not known to this reader;"
+                            + " allowed: " + OLDEST_FORMAT_VERSION + " to " + FORMAT_VERSION
+                            + " (a newer wurtzkit may read it)");
+        }
+        return (int) v;
+    }
+
+    /**
+     * The format version a stack text declares, e.g. to write a changed stack back in the version it
+     * was read in: {@code StructureJson.write(changed, StructureJson.formatVersionOf(text, name))}.
+     *
+     * @param json     the JSON text of a stack
+     * @param fileName where it comes from, for error messages
+     * @return its {@code formatVersion}, {@value #OLDEST_FORMAT_VERSION} to {@value #FORMAT_VERSION}
+     * @throws StructureFormatException if the text is not JSON, has no {@code formatVersion} or
+     *         declares one this class does not read
+     */
+    public static int formatVersionOf(String json, String fileName) {
+        Require.nonNull("stack JSON text", json);
+        Require.nonNull("stack file name", fileName);
+        TreeReader t = new TreeReader(fileName, "");
+        return version(t, t.object(parse(json, fileName), ""));
+    }
+
     /** A tree path in the stack reader's spelling: "layers[0].name", not "layers.[0].name". */
     private static String arrayPath(String treePath) {
         return treePath.replace(".[", "[");
@@ -717,15 +748,7 @@ public final class StructureJson {
 
         Structure structure(JsonTree.Node node) {
             JsonTree.Obj root = t.object(node, "");
-            JsonTree.Member version = t.required(root, "", "formatVersion");
-            double v = t.number(version.value(), "formatVersion");
-            if (v != 1 && v != 2) {
-                throw t.fail("formatVersion", version.value().line(), StructureFormatException.Reason.UNSUPPORTED_VERSION,
-                        "format version " + ((JsonTree.Num) version.value()).text() + " is not known to this reader;"
-                                + " allowed: " + OLDEST_FORMAT_VERSION + " to " + FORMAT_VERSION
-                                + " (a newer wurtzkit may read it)");
-            }
-            this.version = (int) v;
+            this.version = version(t, root);
             t.onlyKeys(root, "", keys(root, "", Set.of("formatVersion", "parameterSet", "temperature", "polarity",
                     "polarizationModel", "bandLineUp", "strainShiftsBandEdges", "substrateLattice", "top", "bottom",
                     "layersFromSurface"), "criticalThicknessModel", "gateStackFromTop"));

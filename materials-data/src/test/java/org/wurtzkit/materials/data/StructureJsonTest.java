@@ -211,6 +211,11 @@ class StructureJsonTest {
         org.wurtzkit.errors.InvalidParameterException e = assertThrows(
                 org.wurtzkit.errors.InvalidParameterException.class, () -> StructureJson.write(s, 3));
         assertTrue(e.getMessage().contains("stack format version"), e.getMessage());
+        assertEquals(1, StructureJson.formatVersionOf(resource("tnl-0731-wafer.json"), "v1"));
+        assertEquals(2, StructureJson.formatVersionOf(StructureJson.write(s), "v2"));
+        StructureFormatException old = assertThrows(StructureFormatException.class,
+                () -> StructureJson.formatVersionOf("{\"formatVersion\": 3}", "v3.json"));
+        assertEquals(StructureFormatException.Reason.UNSUPPORTED_VERSION, old.reason());
         assertEquals(StructureJson.SCHEMA_RESOURCE_V1, StructureJson.schemaResource(1));
         assertEquals(StructureJson.SCHEMA_RESOURCE, StructureJson.schemaResource(2));
     }
