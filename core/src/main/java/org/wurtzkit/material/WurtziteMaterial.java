@@ -287,8 +287,17 @@ public final class WurtziteMaterial {
             return set(p, value, Provenance.tabulated(Require.nonNull("source of " + p.key(), source)));
         }
 
-        /** Sets the per-binary gap form (by {@link AlloyRules}, after the gap parameters). */
-        Builder perBinaryGap(BandGap.PerBinary form) {
+        /**
+         * Sets the per-binary form of the gap ({@link BandGap#perBinary()}): the alloy's gap at T as
+         * the binaries' Varshni gaps weighted by their fractions, minus the bowing term. Set it after
+         * the gap parameters, since setting {@link MaterialParameter#BAND_GAP_0K},
+         * {@link MaterialParameter#VARSHNI_ALPHA} or {@link MaterialParameter#VARSHNI_BETA} clears it.
+         * Used by the alloy rules and by readers that restore a material exactly.
+         *
+         * @param form the per-binary form, or null for the single Varshni law of the gap parameters
+         * @return this builder
+         */
+        public Builder perBinaryGap(BandGap.PerBinary form) {
             this.perBinaryGap = form;
             return this;
         }

@@ -79,8 +79,10 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
      * The lines of a CSV file's header, without the comment marker: who produced the result, the
      * parameter set and its hash, the solver options, every warning and the structure. The
      * structure is written on one line in the JSON format of the installed {@link StructureCodec};
-     * when none is on the class path (materials-data absent), or the format cannot hold the stack (a
-     * layer of a custom material), its summary is written instead and the line says why.
+     * when none is on the class path (materials-data absent), or the format cannot hold the stack (of
+     * the stack format's version 2: only a custom material whose per-binary gap has a binary that is
+     * itself per-binary, which no rule of the library makes), its summary is written instead and the
+     * line says why.
      *
      * @return the lines, none containing a line break
      */
@@ -100,7 +102,7 @@ public record ResultProvenance(String libraryVersion, Structure structure, Strin
                 out.add("structure: " + codec.get().writeCompact(structure));
                 return Collections.unmodifiableList(out);
             } catch (WurtzkitException e) {
-                // a stack the format cannot hold (a layer of a custom material): say so, keep the table
+                // a stack the format cannot hold: say so, keep the table
                 why = e.getMessage().replace('\r', ' ').replace('\n', ' ');
             }
         }

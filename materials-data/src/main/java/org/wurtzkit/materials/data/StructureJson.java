@@ -27,12 +27,16 @@ import org.wurtzkit.material.ParameterSetHash;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.material.PolarizationModel;
 import org.wurtzkit.polarization.Polarity;
+import org.wurtzkit.strain.CriticalThicknessModel;
 import org.wurtzkit.structure.BottomBoundary;
 import org.wurtzkit.structure.DeepLevel;
 import org.wurtzkit.structure.DeltaDoping;
 import org.wurtzkit.structure.Dopant;
+import org.wurtzkit.structure.InsulatorLayer;
+import org.wurtzkit.structure.InterfaceSheet;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.LayerMaterial;
+import org.wurtzkit.structure.PlacedSheet;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 
@@ -51,12 +55,12 @@ import org.wurtzkit.structure.TopBoundary;
  * Solution s = new SelfConsistentSolver().solve(hemt, SolverOptions.defaults());
  * }</pre>
  *
- * <p>The shape (format version 1; the JSON Schema {@value #SCHEMA_RESOURCE} ships in this jar and
- * is the full reference):
+ * <p>The shape (format version 2; the JSON Schema {@value #SCHEMA_RESOURCE} ships in this jar and
+ * is the full reference, {@value #SCHEMA_RESOURCE_V1} that of version 1):
  *
  * <pre>
  * {
- *   "formatVersion": 1,
+ *   "formatVersion": 2,
  *   "parameterSet": {"name": "vurgaftman-meyer-2003", "sha256": "64 hex digits (optional)"},
  *   "temperature": {"value": 300.0, "unit": "K"},
  *   "polarity": "metal-face" | "N-face",
@@ -67,32 +71,63 @@ import org.wurtzkit.structure.TopBoundary;
  *   "top": {"kind": "schottky-gate", "barrierHeight": {..eV}, "bias": {..V}}
  *        | {"kind": "free-surface", "donorLevelBelowConductionBand": {..eV}, "donorDensity": {..cm^-2}},
  *   "bottom": {"kind": "zero-field"} | {"kind": "fixed-fermi-level", "conductionBandAboveFermi": {..eV}},
+ *   "criticalThicknessModel": {"kind": "c-plane-wurtzite", "underCompression": {"kind": "pyramidal-slip"},
+ *                              "underTension": {"kind": "channel-cracking", "fractureResistance": {..J/m^2}}}
+ *                           | {"kind": "matthews-blakeslee", "lineToBurgersVectorAngle": {..deg},
+ *                              "slipToInterfaceNormalAngle": {..deg}} | ...,            (version 2)
+ *   "gateStackFromTop": [{"name": "gate oxide", "insulator": {"builtIn": "Al2O3"}
+ *                          | {"name": .., "relativePermittivity": 9.0, "bandGap": {..eV},
+ *                             "conductionBandOffsetToGaN": {..eV}, "source": "authors, journal, year"},
+ *                         "thickness": {..nm}}],                                        (version 2)
  *   "layersFromSurface": [
  *     {"name": "barrier",
  *      "material": {"kind": "alloy", "composition": {"al": 0.25, "in": 0.0}}
- *                | {"kind": "graded", "bottom": {"al": .., "in": ..}, "top": {"al": .., "in": ..}},
+ *                | {"kind": "graded", "bottom": {"al": .., "in": ..}, "top": {"al": .., "in": ..}}
+ *                | {"kind": "custom", "definition": {every parameter with value, unit and sources}},  (version 2)
  *      "thickness": {"value": 25.0, "unit": "nm"}, "relaxation": 0.0,
- *      "dopants": [{"type": "donor" | "acceptor", "density": {..cm^-3}, "ionizationEnergy": {..eV}, "degeneracy": 2.0}],
+ *      "dopants": [{"type": "donor" | "acceptor", "density": {..cm^-3}, "ionizationEnergy": {..eV}, "degeneracy": 2.0,
+ *                   "ionization": "from-fermi-level" | "full" (version 2)}],
  *      "deepLevels": [{"type": "donor-like" | "acceptor-like", "density": {..cm^-3}, "belowConductionBand": {..eV}}],
  *      "deltaSheets": [{"type": "donor" | "acceptor", "sheetDensity": {..cm^-2}, "ionizationEnergy": {..eV},
- *                       "belowLayerTop": {..nm}}]}
+ *                       "belowLayerTop": {..nm}}],
+ *      "sheetsOnTop": [{"fixedCharge": {..cm^-2, signed}, "states": [{"neutralLevelBelowConductionBand": {..eV},
+ *                       "distribution": {"shape": "uniform", "density": {..cm^-2 eV^-1}}
+ *                                     | {"shape": "gaussian", "peakDensity", "centreBelowConductionBand", "width"}
+ *                                     | {"shape": "u-shaped", "floorDensity", "bandEdgeDensity",
+ *                                        "conductionTailWidth", "valenceTailWidth"}
+ *                                     | {"shape": "discrete", "density": {..cm^-2}, "levelBelowConductionBand"}}]}]
+ *                                                                                       (version 2)
+ *     }
  *   ]
  * }
  * </pre>
  *
- * Layers are listed from the surface down, as a stack is drawn. Only {@code formatVersion},
- * {@code parameterSet}, {@code top} and {@code layersFromSurface} (each layer's {@code name},
- * {@code material} and {@code thickness}) are required; an omitted key takes the default of
- * {@link Structure.Builder} (300 K, metal-face, the set's recommended polarization model, the
- * valence-band table, no strain shifts, the bottom layer's own lattice, zero field at the bottom,
- * no dopants, relaxation 0). The writer always writes every key.
+ * Layers are listed from the surface down, as a stack is drawn, and so is the gate stack. Only
+ * {@code formatVersion}, {@code parameterSet}, {@code top} and {@code layersFromSurface} (each
+ * layer's {@code name}, {@code material} and {@code thickness}) are required; an omitted key takes
+ * the default of {@link Structure.Builder} (300 K, metal-face, the set's recommended polarization
+ * model, the set's band line-up, no strain shifts, the bottom layer's own lattice, zero field at the
+ * bottom, the default critical-thickness model, no gate stack, no dopants, no sheets, ionization
+ * from the Fermi level, relaxation 0). The writer always writes every key.
+ *
+ * <p>Versions: the reader reads versions {@value #OLDEST_FORMAT_VERSION} and {@value #FORMAT_VERSION}
+ * (a version-1 file gives the same structure as before version 2 existed; a key that version 2
+ * added is an error in a version-1 file). {@link #write(Structure)} writes the newest version;
+ * {@link #write(Structure, int)} writes version 1 on request, and refuses (NOT_WRITABLE) a structure
+ * that version 1 cannot hold instead of dropping what it cannot hold. The reader never writes, so a
+ * version-1 file stays version 1 until someone writes it again; {@link #formatVersionOf} tells which
+ * version a text declares, to write a changed stack back in the same version.
  *
  * <p>Rules of change: an unknown key is an error, so that a typo never passes silently. A later
  * version adds a new section either as an optional key of a new {@code formatVersion} (this reader
- * then refuses the newer file with a clear message, and the newer reader keeps reading version 1)
- * or, for a choice whose absence means today's behaviour, as an optional key that the writer omits
- * when it holds the default. Layers of a custom material ({@link LayerMaterial.Custom}) are not part
- * of version 1: define the material in a parameter set instead (the writer says so).
+ * then refuses the newer file with a clear message, and the newer reader keeps reading the older
+ * versions) or, for a choice whose absence means today's behaviour, as an optional key that the
+ * writer omits when it holds the default. Version 2 holds every structure the builder makes, with
+ * one exception that no rule of the library produces: a custom material whose per-binary gap has a
+ * binary that is itself per-binary (NOT_WRITABLE). Insulators equal to a built-in one
+ * ({@link org.wurtzkit.material.Insulators}) are written by name, others inline with their source;
+ * a custom material is written inline with every parameter's value and provenance, so that the file
+ * stands alone.
  *
  * <p>The parameter set is found by name among the registered sets ({@link ParameterSets}) and the
  * sets given to {@link Reader#withSet(ParameterSet)}; when the file records a hash and the set's
@@ -102,11 +137,21 @@ import org.wurtzkit.structure.TopBoundary;
  * {@link StructureFormatException} naming file, key path and line.
  */
 public final class StructureJson {
-    /** The format version this class writes. */
-    public static final int FORMAT_VERSION = 1;
+    /**
+     * The format version this class writes unless asked for another: the newest, {@value}. Version 2
+     * adds gate stacks, interface sheets, fully ionized dopants, the critical-thickness model and
+     * layers of a custom material to version 1.
+     */
+    public static final int FORMAT_VERSION = 2;
 
-    /** Class-path resource of the JSON Schema (draft 2020-12) of format version 1. */
-    public static final String SCHEMA_RESOURCE = "/org/wurtzkit/materials/data/schema/stack-v1.schema.json";
+    /** The oldest format version this class reads and can write on request: {@value}. */
+    public static final int OLDEST_FORMAT_VERSION = 1;
+
+    /** Class-path resource of the JSON Schema (draft 2020-12) of the newest format version ({@value}). */
+    public static final String SCHEMA_RESOURCE = "/org/wurtzkit/materials/data/schema/stack-v2.schema.json";
+
+    /** Class-path resource of the JSON Schema (draft 2020-12) of format version 1 ({@value}). */
+    public static final String SCHEMA_RESOURCE_V1 = "/org/wurtzkit/materials/data/schema/stack-v1.schema.json";
 
     static final JsonFactory FACTORY = JsonFactory.builder().build();
 
@@ -118,25 +163,55 @@ public final class StructureJson {
     // ------------------------------------------------------------------ writing
 
     /**
+     * Writes the structure in the newest format version ({@value #FORMAT_VERSION}).
+     *
      * @param structure a structure
      * @return its JSON text, indented by two spaces, ending with a line break
-     * @throws StructureFormatException of reason NOT_WRITABLE for a layer of a custom material
+     * @throws StructureFormatException of reason NOT_WRITABLE for a custom material whose per-binary
+     *         gap form has a binary that is itself per-binary (no rule of the library makes one)
      */
     public static String write(Structure structure) {
-        return text(structure, true);
+        return text(structure, true, FORMAT_VERSION);
+    }
+
+    /**
+     * Writes the structure in the format version asked for, e.g. version 1 for a reader that
+     * predates version 2. Version 1 cannot hold what version 2 added (gate stacks, interface sheets,
+     * fully ionized dopants, a critical-thickness model other than the default, custom materials):
+     * such a structure is refused, never written without them.
+     *
+     * @param structure     a structure
+     * @param formatVersion {@value #OLDEST_FORMAT_VERSION} to {@value #FORMAT_VERSION}
+     * @return its JSON text, indented by two spaces, ending with a line break
+     * @throws StructureFormatException of reason NOT_WRITABLE if that version cannot hold the structure
+     * @throws InvalidParameterException for an unknown format version
+     */
+    public static String write(Structure structure, int formatVersion) {
+        return text(structure, true, checkVersion(formatVersion));
     }
 
     /**
      * @param structure a structure
-     * @return its JSON text on one line
-     * @throws StructureFormatException of reason NOT_WRITABLE for a layer of a custom material
+     * @return its JSON text on one line, in the newest format version
+     * @throws StructureFormatException of reason NOT_WRITABLE as for {@link #write(Structure)}
      */
     public static String writeCompact(Structure structure) {
-        return text(structure, false);
+        return text(structure, false, FORMAT_VERSION);
     }
 
     /**
-     * Writes the structure to a file (UTF-8), replacing it if it exists.
+     * @param structure     a structure
+     * @param formatVersion {@value #OLDEST_FORMAT_VERSION} to {@value #FORMAT_VERSION}
+     * @return its JSON text on one line, in that format version
+     * @throws StructureFormatException of reason NOT_WRITABLE as for {@link #write(Structure, int)}
+     * @throws InvalidParameterException for an unknown format version
+     */
+    public static String writeCompact(Structure structure, int formatVersion) {
+        return text(structure, false, checkVersion(formatVersion));
+    }
+
+    /**
+     * Writes the structure to a file (UTF-8) in the newest format version, replacing it if it exists.
      *
      * @param structure a structure
      * @param path      the file
@@ -147,11 +222,38 @@ public final class StructureJson {
         Files.writeString(path, write(structure), StandardCharsets.UTF_8);
     }
 
-    private static String text(Structure structure, boolean pretty) {
+    /**
+     * Writes the structure to a file (UTF-8) in the format version asked for, replacing it if it exists.
+     *
+     * @param structure     a structure
+     * @param path          the file
+     * @param formatVersion {@value #OLDEST_FORMAT_VERSION} to {@value #FORMAT_VERSION}
+     * @throws IOException from the file system
+     * @throws StructureFormatException of reason NOT_WRITABLE if that version cannot hold the structure
+     */
+    public static void writeFile(Structure structure, Path path, int formatVersion) throws IOException {
+        Require.nonNull("path", path);
+        Files.writeString(path, write(structure, formatVersion), StandardCharsets.UTF_8);
+    }
+
+    /**
+     * @param formatVersion a format version
+     * @return the class-path resource of its JSON Schema
+     * @throws InvalidParameterException for an unknown format version
+     */
+    public static String schemaResource(int formatVersion) {
+        return checkVersion(formatVersion) == 1 ? SCHEMA_RESOURCE_V1 : SCHEMA_RESOURCE;
+    }
+
+    private static int checkVersion(int formatVersion) {
+        return Require.inRange("stack format version", formatVersion, OLDEST_FORMAT_VERSION, FORMAT_VERSION);
+    }
+
+    private static String text(Structure structure, boolean pretty, int version) {
         Require.nonNull("structure", structure);
         StringWriter w = new StringWriter();
         try (JsonGenerator g = generator(w, pretty)) {
-            writeStructure(g, structure);
+            writeStructure(g, structure, version);
         } catch (IOException e) {
             throw new UncheckedIOException(e); // a StringWriter does not throw
         }
@@ -169,45 +271,24 @@ public final class StructureJson {
         return g;
     }
 
-    /** Writes the structure as one JSON object at the generator's position. */
+    /** Writes the structure in the newest format version as one JSON object at the generator's position. */
     static void writeStructure(JsonGenerator g, Structure s) throws IOException {
-        for (Layer l : s.layersBottomUp()) {
-            if (l.material() instanceof LayerMaterial.Custom c) {
-                throw new StructureFormatException("(writing)", "layersFromSurface", 0,
-                        StructureFormatException.Reason.NOT_WRITABLE,
-                        "layer \"" + l.name() + "\" is made of the custom material \"" + c.material().name()
-                                + "\", which format version " + FORMAT_VERSION
-                                + " cannot hold; put the material in a parameter set (ParameterSet.derive) and use"
-                                + " a composition",
-                        null);
-            }
-        }
-        // model choices added to the structure after format version 1 was fixed: refuse rather than
-        // drop them, so that a written stack never reads back as a different one
-        List<String> cannot = new java.util.ArrayList<>();
-        if (!s.gateStack().isEmpty()) {
-            cannot.add("a gate stack of " + s.gateStack().size() + " insulator layer(s)");
-        }
-        if (!s.interfaceSheets().isEmpty()) {
-            cannot.add(s.interfaceSheets().size() + " interface sheet(s) (fixed charge, interface states)");
-        }
-        if (!s.criticalThicknessModel().equals(org.wurtzkit.strain.CriticalThicknessModel.C_PLANE_WURTZITE)) {
-            cannot.add("a critical-thickness model other than the default");
-        }
-        for (Layer l : s.layersBottomUp()) {
-            for (org.wurtzkit.structure.Dopant d : l.dopants()) {
-                if (d.ionization() != org.wurtzkit.structure.Dopant.Ionization.FROM_FERMI_LEVEL) {
-                    cannot.add("a fully ionized dopant in layer \"" + l.name() + "\"");
+        writeStructure(g, s, FORMAT_VERSION);
+    }
+
+    /** Writes the structure in format version {@code version} as one JSON object at the generator's position. */
+    static void writeStructure(JsonGenerator g, Structure s, int version) throws IOException {
+        if (version == 1) {
+            refuseWhatVersionOneCannotHold(s);
+        } else {
+            for (Layer l : s.layersBottomUp()) {
+                if (l.material() instanceof LayerMaterial.Custom c) {
+                    MaterialJson.checkWritable(c.material(), l.name());
                 }
             }
         }
-        if (!cannot.isEmpty()) {
-            throw new StructureFormatException("(writing)", "(root)", 0, StructureFormatException.Reason.NOT_WRITABLE,
-                    "format version " + FORMAT_VERSION + " cannot hold " + String.join(", ", cannot)
-                            + "; a later format version will", null);
-        }
         g.writeStartObject();
-        g.writeNumberField("formatVersion", FORMAT_VERSION);
+        g.writeNumberField("formatVersion", version);
         g.writeObjectFieldStart("parameterSet");
         g.writeStringField("name", s.parameters().name());
         g.writeStringField("sha256", ParameterSetHash.sha256(s.parameters()));
@@ -249,15 +330,67 @@ public final class StructureJson {
             g.writeStringField("kind", "zero-field");
         }
         g.writeEndObject();
+        if (version >= 2) {
+            StackParts.criticalThicknessModel(g, "criticalThicknessModel", s.criticalThicknessModel());
+            g.writeArrayFieldStart("gateStackFromTop");
+            for (InsulatorLayer il : s.gateStack()) {
+                StackParts.insulatorLayer(g, il);
+            }
+            g.writeEndArray();
+        }
         g.writeArrayFieldStart("layersFromSurface");
-        for (Layer l : s.layersTopDown()) {
-            writeLayer(g, l);
+        List<Layer> topDown = s.layersTopDown();
+        for (int i = 0; i < topDown.size(); i++) {
+            List<PlacedSheet> sheets = new java.util.ArrayList<>();
+            for (PlacedSheet p : s.interfaceSheets()) {
+                if (p.nitrideIndex() == i) {
+                    sheets.add(p);
+                }
+            }
+            writeLayer(g, topDown.get(i), version, sheets);
         }
         g.writeEndArray();
         g.writeEndObject();
     }
 
-    private static void writeLayer(JsonGenerator g, Layer l) throws IOException {
+    /**
+     * Format version 1 predates gate stacks, interface sheets, fully ionized dopants, the
+     * critical-thickness model and custom materials: refuse rather than drop them, so that a written
+     * stack never reads back as a different one.
+     */
+    private static void refuseWhatVersionOneCannotHold(Structure s) {
+        List<String> cannot = new java.util.ArrayList<>();
+        for (Layer l : s.layersBottomUp()) {
+            if (l.material() instanceof LayerMaterial.Custom c) {
+                cannot.add("layer \"" + l.name() + "\" of the custom material \"" + c.material().name() + "\"");
+            }
+        }
+        if (!s.gateStack().isEmpty()) {
+            cannot.add("a gate stack of " + s.gateStack().size() + " insulator layer(s)");
+        }
+        if (!s.interfaceSheets().isEmpty()) {
+            cannot.add(s.interfaceSheets().size() + " interface sheet(s) (fixed charge, interface states)");
+        }
+        if (!s.criticalThicknessModel().equals(CriticalThicknessModel.C_PLANE_WURTZITE)) {
+            cannot.add("a critical-thickness model other than the default");
+        }
+        for (Layer l : s.layersBottomUp()) {
+            for (Dopant d : l.dopants()) {
+                if (d.ionization() != Dopant.Ionization.FROM_FERMI_LEVEL) {
+                    cannot.add("a fully ionized dopant in layer \"" + l.name() + "\"");
+                }
+            }
+        }
+        if (!cannot.isEmpty()) {
+            throw new StructureFormatException("(writing)", "(root)", 0, StructureFormatException.Reason.NOT_WRITABLE,
+                    "format version 1 cannot hold " + String.join(", ", cannot) + "; write format version "
+                            + FORMAT_VERSION + " (StructureJson.write(structure))",
+                    null);
+        }
+    }
+
+    private static void writeLayer(JsonGenerator g, Layer l, int version, List<PlacedSheet> sheets)
+            throws IOException {
         g.writeStartObject();
         g.writeStringField("name", l.name());
         g.writeObjectFieldStart("material");
@@ -265,6 +398,9 @@ public final class StructureJson {
             g.writeStringField("kind", "graded");
             composition(g, "bottom", gr.bottom());
             composition(g, "top", gr.top());
+        } else if (l.material() instanceof LayerMaterial.Custom c) {
+            g.writeStringField("kind", "custom");
+            MaterialJson.write(g, "definition", c.material());
         } else {
             g.writeStringField("kind", "alloy");
             composition(g, "composition", ((LayerMaterial.Alloy) l.material()).composition());
@@ -279,6 +415,9 @@ public final class StructureJson {
             quantity(g, "density", d.densityPerM3(), Units.PER_CM3, Units.VOLUME);
             quantity(g, "ionizationEnergy", d.ionizationEnergyEv(), Units.EV);
             number(g, "degeneracy", d.degeneracy());
+            if (version >= 2) {
+                g.writeStringField("ionization", d.ionization() == Dopant.Ionization.FULL ? "full" : "from-fermi-level");
+            }
             g.writeEndObject();
         }
         g.writeEndArray();
@@ -301,6 +440,13 @@ public final class StructureJson {
             g.writeEndObject();
         }
         g.writeEndArray();
+        if (version >= 2) {
+            g.writeArrayFieldStart("sheetsOnTop");
+            for (PlacedSheet p : sheets) {
+                StackParts.interfaceSheet(g, p.sheet());
+            }
+            g.writeEndArray();
+        }
         g.writeEndObject();
     }
 
@@ -323,18 +469,45 @@ public final class StructureJson {
      * 1e-9 gives exactly, goes out as "1.8E-6 m" rather than "1799.9999999999998 nm". The SI unit
      * (factor 1) always converts back exactly, so a unit is always found.
      */
-    private static void quantity(JsonGenerator g, String key, double si, Unit preferred, List<Unit> family)
+    static void quantity(JsonGenerator g, String key, double si, Unit preferred, List<Unit> family)
             throws IOException {
+        g.writeObjectFieldStart(key);
+        valueAndUnit(g, si, preferred, family);
+        g.writeEndObject();
+    }
+
+    /**
+     * The shortest decimal text t with {@code parseDouble(t) * factor == si} bit for bit, or null:
+     * the quotient si / factor rounded to 1, 2, ... 17 significant digits, the first that converts
+     * back exactly. 15 nm made as 15 * 1e-9 m goes out as "15.0" although 1.5e-8 / 1e-9 is
+     * 15.000000000000002 (division does not undo multiplication in binary floating point; common
+     * practice, no source).
+     */
+    private static String shortestText(double si, double factor) {
+        double x = si / factor;
+        if (x != 0 && Double.isFinite(x)) {
+            java.math.BigDecimal exact = new java.math.BigDecimal(x);
+            for (int digits = 1; digits <= 17; digits++) {
+                String t = Double.toString(exact.round(new java.math.MathContext(digits)).doubleValue());
+                if (Double.doubleToRawLongBits(Double.parseDouble(t) * factor) == Double.doubleToRawLongBits(si)) {
+                    return t;
+                }
+            }
+        }
+        String t = Double.toString(x);
+        return Double.doubleToRawLongBits(Double.parseDouble(t) * factor) == Double.doubleToRawLongBits(si) ? t : null;
+    }
+
+    /** The shortest exact text of {@code si} in a unit of the family: {text, unit symbol}. */
+    private static String[] shortestExact(double si, Unit preferred, List<Unit> family) {
         Unit unit = null;
         String text = null;
         List<Unit> order = new java.util.ArrayList<>(family);
         order.remove(preferred);
         order.add(0, preferred);
         for (Unit u : order) {
-            String t = Double.toString(si / u.toSi);
-            double back = Double.parseDouble(t) * u.toSi;
-            if (Double.doubleToRawLongBits(back) == Double.doubleToRawLongBits(si)
-                    && (text == null || t.length() < text.length())) {
+            String t = shortestText(si, u.toSi);
+            if (t != null && (text == null || t.length() < text.length())) {
                 unit = u;
                 text = t;
             }
@@ -342,11 +515,15 @@ public final class StructureJson {
         if (unit == null) {
             throw new AssertionError("no unit of " + family + " holds " + si + " exactly; the SI unit always does");
         }
-        g.writeObjectFieldStart(key);
+        return new String[] {text, unit.symbol};
+    }
+
+    /** Writes the fields "value" and "unit" of a quantity into the object being written (see quantity). */
+    static void valueAndUnit(JsonGenerator g, double si, Unit preferred, List<Unit> family) throws IOException {
+        String[] vu = shortestExact(si, preferred, family);
         g.writeFieldName("value");
-        g.writeNumber(text);
-        g.writeStringField("unit", unit.symbol);
-        g.writeEndObject();
+        g.writeNumber(vu[0]);
+        g.writeStringField("unit", vu[1]);
     }
 
     // ------------------------------------------------------------------ units
@@ -374,12 +551,19 @@ public final class StructureJson {
         static final List<Unit> LENGTH = List.of(METRE, NANOMETRE, MICROMETRE, ANGSTROM);
         static final List<Unit> VOLUME = List.of(PER_M3, PER_CM3);
         static final List<Unit> SHEET = List.of(PER_M2, PER_CM2);
+        static final Unit PER_M2_EV = new Unit("m^-2 eV^-1", 1);
+        static final Unit PER_CM2_EV = new Unit("cm^-2 eV^-1", 1e4);
+        static final List<Unit> SHEET_PER_EV = List.of(PER_M2_EV, PER_CM2_EV);
+        static final List<Unit> J_PER_M2 = List.of(new Unit("J/m^2", 1));
+        static final List<Unit> DEGREE = List.of(new Unit("deg", 1));
+        static final Unit MEV_PER_K = new Unit("meV/K", 1e-3);
+        static final List<Unit> EV_PER_K = List.of(MEV_PER_K, new Unit("eV/K", 1));
 
         private Units() {
         }
     }
 
-    private static void quantity(JsonGenerator g, String key, double si, List<Unit> family) throws IOException {
+    static void quantity(JsonGenerator g, String key, double si, List<Unit> family) throws IOException {
         quantity(g, key, si, family.get(0), family);
     }
 
@@ -500,24 +684,62 @@ public final class StructureJson {
         try (JsonParser p = FACTORY.createParser(new StringReader(json))) {
             parsed = JsonTree.read(p);
         } catch (JsonTree.SyntaxFailure f) {
-            throw new StructureFormatException(fileName, f.path(), f.line(), StructureFormatException.Reason.SYNTAX,
-                    f.problem(), f.getCause());
+            throw new StructureFormatException(fileName, arrayPath(f.path()), f.line(),
+                    StructureFormatException.Reason.SYNTAX, f.problem(), f.getCause());
         } catch (IOException e) {
             throw new StructureFormatException(fileName, "(root)", 0, StructureFormatException.Reason.SYNTAX,
                     "the text cannot be read: " + e, e);
         }
         if (parsed.firstDuplicate() != null) {
             JsonTree.Duplicate d = parsed.firstDuplicate();
-            throw new StructureFormatException(fileName, d.path(), d.line(), StructureFormatException.Reason.SYNTAX,
+            throw new StructureFormatException(fileName, arrayPath(d.path()), d.line(),
+                    StructureFormatException.Reason.SYNTAX,
                     "the key is given twice (first on line " + d.firstLine() + ")", null);
         }
         return parsed.root();
+    }
+
+    /** The declared format version of a stack object, checked to be one this class reads. */
+    private static int version(TreeReader t, JsonTree.Obj root) {
+        JsonTree.Member version = t.required(root, "", "formatVersion");
+        double v = t.number(version.value(), "formatVersion");
+        if (v != 1 && v != 2) {
+            throw t.fail("formatVersion", version.value().line(), StructureFormatException.Reason.UNSUPPORTED_VERSION,
+                    "format version " + ((JsonTree.Num) version.value()).text() + " is not known to this reader;"
+                            + " allowed: " + OLDEST_FORMAT_VERSION + " to " + FORMAT_VERSION
+                            + " (a newer wurtzkit may read it)");
+        }
+        return (int) v;
+    }
+
+    /**
+     * The format version a stack text declares, e.g. to write a changed stack back in the version it
+     * was read in: {@code StructureJson.write(changed, StructureJson.formatVersionOf(text, name))}.
+     *
+     * @param json     the JSON text of a stack
+     * @param fileName where it comes from, for error messages
+     * @return its {@code formatVersion}, {@value #OLDEST_FORMAT_VERSION} to {@value #FORMAT_VERSION}
+     * @throws StructureFormatException if the text is not JSON, has no {@code formatVersion} or
+     *         declares one this class does not read
+     */
+    public static int formatVersionOf(String json, String fileName) {
+        Require.nonNull("stack JSON text", json);
+        Require.nonNull("stack file name", fileName);
+        TreeReader t = new TreeReader(fileName, "");
+        return version(t, t.object(parse(json, fileName), ""));
+    }
+
+    /** A tree path in the stack reader's spelling: "layers[0].name", not "layers.[0].name". */
+    private static String arrayPath(String treePath) {
+        return treePath.replace(".[", "[");
     }
 
     /** Checks and converts one stack object; every failure names file, key path and line. */
     private static final class StackReader {
         private final Reader options;
         private final TreeReader t;
+        /** The file's format version, known once its root is read. */
+        private int version;
 
         StackReader(Reader options, String fileName, String prefix) {
             this.options = options;
@@ -526,15 +748,10 @@ public final class StructureJson {
 
         Structure structure(JsonTree.Node node) {
             JsonTree.Obj root = t.object(node, "");
-            t.onlyKeys(root, "", Set.of("formatVersion", "parameterSet", "temperature", "polarity", "polarizationModel",
-                    "bandLineUp", "strainShiftsBandEdges", "substrateLattice", "top", "bottom", "layersFromSurface"));
-            JsonTree.Member version = t.required(root, "", "formatVersion");
-            double v = t.number(version.value(), "formatVersion");
-            if (v != FORMAT_VERSION) {
-                throw t.fail("formatVersion", version.value().line(), StructureFormatException.Reason.UNSUPPORTED_VERSION,
-                        "format version " + ((JsonTree.Num) version.value()).text() + " is not known to this reader;"
-                                + " allowed: " + FORMAT_VERSION + " (a newer wurtzkit may read it)");
-            }
+            this.version = version(t, root);
+            t.onlyKeys(root, "", keys(root, "", Set.of("formatVersion", "parameterSet", "temperature", "polarity",
+                    "polarizationModel", "bandLineUp", "strainShiftsBandEdges", "substrateLattice", "top", "bottom",
+                    "layersFromSurface"), "criticalThicknessModel", "gateStackFromTop"));
             ParameterSet set = parameterSet(root);
             Structure.Builder b = Structure.builder(set);
             JsonTree.Member m;
@@ -584,6 +801,10 @@ public final class StructureJson {
             if ((m = root.get("bottom")) != null) {
                 bottom(b, m);
             }
+            if ((m = root.get("criticalThicknessModel")) != null) {
+                b.criticalThicknessModel(StackParts.criticalThicknessModel(t, m.value(), "criticalThicknessModel",
+                        false));
+            }
             JsonTree.Member layers = t.required(root, "", "layersFromSurface");
             List<JsonTree.Node> list = t.array(layers.value(), "layersFromSurface");
             if (list.isEmpty()) {
@@ -591,10 +812,50 @@ public final class StructureJson {
                         "the stack has no layers: number of layers = 0, allowed range [1, ...)");
             }
             for (int i = list.size() - 1; i >= 0; i--) {
-                Layer l = layer(list.get(i), "layersFromSurface[" + i + "]");
+                String path = "layersFromSurface[" + i + "]";
+                Layer l = layer(list.get(i), path);
                 b.grow(l);
+                JsonTree.Member sm = ((JsonTree.Obj) list.get(i)).get("sheetsOnTop");
+                if (sm != null) {
+                    List<JsonTree.Node> sheets = t.array(sm.value(), path + ".sheetsOnTop");
+                    for (int k = 0; k < sheets.size(); k++) {
+                        String sp = path + ".sheetsOnTop[" + k + "]";
+                        InterfaceSheet sheet = StackParts.interfaceSheet(t, sheets.get(k), sp);
+                        t.apply(sp, sheets.get(k).line(), () -> b.sheetOnTop(sheet));
+                    }
+                }
             }
-            return b.build();
+            if ((m = root.get("gateStackFromTop")) != null) {
+                List<JsonTree.Node> gs = t.array(m.value(), "gateStackFromTop");
+                for (int i = gs.size() - 1; i >= 0; i--) {
+                    String path = "gateStackFromTop[" + i + "]";
+                    InsulatorLayer il = StackParts.insulatorLayer(t, gs.get(i), path);
+                    t.apply(path, gs.get(i).line(), () -> b.deposit(il));
+                }
+            }
+            return t.apply("", root.line(), b::build);
+        }
+
+        /**
+         * The keys allowed in an object: those of version 1, plus those version 2 added when the file
+         * is of version 2 (in a version-1 file they are unknown keys, named as such by onlyKeys).
+         */
+        private Set<String> keys(JsonTree.Obj o, String path, Set<String> v1, String... addedInV2) {
+            if (version < 2) {
+                for (String k : addedInV2) {
+                    JsonTree.Member m = o.get(k);
+                    if (m != null) {
+                        throw t.fail(path.isEmpty() ? k : path + "." + k, m.line(),
+                                StructureFormatException.Reason.UNKNOWN_KEY, "the key \"" + k + "\" belongs to format"
+                                        + " version 2, but the file declares formatVersion " + version
+                                        + "; set \"formatVersion\": 2 to use it");
+                    }
+                }
+                return v1;
+            }
+            Set<String> all = new java.util.HashSet<>(v1);
+            all.addAll(List.of(addedInV2));
+            return all;
         }
 
         private ParameterSet parameterSet(JsonTree.Obj root) {
@@ -658,8 +919,8 @@ public final class StructureJson {
 
         private Layer layer(JsonTree.Node node, String path) {
             JsonTree.Obj o = t.object(node, path);
-            t.onlyKeys(o, path, Set.of("name", "material", "thickness", "relaxation", "dopants", "deepLevels",
-                    "deltaSheets"));
+            t.onlyKeys(o, path, keys(o, path, Set.of("name", "material", "thickness", "relaxation", "dopants", "deepLevels",
+                    "deltaSheets"), "sheetsOnTop"));
             String name = t.string(t.required(o, path, "name").value(), path + ".name");
             LayerMaterial material = material(t.required(o, path, "material").value(), path + ".material");
             JsonTree.Member th = t.required(o, path, "thickness");
@@ -678,7 +939,7 @@ public final class StructureJson {
                 for (int i = 0; i < ds.size(); i++) {
                     String p = path + ".dopants[" + i + "]";
                     JsonTree.Obj d = t.object(ds.get(i), p);
-                    t.onlyKeys(d, p, Set.of("type", "density", "ionizationEnergy", "degeneracy"));
+                    t.onlyKeys(d, p, keys(d, p, Set.of("type", "density", "ionizationEnergy", "degeneracy"), "ionization"));
                     String type = t.choice(t.required(d, p, "type").value(), p + ".type", "donor", "acceptor");
                     double n = t.quantity(t.required(d, p, "density").value(), p + ".density", Units.VOLUME);
                     double e = t.quantity(t.required(d, p, "ionizationEnergy").value(), p + ".ionizationEnergy",
@@ -687,8 +948,12 @@ public final class StructureJson {
                     Dopant.Kind kind = "donor".equals(type) ? Dopant.Kind.DONOR : Dopant.Kind.ACCEPTOR;
                     double g = gm == null ? (kind == Dopant.Kind.DONOR ? Dopant.DONOR_DEGENERACY
                             : Dopant.ACCEPTOR_DEGENERACY) : t.number(gm.value(), p + ".degeneracy");
+                    JsonTree.Member im = d.get("ionization");
+                    Dopant.Ionization ion = im == null || "from-fermi-level".equals(t.choice(im.value(),
+                            p + ".ionization", "from-fermi-level", "full")) ? Dopant.Ionization.FROM_FERMI_LEVEL
+                                    : Dopant.Ionization.FULL;
                     Layer base = l;
-                    l = t.apply(p, d.line(), () -> base.withDopant(new Dopant(kind, n, e, g)));
+                    l = t.apply(p, d.line(), () -> base.withDopant(new Dopant(kind, n, e, g, ion)));
                 }
             }
             if ((m = o.get("deepLevels")) != null) {
@@ -730,7 +995,14 @@ public final class StructureJson {
 
         private LayerMaterial material(JsonTree.Node node, String path) {
             JsonTree.Obj o = t.object(node, path);
-            String kind = t.choice(t.required(o, path, "kind").value(), path + ".kind", "alloy", "graded");
+            JsonTree.Node kindNode = t.required(o, path, "kind").value();
+            String kind = version < 2 ? t.choice(kindNode, path + ".kind", "alloy", "graded")
+                    : t.choice(kindNode, path + ".kind", "alloy", "graded", "custom");
+            if ("custom".equals(kind)) {
+                t.onlyKeys(o, path, Set.of("kind", "definition"));
+                return new LayerMaterial.Custom(MaterialJson.read(t, t.required(o, path, "definition").value(),
+                        path + ".definition"));
+            }
             if ("alloy".equals(kind)) {
                 t.onlyKeys(o, path, Set.of("kind", "composition"));
                 Composition c = composition(t.required(o, path, "composition").value(), path + ".composition");
@@ -743,14 +1015,19 @@ public final class StructureJson {
         }
 
         private Composition composition(JsonTree.Node node, String path) {
-            JsonTree.Obj o = t.object(node, path);
-            t.onlyKeys(o, path, Set.of("al", "in"));
-            JsonTree.Member al = o.get("al");
-            JsonTree.Member in = o.get("in");
-            double x = al == null ? 0 : t.number(al.value(), path + ".al");
-            double y = in == null ? 0 : t.number(in.value(), path + ".in");
-            return t.apply(path, o.line(), () -> new Composition(x, y));
+            return StructureJson.composition(t, node, path);
         }
+    }
+
+    /** A composition {"al": x, "in": y} (an omitted fraction is 0). */
+    static Composition composition(TreeReader t, JsonTree.Node node, String path) {
+        JsonTree.Obj o = t.object(node, path);
+        t.onlyKeys(o, path, Set.of("al", "in"));
+        JsonTree.Member al = o.get("al");
+        JsonTree.Member in = o.get("in");
+        double x = al == null ? 0 : t.number(al.value(), path + ".al");
+        double y = in == null ? 0 : t.number(in.value(), path + ".in");
+        return t.apply(path, o.line(), () -> new Composition(x, y));
     }
 
     /** Typed access to a line-annotated tree; every failure names file, full key path and line. */
@@ -876,6 +1153,11 @@ public final class StructureJson {
             }
             o = object(n, path);
             onlyKeys(o, path, Set.of("value", "unit"));
+            return valueAndUnit(o, path, units);
+        }
+
+        /** The "value" and "unit" of a quantity object that may hold other keys too, converted to SI. */
+        double valueAndUnit(JsonTree.Obj o, String path, List<Unit> units) {
             double v = number(required(o, path, "value").value(), path + ".value");
             JsonTree.Member um = o.get("unit");
             if (um == null) {

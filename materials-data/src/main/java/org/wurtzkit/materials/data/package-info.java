@@ -11,8 +11,9 @@
  * JSON file and a small provider in its own jar.
  *
  * <p>Stacks and results as data: {@link org.wurtzkit.materials.data.StructureJson} writes and reads
- * a {@link org.wurtzkit.structure.Structure} in wurtzkit's own versioned JSON format (schema
- * {@code schema/stack-v1.schema.json} beside this package), bit for bit, checking the recorded
+ * a {@link org.wurtzkit.structure.Structure} in wurtzkit's own versioned JSON format (schemas
+ * {@code schema/stack-v2.schema.json} and {@code schema/stack-v1.schema.json} beside this package;
+ * version 2 is written by default, both are read), bit for bit, checking the recorded
  * content hash of the parameter set; {@link org.wurtzkit.materials.data.StructureJsonCodec} offers it
  * to other modules as the {@link org.wurtzkit.structure.StructureCodec} service; and
  * {@link org.wurtzkit.materials.data.ProvenanceJson} writes and reads a result's

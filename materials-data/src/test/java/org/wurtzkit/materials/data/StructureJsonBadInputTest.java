@@ -126,7 +126,7 @@ class StructureJsonBadInputTest {
 
     @Test
     void aNewerFormatVersionIsRefused() {
-        StructureFormatException e = fails(GOOD.replace("\"formatVersion\": 1", "\"formatVersion\": 2"),
+        StructureFormatException e = fails(GOOD.replace("\"formatVersion\": 1", "\"formatVersion\": 3"),
                 StructureJson.reader());
         check(e, StructureFormatException.Reason.UNSUPPORTED_VERSION, "formatVersion", 2);
     }

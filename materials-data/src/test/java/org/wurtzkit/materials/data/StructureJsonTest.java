@@ -149,40 +149,74 @@ class StructureJsonTest {
         StructureJson.writeFile(s, f);
         assertEquals(s, StructureJson.readFile(f));
         StructureCodec codec = StructureCodec.installed().orElseThrow();
-        assertEquals(1, codec.formatVersion());
+        assertEquals(StructureJson.FORMAT_VERSION, codec.formatVersion());
+        assertEquals(2, codec.formatVersion());
         assertEquals(Files.readString(f), codec.write(s));
         assertEquals(s, codec.read(codec.writeCompact(s), "codec"));
     }
 
     /**
-     * Model choices that format version 1 cannot hold are refused, not dropped: a gate stack, an
-     * interface sheet and a fully ionized dopant would otherwise read back as another stack.
+     * Model choices that format version 1 cannot hold are refused when version 1 is asked for, not
+     * dropped: a gate stack, an interface sheet and a fully ionized dopant would otherwise read back
+     * as another stack. The default writer (version 2) holds them.
      */
     @Test
-    void modelChoicesBeyondVersionOneAreRefusedNotDropped() {
+    void modelChoicesBeyondVersionOneAreRefusedByVersionOneAndHeldByVersionTwo() {
         Structure.Builder b = Structure.builder(ParameterSets.defaultSet())
                 .grow(Layer.of("buffer", org.wurtzkit.material.Composition.GAN, 500 * NM));
         Structure gated = b.grow(Layer.of("barrier", org.wurtzkit.material.Composition.alGaN(0.25), 20 * NM))
                 .deposit(org.wurtzkit.structure.InsulatorLayer.ofNm(org.wurtzkit.material.Insulators.AL2O3, 10))
                 .top(TopBoundary.schottky(3)).build();
-        StructureFormatException e = assertThrows(StructureFormatException.class, () -> StructureJson.write(gated));
+        StructureFormatException e = assertThrows(StructureFormatException.class, () -> StructureJson.write(gated, 1));
         assertEquals(StructureFormatException.Reason.NOT_WRITABLE, e.reason());
         assertTrue(e.getMessage().contains("gate stack"), e.getMessage());
+        assertEquals(gated, StructureJson.reader().read(StructureJson.write(gated), "v2"));
+        assertTrue(StructureJson.write(gated).contains("\"builtIn\" : \"Al2O3\""), "a built-in insulator goes by name");
         Structure full = Structure.builder(ParameterSets.defaultSet())
                 .grow(Layer.of("buffer", org.wurtzkit.material.Composition.GAN, 500 * NM)
                         .withDopant(org.wurtzkit.structure.Dopant.donorsPerCm3(1e17, 0.02).fullyIonized()))
                 .top(TopBoundary.schottky(1)).build();
-        StructureFormatException f = assertThrows(StructureFormatException.class, () -> StructureJson.write(full));
+        StructureFormatException f = assertThrows(StructureFormatException.class, () -> StructureJson.write(full, 1));
         assertTrue(f.getMessage().contains("fully ionized dopant in layer \"buffer\""), f.getMessage());
+        assertEquals(full, StructureJson.reader().read(StructureJson.write(full), "v2"));
+        assertTrue(StructureJson.write(full).contains("\"ionization\" : \"full\""));
     }
 
     @Test
-    void aCustomMaterialLayerIsRefusedWithAReason() {
+    void aCustomMaterialLayerIsRefusedByVersionOneAndStandsAloneInVersionTwo() {
         WurtziteMaterial gan = ParameterSets.defaultSet().binary(org.wurtzkit.material.Binary.GAN);
         Structure s = Structure.builder(ParameterSets.defaultSet()).grow(Layer.of("own", gan, 100 * NM))
                 .top(TopBoundary.schottky(1)).build();
-        StructureFormatException e = assertThrows(StructureFormatException.class, () -> StructureJson.write(s));
+        StructureFormatException e = assertThrows(StructureFormatException.class, () -> StructureJson.write(s, 1));
         assertEquals(StructureFormatException.Reason.NOT_WRITABLE, e.reason());
         assertTrue(e.getMessage().contains("\"own\""), e.getMessage());
+        String text = StructureJson.write(s);
+        Structure back = StructureJson.reader().read(text, "v2");
+        assertEquals(s, back);
+        WurtziteMaterial read = ((org.wurtzkit.structure.LayerMaterial.Custom) back.layersBottomUp().get(0).material())
+                .material();
+        for (org.wurtzkit.material.MaterialParameter p : org.wurtzkit.material.MaterialParameter.values()) {
+            assertEquals(gan.source(p), read.source(p), p.key() + ": the provenance travels with the value");
+        }
+        assertEquals(gan.bandGap(), read.bandGap());
+    }
+
+    @Test
+    void theWriterWritesTheNewestVersionUnlessAskedAndRefusesAnUnknownOne() {
+        Structure s = golden("tnl-0731-wafer.json");
+        assertTrue(StructureJson.write(s).contains("\"formatVersion\" : 2,"));
+        assertTrue(StructureJson.write(s, 1).contains("\"formatVersion\" : 1,"));
+        assertTrue(StructureJson.writeCompact(s, 1).startsWith("{\"formatVersion\":1,"));
+        assertEquals(s, StructureJson.reader().read(StructureJson.write(s, 1), "v1"));
+        org.wurtzkit.errors.InvalidParameterException e = assertThrows(
+                org.wurtzkit.errors.InvalidParameterException.class, () -> StructureJson.write(s, 3));
+        assertTrue(e.getMessage().contains("stack format version"), e.getMessage());
+        assertEquals(1, StructureJson.formatVersionOf(resource("tnl-0731-wafer.json"), "v1"));
+        assertEquals(2, StructureJson.formatVersionOf(StructureJson.write(s), "v2"));
+        StructureFormatException old = assertThrows(StructureFormatException.class,
+                () -> StructureJson.formatVersionOf("{\"formatVersion\": 3}", "v3.json"));
+        assertEquals(StructureFormatException.Reason.UNSUPPORTED_VERSION, old.reason());
+        assertEquals(StructureJson.SCHEMA_RESOURCE_V1, StructureJson.schemaResource(1));
+        assertEquals(StructureJson.SCHEMA_RESOURCE, StructureJson.schemaResource(2));
     }
 }

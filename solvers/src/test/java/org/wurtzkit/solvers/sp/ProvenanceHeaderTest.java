@@ -35,13 +35,38 @@ class ProvenanceHeaderTest {
     }
 
     @Test
-    void aStackTheFormatCannotHoldIsSummarisedWithTheReason() {
+    void aCustomMaterialIsWrittenWholeIntoTheHeader() {
         Structure s = Structure.builder(ParameterSets.defaultSet())
                 .grow(Layer.of("own", ParameterSets.defaultSet().binary(Binary.GAN), 300 * NM))
                 .top(TopBoundary.schottky(1)).build();
         List<String> lines = ResultProvenance.of(s, SolverOptions.defaults().settings(), java.util.Map.of(), List.of())
                 .headerLines();
         String last = lines.get(lines.size() - 1);
-        assertTrue(last.startsWith("structure (summary; ") && last.contains("custom material"), last);
+        assertTrue(last.startsWith("structure: {"), last);
+        assertEquals(s, StructureJson.reader().read(last.substring("structure: ".length()), "header"));
+    }
+
+    /**
+     * The one stack the format cannot hold: a custom material whose per-binary gap has a binary that
+     * is itself per-binary (no rule of the library makes one; built here by hand).
+     */
+    @Test
+    void aStackTheFormatCannotHoldIsSummarisedWithTheReason() {
+        org.wurtzkit.material.WurtziteMaterial gan = ParameterSets.defaultSet().binary(Binary.GAN);
+        org.wurtzkit.material.BandGap inner = new org.wurtzkit.material.BandGap(3.51, 0.909e-3, 830,
+                new org.wurtzkit.material.BandGap.PerBinary(new double[] {1}, new org.wurtzkit.material.BandGap[] {
+                    gan.bandGap()}, 0));
+        org.wurtzkit.material.WurtziteMaterial nested = gan.toBuilder("nested gap form")
+                .perBinaryGap(new org.wurtzkit.material.BandGap.PerBinary(new double[] {1},
+                        new org.wurtzkit.material.BandGap[] {inner}, 0))
+                .build();
+        Structure s = Structure.builder(ParameterSets.defaultSet())
+                .grow(Layer.of("own", nested, 300 * NM))
+                .top(TopBoundary.schottky(1)).build();
+        List<String> lines = ResultProvenance.of(s, SolverOptions.defaults().settings(), java.util.Map.of(), List.of())
+                .headerLines();
+        String last = lines.get(lines.size() - 1);
+        assertTrue(last.startsWith("structure (summary; ") && last.contains("custom material")
+                && last.contains("itself per-binary"), last);
     }
 }

@@ -74,6 +74,40 @@ class ProvenanceReplayTest {
         assertBitIdentical(first, again);
     }
 
+    /**
+     * A MIS-HEMT (gate stack of built-in Al2O3 and an invented inline liner, a fixed charge and
+     * U-shaped interface states at the barrier's top face, a fully ionized buffer doping, a custom
+     * critical-thickness model): format version 2 of the stack files holds all of it, so its result
+     * too is repeated bit for bit from the side file, and its CSV head carries the stack as JSON.
+     */
+    @Test
+    void aMisHemtSolveIsRepeatedBitForBitFromItsJsonSideFile(@TempDir Path dir) throws IOException {
+        org.wurtzkit.material.Insulator liner = new org.wurtzkit.material.Insulator("TNL liner (invented)", 7.0, 5.1,
+                2.3, "invented for a test");
+        org.wurtzkit.structure.InterfaceSheet sheet = org.wurtzkit.structure.InterfaceSheet.fixedPerCm2(2.0e13)
+                .withStates(new org.wurtzkit.structure.InterfaceStates(new org.wurtzkit.structure.InterfaceStates.UShaped(
+                        5e15, 5e17, 0.15, 0.15), 1.8));
+        Structure mis = Structure.builder(ParameterSets.defaultSet())
+                .grow(org.wurtzkit.structure.Layer.of("buffer", org.wurtzkit.material.Composition.GAN, 400e-9)
+                        .withDopant(org.wurtzkit.structure.Dopant.donorsPerCm3(1e15, 0.02).fullyIonized()))
+                .grow(org.wurtzkit.structure.Layer.of("barrier", org.wurtzkit.material.Composition.alGaN(0.25), 18e-9))
+                .sheetOnTop(sheet)
+                .deposit(org.wurtzkit.structure.InsulatorLayer.ofNm(liner, 2))
+                .deposit(org.wurtzkit.structure.InsulatorLayer.ofNm(org.wurtzkit.material.Insulators.AL2O3, 10))
+                .criticalThicknessModel(new org.wurtzkit.strain.CriticalThicknessModel.ChannelCracking(6))
+                .top(TopBoundary.schottky(3.5).atBiasV(-2)).build();
+        Solution first = new SelfConsistentSolver(OPTIONS).solve(mis);
+        assertTrue(first.provenance().headerLines().stream().anyMatch(l -> l.startsWith("structure: {")),
+                "the CSV head holds the stack as JSON, not a summary");
+        Path side = dir.resolve("mis.provenance.json");
+        ProvenanceJson.writeFile(first.provenance(), side);
+        ResultProvenance read = ProvenanceJson.readFile(side, StructureJson.reader());
+        assertEquals(mis, read.structure());
+        Solution again = new SelfConsistentSolver(SolverOptions.fromSettings(read.solverOptions())).solve(read.structure());
+        assertBitIdentical(first, again);
+        assertArrayEquals(first.interfaceStateCharge(), again.interfaceStateCharge());
+    }
+
     @Test
     void aSweepIsRepeatedBitForBitFromTheHeadOfItsCsv() {
         BiasSweepResult sweep = new BiasSweep(new SelfConsistentSolver(OPTIONS)).run(stack(), 0, -0.5, -1, -1.5);
