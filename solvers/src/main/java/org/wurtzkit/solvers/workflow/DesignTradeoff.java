@@ -264,11 +264,11 @@ public final class DesignTradeoff {
             MobilityResult mu = Mobility.of(zero, mobility);
             LeakageCurrent j = GateLeakage.atBias(r, -reverseBiasV, leakage);
             List<String> w = new ArrayList<>();
-            for (String m : mu.warnings()) {
-                w.add("mobility: " + m);
+            for (org.wurtzkit.warnings.Warning m : mu.warnings()) {
+                w.add("mobility: " + m.message());
             }
-            for (String m : j.warnings()) {
-                w.add("leakage: " + m);
+            for (org.wurtzkit.warnings.Warning m : j.warnings()) {
+                w.add("leakage: " + m.message());
             }
             warnings[i] = List.copyOf(w);
             double[] v = new double[WIDTH];

@@ -3,6 +3,7 @@ package org.wurtzkit.solvers.transport.mobility;
 import java.util.List;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.units.Constants;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * Mobility and sheet resistance of a 2DEG: rates per subband and mechanism, mobilities by
@@ -21,11 +22,11 @@ public final class MobilityResult {
     private final int[] subbandIndex;
     private final int[] window;
     private final double[][] rate;
-    private final List<String> warnings;
+    private final List<Warning> warnings;
     private final double excluded;
 
     MobilityResult(double temperatureK, List<String> mechanisms, double[] density, double[] mass, int[] window,
-            int[] subbandIndex, double[][] rate, double excluded, List<String> warnings) {
+            int[] subbandIndex, double[][] rate, double excluded, List<Warning> warnings) {
         this.excluded = excluded;
         this.temperatureK = temperatureK;
         this.mechanisms = List.copyOf(mechanisms);
@@ -176,8 +177,16 @@ public final class MobilityResult {
         return 1 / g;
     }
 
-    /** @return the warnings of the models used, without duplicates; empty when none applies */
-    public List<String> warnings() {
+    /**
+     * The warnings of the models used, typed: {@link org.wurtzkit.warnings.WarningKind#SCATTERING_MODEL_OUT_OF_VALIDITY}
+     * (a mechanism's own warning, or a subband too close to the Fermi level for the degenerate
+     * formulas), {@link org.wurtzkit.warnings.WarningKind#ELECTRONS_LEFT_OUT},
+     * {@link org.wurtzkit.warnings.WarningKind#SUBBAND_LIMIT_REACHED} and
+     * {@link org.wurtzkit.warnings.WarningKind#SCREENING_ABSENT}.
+     *
+     * @return the warnings, without duplicates; empty when none applies
+     */
+    public List<Warning> warnings() {
         return warnings;
     }
 
@@ -200,6 +209,7 @@ public final class MobilityResult {
     public String toString() {
         return String.format(java.util.Locale.ROOT, "MobilityResult[T = %.0f K, n_s = %.3g cm^-2, mu = %.0f cm^2/Vs,"
                 + " R_sh = %.0f ohm/sq, %d subbands, %d warnings]", temperatureK, sheetDensityPerCm2(),
-                mobilityCm2PerVs(), sheetResistanceOhmPerSquare(), density.length, warnings.size());
+                mobilityCm2PerVs(), sheetResistanceOhmPerSquare(), density.length, warnings.size())
+                + Warning.lines(warnings);
     }
 }
