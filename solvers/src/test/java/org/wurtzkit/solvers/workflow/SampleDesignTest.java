@@ -278,7 +278,7 @@ class SampleDesignTest {
         ToleranceStudyResult.Sensitivity sens = r.sensitivity(0);
         assertEquals(400, sens.rows() + sens.skipped());
         assertTrue(sens.skipped() > 0);
-        assertTrue(sens.warnings().stream().anyMatch(w -> w.contains("rows left out")), sens.warnings().toString());
+        assertTrue(sens.warnings().stream().anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.POINTS_LEFT_OUT && w.message().contains("rows left out")), sens.warnings().toString());
     }
 
     /** Bad input: each a clear exception naming the parameter. */
