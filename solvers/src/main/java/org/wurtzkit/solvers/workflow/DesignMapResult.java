@@ -136,7 +136,7 @@ public final class DesignMapResult implements CsvTable {
         }
         Map<String, String> run = new LinkedHashMap<>();
         run.put("computation", "design map");
-        run.put("structureFamily", "code (a StructureFactory), not recorded; the structure recorded is its output at "
+        run.put("structureFamily", "code (a StructureFactory), not recorded, and the structure recorded is its output at "
                 + "point structureAtPoint");
         run.put("structureAtPoint", Integer.toString(at));
         for (int a = 0; a < axes.size(); a++) {

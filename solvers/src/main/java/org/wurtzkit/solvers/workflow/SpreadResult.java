@@ -290,7 +290,7 @@ public final class SpreadResult implements CsvTable {
         }
         Map<String, String> run = new LinkedHashMap<>();
         run.put("computation", "parameter-set spread");
-        run.put("structureFamily", "code (a function of the parameter set), not recorded; the structure recorded is "
+        run.put("structureFamily", "code (a function of the parameter set), not recorded, and the structure recorded is "
                 + "its output for member structureOfMember");
         run.put("structureOfMember", Integer.toString(at));
         for (int i = 0; i < sets.size(); i++) {

@@ -32,10 +32,11 @@ public final class TargetResult implements CsvTable {
 
     /**
      * How the search ran besides its target: the family, the solver's options, the interval, the
-     * evaluation budget and, for a threshold target, the extraction (else null).
+     * evaluation budget, for a threshold target the extraction (else null), and for a sheet-density
+     * target the relative tolerance as given (else NaN).
      */
     record Setup(StructureFamily family, SolverOptions options, double lower, double upper, int maxEvaluations,
-            ThresholdExtraction extraction) {
+            ThresholdExtraction extraction, double relativeTolerance) {
     }
 
     TargetResult(Column parameter, Column quantity, double target, double tolerance, double value, double achieved,
@@ -95,7 +96,8 @@ public final class TargetResult implements CsvTable {
      * {@code StructureFamilies.layerThicknessNm(template, "barrier")}; a re-run rebuilds the family from
      * them. A family of code is not recorded: the structure recorded is then the structure found
      * ({@code structureRole} "structure found"), and a re-run needs the same family. The run also
-     * records the quantity and its {@code target}, {@code tolerance}, the interval {@code lowerEnd},
+     * records the quantity and its {@code target}, {@code tolerance} (and the {@code relativeTolerance}
+     * as given, for a sheet-density target), the interval {@code lowerEnd},
      * {@code upperEnd}, {@code maxEvaluations}, for a threshold target the {@code thresholdDefinition}
      * and {@code thresholdBiasesV}, and every evaluated parameter value in order
      * ({@code evaluatedValues}); with a solver of the recorded options the search repeats them and
@@ -114,6 +116,9 @@ public final class TargetResult implements CsvTable {
         run.put("quantity", quantity.header());
         run.put("target", Double.toString(target));
         run.put("tolerance", Double.toString(tolerance));
+        if (!Double.isNaN(setup.relativeTolerance())) {
+            run.put("relativeTolerance", Double.toString(setup.relativeTolerance()));
+        }
         run.put("lowerEnd", Double.toString(setup.lower()));
         run.put("upperEnd", Double.toString(setup.upper()));
         run.put("maxEvaluations", Integer.toString(setup.maxEvaluations()));

@@ -71,7 +71,7 @@ public final class TargetSearch {
         Require.positive("target sheet density (cm^-2)", targetPerCm2);
         Require.inRange("relative tolerance on the sheet density", relativeTolerance, 1e-9, 0.5);
         return search(family, lower, upper, SHEET, targetPerCm2, relativeTolerance * targetPerCm2,
-                s -> solver.solve(s).sheetDensityPerCm2(), null);
+                s -> solver.solve(s).sheetDensityPerCm2(), null, relativeTolerance);
     }
 
     /**
@@ -96,7 +96,7 @@ public final class TargetSearch {
         Require.nonNull("threshold extraction", extraction);
         BiasSweep sweep = new BiasSweep(solver);
         return search(family, lower, upper, THRESHOLD, targetV, toleranceV,
-                s -> extraction.thresholdVoltage(s, sweep), extraction);
+                s -> extraction.thresholdVoltage(s, sweep), extraction, Double.NaN);
     }
 
     @FunctionalInterface
@@ -167,10 +167,10 @@ public final class TargetSearch {
     }
 
     private TargetResult search(StructureFamily family, double lower, double upper, Column quantity, double target,
-            double tolerance, Measure measure, ThresholdExtraction extraction) {
+            double tolerance, Measure measure, ThresholdExtraction extraction, double relativeTolerance) {
         Require.nonNull("structure family", family);
         TargetResult.Setup setup = new TargetResult.Setup(family, solver.options(), lower, upper, maxEvaluations,
-                extraction);
+                extraction, relativeTolerance);
         String name = family.parameter().name();
         Require.finite("lower end of the " + name + " interval", lower);
         Require.finite("upper end of the " + name + " interval", upper);
