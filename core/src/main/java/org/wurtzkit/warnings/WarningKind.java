@@ -60,5 +60,9 @@ public enum WarningKind {
      * Points of a study or map failed and were left out of its statistics; if the failures depend on
      * the inputs, the statistics are biased.
      */
-    POINTS_LEFT_OUT
+    POINTS_LEFT_OUT,
+    /** A trade-off has no threshold-voltage band: its front compares stacks of different threshold voltage. */
+    NO_THRESHOLD_BAND,
+    /** No computed stack of a trade-off lies in its threshold-voltage band: the front is empty. */
+    THRESHOLD_BAND_EMPTY
 }

@@ -243,6 +243,20 @@ class GateLeakageTest {
                 && w.message().contains("image-force lowering is off")), plain.warnings()
                 .toString());
         assertTrue(image.warnings().stream().noneMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT));
+
+        // the curve gathers its points' warnings by kind, names the first point, and writes them in its CSV
+        LeakageCurve curve = GateLeakage.curve(capped[0], LeakageOptions.defaults());
+        org.wurtzkit.warnings.Warning gathered = curve.warnings().stream()
+                .filter(w -> w.kind() == org.wurtzkit.warnings.WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT).findFirst()
+                .orElseThrow(() -> new AssertionError(curve.warnings().toString()));
+        assertTrue(gathered.message().startsWith("at V_g = "), gathered.message());
+        String csv = curve.toCsvString();
+        assertTrue(csv.contains("# warning: " + gathered), csv);
+        assertTrue(csv.contains("computation=gate leakage curve"), csv);
+        LeakageCurve withImage = GateLeakage.curve(capped[0], LeakageOptions.defaults().withImageForceLowering(true));
+        assertTrue(withImage.warnings().stream()
+                .noneMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT));
+        assertTrue(withImage.provenance().orElseThrow().run().get("leakageOptions").contains("imageForceLowering=true"));
     }
 
     /**
@@ -276,7 +290,7 @@ class GateLeakageTest {
         LeakageCurve c = GateLeakage.curve(capped[1], LeakageOptions.defaults());
         StringWriter w = new StringWriter();
         c.writeCsv(w);
-        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get()
                 .parse(new StringReader(w.toString())).getRecords();
         assertEquals(List.of("gate_bias_V", "total_A/cm^2", "thermionic_A/cm^2", "tunnelling_A/cm^2",
                 "poole_frenkel_A/cm^2", "barrier_top_eV", "status"), c.headers());
