@@ -69,8 +69,8 @@ public final class LeakageCurve implements CsvTable {
     /**
      * What produced this curve: the provenance of its bias sweep (structure, solver options, biases),
      * with the run's {@code computation} set to "gate leakage curve", the sweep's run kept under
-     * keys prefixed {@code sweep.}, the leakage options as {@code leakageOptions} (their record
-     * text) and the curve's warnings. A re-run repeats the bias sweep from that provenance and calls
+     * keys prefixed {@code sweep.}, the leakage options as {@code leakageOptions}
+     * ({@link LeakageOptions#describe()}) and the curve's warnings. A re-run repeats the bias sweep from that provenance and calls
      * {@link GateLeakage#curve} with the same options.
      *
      * @return the provenance
@@ -81,7 +81,7 @@ public final class LeakageCurve implements CsvTable {
         Map<String, String> run = new LinkedHashMap<>();
         run.put("computation", "gate leakage curve");
         p.run().forEach((k, v) -> run.put("sweep." + k, v));
-        run.put("leakageOptions", options.toString());
+        run.put("leakageOptions", options.describe());
         List<String> w = new ArrayList<>();
         for (String s : p.warnings()) {
             if (s.startsWith("point failed: ")) {

@@ -317,7 +317,7 @@ public final class DesignTradeoff {
         m.put("bandTargetV", Double.toString(bandTargetV));
         m.put("bandToleranceV", Double.toString(bandToleranceV));
         m.put("mobilityOptions", mobility.toString());
-        m.put("leakageOptions", leakage.toString());
+        m.put("leakageOptions", leakage.describe());
         return m;
     }
 

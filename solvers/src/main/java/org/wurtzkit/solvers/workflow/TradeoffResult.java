@@ -252,8 +252,8 @@ public final class TradeoffResult implements CsvTable {
      * structure factory is code the provenance cannot hold: the structure recorded is its output at
      * the first computed stack ({@code structureAtPoint}); the run records each axis as
      * {@code axis<k> = name|unit|values}, the reverse bias, the threshold definition and the sweep
-     * (its biases, or its step and margins), the V_th band, and the mobility and leakage options (their
-     * record text); then every failed stack and the warnings. With the same factory and these
+     * (its biases, or its step and margins), the V_th band, and the mobility options (their record text) and
+     * the leakage options ({@link org.wurtzkit.solvers.transport.LeakageOptions#describe()}); then every failed stack and the warnings. With the same factory and these
      * settings, a re-run gives the same table bit for bit.
      *
      * @return the provenance, or empty when no stack's structure could be built

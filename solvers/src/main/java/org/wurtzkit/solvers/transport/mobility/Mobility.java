@@ -251,7 +251,8 @@ public final class Mobility {
             win[i] = b.window();
             idx[i] = b.index();
         }
-        return new MobilityResult(t, names, dens, mass, win, idx, rate, excluded, new ArrayList<>(warnings));
+        return new MobilityResult(t, names, dens, mass, win, idx, rate, excluded, new ArrayList<>(warnings),
+                solution::provenance, options.toString());
     }
 
     /**
@@ -268,10 +269,12 @@ public final class Mobility {
     public static List<MobilityResult> versusTemperature(TemperatureSweepResult sweep, MobilityOptions options) {
         Require.nonNull("temperature sweep", sweep);
         List<MobilityResult> out = new ArrayList<>();
+        java.util.function.Supplier<org.wurtzkit.provenance.ResultProvenance> source = () -> sweep.provenance()
+                .orElseThrow();
         for (int i = 0; i < sweep.size(); i++) {
             Optional<Solution> s = sweep.solution(i);
             if (s.isPresent()) {
-                out.add(of(s.get(), options));
+                out.add(of(s.get(), options).withSource(source));
             }
         }
         return List.copyOf(out);

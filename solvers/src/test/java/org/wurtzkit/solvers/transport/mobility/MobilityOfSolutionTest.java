@@ -121,6 +121,19 @@ class MobilityOfSolutionTest {
         assertEquals("mobility alloy disorder_cm^2/Vs", table.headers().get(4 + 3));
         assertEquals(curve.get(1).mobilityCm2PerVs(), Double.parseDouble(table.row(1).get(2)));
         assertEquals(curve.get(2).mobilityCm2PerVs("polar optical phonon"), Double.parseDouble(table.row(2).get(4)));
+        // the table's CSV starts with the sweep's provenance; repeating the sweep and the mobility from
+        // it alone gives the same CSV bit for bit (the solver is deterministic; common practice, no source)
+        org.wurtzkit.provenance.ResultProvenance p = table.provenance().orElseThrow();
+        assertEquals("mobility table", p.run().get("computation"));
+        assertEquals("temperature sweep", p.run().get("source.computation"));
+        double[] temperatures = java.util.Arrays.stream(p.run().get("source.temperaturesK").split(" "))
+                .mapToDouble(Double::parseDouble).toArray();
+        List<MobilityResult> again = Mobility.versusTemperature(new TemperatureSweep(new org.wurtzkit.solvers.sp
+                .SelfConsistentSolver(org.wurtzkit.solvers.sp.SolverOptions.fromSettings(p.solverOptions())))
+                .run(p.structure(), temperatures), MobilityOptions.defaults());
+        assertEquals(MobilityOptions.defaults().toString(), p.run().get("mobilityOptions"));
+        assertEquals(table.toCsvString(), new MobilityTable(again).toCsvString());
+        assertTrue(table.toCsvString().startsWith("# produced by wurtzkit "));
         for (int i = 1; i < curve.size(); i++) {
             assertTrue(curve.get(i).mobility() < curve.get(i - 1).mobility(), curve.toString());
             assertTrue(curve.get(i).mobility(new PolarOpticalPhonon().name())
