@@ -160,6 +160,22 @@ class DesignTradeoffTest {
         }
     }
 
+    /**
+     * A V_th band no depletion-mode stack of this family can reach (+3 V: these Schottky-gated AlGaN/GaN
+     * stacks are normally on, V_th < 0; common practice, no source): the front is empty and the
+     * result says so with a typed warning, before the stacks' own warnings.
+     */
+    @Test
+    void aBandNoStackReachesLeavesAnEmptyFrontWithAWarning() {
+        TradeoffResult r = DesignTradeoff.builder(p -> StandardStacks.gatedHemt(Hemts.DEFAULT_SET, p[0], BARRIER_NM, 0, 1.0))
+                .axis(Axis.of("al_fraction", "", 0.25)).reverseBiasV(REVERSE_V).stepV(0.5)
+                .thresholdBand(3, 0.1).solver(Hemts.SOLVER).threads(1).build().run();
+        assertTrue(r.front().isEmpty());
+        assertEquals(org.wurtzkit.warnings.WarningKind.THRESHOLD_BAND_EMPTY, r.warnings().get(0).kind(),
+                r.warnings()::toString);
+        assertTrue(r.toCsvString().contains("# warning: " + r.warnings().get(0)), r::toCsvString);
+    }
+
     @Test
     void oneAndTwoThreadsAgreeBitForBit() {
         TradeoffResult two = family().threads(2).build().run();

@@ -141,6 +141,27 @@ class MobilityOfSolutionTest {
         }
     }
 
+    /**
+     * At 600 K the electrons spread over many subbands (k_B T = 52 meV against subband spacings of
+     * tens of meV); leaving out every subband below 1 % of the electrons leaves out more than the
+     * 0.5 % the result reports, and the result says how much (typed ELECTRONS_LEFT_OUT). With the
+     * default cut (0.1 %) at 300 K nothing is reported. Boltzmann occupation of subbands: common
+     * practice, no source.
+     */
+    @Test
+    void leavingOutSubbandsIsReportedWithItsShare() {
+        Solution hot = SOLVER.solve(hemt(false, 600));
+        MobilityResult cut = Mobility.of(hot, MobilityOptions.defaults().withMinimumSubbandFraction(0.01));
+        org.wurtzkit.warnings.Warning w = cut.warnings().stream()
+                .filter(x -> x.kind() == org.wurtzkit.warnings.WarningKind.ELECTRONS_LEFT_OUT).findFirst()
+                .orElseThrow(() -> new AssertionError(cut.warnings().toString()));
+        assertTrue(w.message().contains("are left out of the mobility"), w.message());
+        assertTrue(cut.toString().contains("warning: " + w.message()), cut.toString());
+        MobilityResult plain = Mobility.of(SOLVER.solve(hemt(false, 300)), MobilityOptions.defaults());
+        assertTrue(plain.warnings().stream().noneMatch(x -> x.kind() == org.wurtzkit.warnings.WarningKind.ELECTRONS_LEFT_OUT),
+                plain.warnings().toString());
+    }
+
     @Test
     void screeningOnlyLowersCoulombRates() {
         Solution s = SOLVER.solve(hemt(false, 300));
