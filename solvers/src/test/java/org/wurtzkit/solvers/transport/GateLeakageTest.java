@@ -284,6 +284,27 @@ class GateLeakageTest {
                 () -> LeakageOptions.defaults().withMechanisms(LeakageMechanism.POOLE_FRENKEL));
     }
 
+    /**
+     * Far beyond pinch-off (V_g = -8 V on a stack whose n_s vanishes near -3 V) no electron gas lies
+     * under the gate: the collector of the current is a band edge above the Fermi level, and the
+     * point and the curve say so with a typed warning; at 0 V (2DEG present) there is none. Charge
+     * control of a HEMT channel: common practice, no source.
+     */
+    @Test
+    void aPinchedOffChannelIsReportedAsNoElectronGasUnderTheGate() {
+        BiasSweepResult deep = SWEEP.run(hemt(0), BiasGrid.linear(0, -8, 17));
+        assertTrue(deep.failures().isEmpty(), () -> deep.failures().toString());
+        assertTrue(deep.sheetDensityPerCm2()[16] < 1e9, "pinched off at -8 V: " + deep.sheetDensityPerCm2()[16]);
+        LeakageCurve c = GateLeakage.curve(deep, LeakageOptions.defaults());
+        assertTrue(c.point(16).orElseThrow().warnings().stream()
+                .anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.NO_ELECTRON_GAS_UNDER_GATE),
+                () -> c.point(16).orElseThrow().warnings().toString());
+        assertTrue(c.point(0).orElseThrow().warnings().stream()
+                .noneMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.NO_ELECTRON_GAS_UNDER_GATE));
+        assertTrue(c.warnings().stream().anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.NO_ELECTRON_GAS_UNDER_GATE
+                && w.message().startsWith("at V_g = ")), c.warnings()::toString);
+    }
+
     /** The J-V table: one row per sweep point, a header with units, numbers that read back. */
     @Test
     void curveWritesCsv() throws IOException {
