@@ -31,5 +31,38 @@ public enum WarningKind {
     /** A quantum window had more subbands below the cut-off than the solver's limit; its density is too low. */
     SUBBAND_LIMIT_REACHED,
     /** A threshold voltage was extrapolated to a bias outside the swept range. */
-    THRESHOLD_OUTSIDE_SWEPT_RANGE
+    THRESHOLD_OUTSIDE_SWEPT_RANGE,
+    /**
+     * A scattering mechanism's formula is used outside the conditions it was derived for (e.g. a
+     * non-degenerate estimate for a degenerate subband, or a limit taken where it does not hold).
+     */
+    SCATTERING_MODEL_OUT_OF_VALIDITY,
+    /**
+     * Part of the electrons is left out of a transport result: subbands below the minimum fraction,
+     * a solution that reached its subband limit, or a layer material without a composition whose
+     * alloy scattering is taken as zero.
+     */
+    ELECTRONS_LEFT_OUT,
+    /** Screening was asked for but nothing screens: the rates are unscreened. */
+    SCREENING_ABSENT,
+    /**
+     * No electron gas lies under the gate: the collector of the gate current is taken at the lowest
+     * conduction-band edge, which lies above the Fermi level.
+     */
+    NO_ELECTRON_GAS_UNDER_GATE,
+    /** Image-force lowering of the gate barrier is off, though at the gate field it exceeds 0.1 eV. */
+    IMAGE_FORCE_LOWERING_LEFT_OUT,
+    /** A value was interpolated between the computed points of a sweep rather than computed there. */
+    INTERPOLATED_BETWEEN_POINTS,
+    /** A sensitivity index carries a standard error large enough to reorder or blur the inputs' ranking. */
+    SENSITIVITY_STANDARD_ERROR_LARGE,
+    /**
+     * Points of a study or map failed and were left out of its statistics; if the failures depend on
+     * the inputs, the statistics are biased.
+     */
+    POINTS_LEFT_OUT,
+    /** A trade-off has no threshold-voltage band: its front compares stacks of different threshold voltage. */
+    NO_THRESHOLD_BAND,
+    /** No computed stack of a trade-off lies in its threshold-voltage band: the front is empty. */
+    THRESHOLD_BAND_EMPTY
 }

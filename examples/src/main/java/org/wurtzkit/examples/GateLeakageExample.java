@@ -112,7 +112,7 @@ public final class GateLeakageExample {
         for (int i = 0; i <= last; i++) {
             if (j.point(i).isPresent() && !j.point(i).get().warnings().isEmpty()) {
                 summary.add(String.format(Locale.ROOT, "  from %+.1f V on: %s", v[i], String.join("; ",
-                        j.point(i).get().warnings())));
+                        j.point(i).get().warnings().stream().map(org.wurtzkit.warnings.Warning::message).toList())));
                 break;
             }
         }

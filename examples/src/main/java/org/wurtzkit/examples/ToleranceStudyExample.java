@@ -208,7 +208,7 @@ public final class ToleranceStudyExample {
                 rank.append(String.format(Locale.ROOT, " %s %.2f;", x.input(), x.firstOrder()));
             }
             lines.add(rank.toString());
-            ranked.warnings().forEach(w -> lines.add("    warning: " + w));
+            ranked.warnings().forEach(w -> lines.add("    warning: " + w.message()));
         }
         r.failures().stream().limit(5).forEach(f -> lines.add("    " + f));
         lines.add("  model estimates: confirm by measurement");

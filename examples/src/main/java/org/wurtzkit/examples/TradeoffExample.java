@@ -122,7 +122,7 @@ public final class TradeoffExample {
                     p.sheetDensityPerCm2(), p.thresholdVoltageV(), p.sheetResistanceOhmPerSquare(),
                     p.leakageMagnitudeAPerCm2()));
         }
-        t.warnings().forEach(w -> summary.add("  warning: " + w));
+        t.warnings().forEach(w -> summary.add("  warning: " + w.message()));
         t.failures().forEach(f -> summary.add("  failed: " + f));
         summary.add("  model estimates: confirm by measurement");
         return new Result(t, List.copyOf(files), List.copyOf(summary));

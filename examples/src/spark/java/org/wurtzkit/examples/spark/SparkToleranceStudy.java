@@ -142,7 +142,7 @@ public final class SparkToleranceStudy {
                 System.out.printf(Locale.ROOT, "    %-22s S_i %.3f +- %.3f, S_Ti %.3f%n", x.input(), x.firstOrder(),
                         x.firstOrderStandardError(), x.totalEffect());
             }
-            sens.warnings().forEach(w -> System.out.println("    warning: " + w));
+            sens.warnings().forEach(w -> System.out.println("    warning: " + w.message()));
             if (compare) {
                 boolean same = identical(local, distributed);
                 System.out.printf(Locale.ROOT, "  Spark / local time ratio: %.2f (after start-up and warm-up)%n",

@@ -16,6 +16,8 @@ import org.wurtzkit.solvers.workflow.BiasSweepResult;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Constants;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * Gate leakage current through the computed barrier of a converged solution.
@@ -66,7 +68,7 @@ public final class GateLeakage {
         double t = TunnelCurrent.checkTemperature(st.temperatureK());
         double kT = Constants.BOLTZMANN_EV * t;
         double v = gate.biasV();
-        List<String> warnings = new ArrayList<>();
+        List<Warning> warnings = new ArrayList<>();
         Profile p = profile(solution, options, warnings);
         WurtziteMaterial atGate = st.pointAt(0).material();
         double supplyMass = Double.isNaN(options.richardsonMass()) ? atGate.masses().electronPerpendicular()
@@ -121,7 +123,7 @@ public final class GateLeakage {
                 status[i] = "failed: " + e.getMessage();
             }
         }
-        return new LeakageCurve(sweep.gateBiasV(), points, status);
+        return new LeakageCurve(sweep, options, points, status);
     }
 
     /**
@@ -168,13 +170,9 @@ public final class GateLeakage {
         LeakageCurrent a = of(sweep.solution(below).orElseThrow(), options);
         LeakageCurrent b = of(sweep.solution(above).orElseThrow(), options);
         double w = (biasV - v[below]) / (v[above] - v[below]);
-        List<String> warnings = new ArrayList<>(a.warnings());
-        for (String s : b.warnings()) {
-            if (!warnings.contains(s)) {
-                warnings.add(s);
-            }
-        }
-        warnings.add("interpolated in log|J| between the sweep's points at " + v[below] + " V and " + v[above] + " V");
+        List<Warning> warnings = new ArrayList<>(Warning.union(a.warnings(), b.warnings()));
+        warnings.add(new Warning(WarningKind.INTERPOLATED_BETWEEN_POINTS, "interpolated in log|J| between the sweep's "
+                + "points at " + v[below] + " V and " + v[above] + " V"));
         return new LeakageCurrent(biasV, interpolate(a.thermionic(), b.thermionic(), w),
                 interpolate(a.tunnelling(), b.tunnelling(), w), interpolate(a.pooleFrenkel(), b.pooleFrenkel(), w),
                 a.barrierTopEv() + w * (b.barrierTopEv() - a.barrierTopEv()),
@@ -252,7 +250,7 @@ public final class GateLeakage {
     private record Profile(TunnelBarrier barrier, double endDepth) {
     }
 
-    private static Profile profile(Solution solution, LeakageOptions options, List<String> warnings) {
+    private static Profile profile(Solution solution, LeakageOptions options, List<Warning> warnings) {
         Structure st = solution.structure();
         BandDiagram bd = solution.bandDiagram();
         double[] x = bd.depth();
@@ -266,8 +264,9 @@ public final class GateLeakage {
         end = Math.max(end, 1);
         double kT = Constants.BOLTZMANN_EV * st.temperatureK();
         if (ec[end] > 3 * kT) {
-            warnings.add(String.format(Locale.ROOT, "no electron gas under the gate: the lowest E_c, %.3f eV above "
-                    + "the Fermi level at %.1f nm, is taken as the collector's band edge", ec[end], x[end] * 1e9));
+            warnings.add(new Warning(WarningKind.NO_ELECTRON_GAS_UNDER_GATE, String.format(Locale.ROOT, "no electron gas "
+                    + "under the gate: the lowest E_c, %.3f eV above the Fermi level at %.1f nm, is taken as the "
+                    + "collector's band edge", ec[end], x[end] * 1e9)));
         }
         double gateEps = st.pointAt(0).material().permittivityHighFrequency();
         double[] field = solution.electricField();
@@ -285,8 +284,9 @@ public final class GateLeakage {
             xs = java.util.Arrays.copyOf(x, end + 1);
             us = java.util.Arrays.copyOf(ec, end + 1);
             if (lowering > IMAGE_FORCE_WARNING_EV) {
-                warnings.add(String.format(Locale.ROOT, "image-force lowering is off; at the gate field of %.2f MV/cm "
-                        + "it would lower the barrier by %.3f eV", gateField / 1e8, lowering));
+                warnings.add(new Warning(WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT, String.format(Locale.ROOT,
+                        "image-force lowering is off; at the gate field of %.2f MV/cm it would lower the barrier by "
+                        + "%.3f eV", gateField / 1e8, lowering)));
             }
         }
         double[] m = new double[xs.length - 1];

@@ -2,6 +2,7 @@ package org.wurtzkit.solvers.transport;
 
 import java.util.List;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * The gate leakage current density of one converged solution, by mechanism. Sign as for a Schottky
@@ -17,10 +18,10 @@ import org.wurtzkit.errors.Require;
  *                          lowering if chosen (eV, relative to the bottom contact's Fermi level)
  * @param barrierFieldVPerM the magnitude of the mean field in the barrier layers (V/m), the field of
  *                          Poole-Frenkel emission
- * @param warnings          what the result rests on that may not hold (empty when nothing)
+ * @param warnings          what the result rests on that may not hold, typed (empty when nothing)
  */
 public record LeakageCurrent(double gateBiasV, double thermionic, double tunnelling, double pooleFrenkel,
-        double barrierTopEv, double barrierFieldVPerM, List<String> warnings) {
+        double barrierTopEv, double barrierFieldVPerM, List<Warning> warnings) {
     private static final double A_PER_M2_PER_A_PER_CM2 = 1e4;
 
     /**

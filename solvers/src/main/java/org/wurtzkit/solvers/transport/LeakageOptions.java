@@ -178,4 +178,19 @@ public record LeakageOptions(Set<LeakageMechanism> mechanisms, TransmissionMetho
     public boolean computes(LeakageMechanism m) {
         return mechanisms.contains(m);
     }
+
+    /**
+     * The options as text for a result's provenance, the same on every JVM: the mechanisms in their
+     * declaration order (the record's own {@code toString} lists an immutable set, whose order may
+     * differ from one JVM to the next), then every other component, numbers by
+     * {@link Double#toString(double)}.
+     *
+     * @return e.g. {@code "mechanisms=[THERMIONIC, TUNNELLING], transmission=WKB, imageForceLowering=false, ..."}
+     */
+    public String describe() {
+        return "mechanisms=" + java.util.EnumSet.copyOf(mechanisms) + ", transmission=" + transmission
+                + ", imageForceLowering=" + imageForceLowering + ", richardsonMass=" + richardsonMass
+                + ", relativeAccuracy=" + relativeAccuracy + ", slabWidth=" + slabWidth + ", pooleFrenkel="
+                + pooleFrenkel;
+    }
 }

@@ -1,7 +1,9 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.List;
+import java.util.Optional;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.units.Decimals;
 import org.wurtzkit.units.Units;
@@ -14,7 +16,8 @@ import org.wurtzkit.units.Units;
  * array accessors return copies.
  *
  * <p>CSV columns: {@code depth_nm, conduction_band_eV, valence_band_eV, electrons_cm^-3,
- * holes_cm^-3, ionized_donors_cm^-3, ionized_acceptors_cm^-3}.
+ * holes_cm^-3, ionized_donors_cm^-3, ionized_acceptors_cm^-3}, after the solution's provenance
+ * ({@link Solution#provenance()}) as comment lines.
  */
 public final class BandTable implements CsvTable {
     private static final List<Column> COLUMNS = List.of(Column.of("depth", "nm"), Column.of("conduction_band", "eV"),
@@ -28,8 +31,10 @@ public final class BandTable implements CsvTable {
     private final double[] p;
     private final double[] donors;
     private final double[] acceptors;
+    private final Solution solution;
 
     private BandTable(Solution s) {
+        solution = s;
         depth = s.depth();
         ec = s.conductionBand();
         ev = s.valenceBand();
@@ -45,6 +50,15 @@ public final class BandTable implements CsvTable {
      */
     public static BandTable of(Solution solution) {
         return new BandTable(Require.nonNull("solution", solution));
+    }
+
+    /**
+     * {@return the provenance of the solution the table was read from ({@link Solution#provenance()}):
+     * solving its structure again with its solver options gives this table bit for bit}
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        return Optional.of(solution.provenance());
     }
 
     /** {@return depth of each node (m)} */

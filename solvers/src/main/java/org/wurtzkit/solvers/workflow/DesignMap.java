@@ -8,6 +8,7 @@ import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * A design map: the full solver over the Cartesian grid of any number of structure parameters,
@@ -119,24 +120,29 @@ public final class DesignMap {
     public DesignMapResult run() {
         int n = size();
         int width = evaluator.columns().size();
+        @SuppressWarnings("unchecked")
+        List<Warning>[] pointWarnings = new List[n]; // each slot written by the one worker of its point
         ParallelPoints.Outcome[] out = ParallelPoints.run(n, threads, i -> {
             Structure s = factory.at(parameters(i));
             if (s == null) {
                 throw new WurtzkitException(ErrorKind.INVALID_CALLBACK_RESULT, "the structure factory returned null");
             }
-            double[] v = evaluator.evaluate(s, solver);
+            PointEvaluator.Evaluated e = evaluator.evaluateWithWarnings(s, solver);
+            double[] v = e == null ? null : e.values();
             if (v == null || v.length != width) {
                 throw new WurtzkitException(ErrorKind.INVALID_CALLBACK_RESULT,
                         "the evaluator returned " + (v == null ? "null" : v.length + " values")
                         + ", expected " + width);
             }
+            pointWarnings[i] = e.warnings();
             return v.clone();
         }, progress);
         double[][] params = new double[n][];
         for (int i = 0; i < n; i++) {
             params[i] = parameters(i);
         }
-        return new DesignMapResult(axes, evaluator.columns(), params, out);
+        return new DesignMapResult(axes, evaluator.columns(), params, out, pointWarnings,
+                new DesignMapResult.Setup(factory, solver.options(), evaluator.description()));
     }
 
     /** Mutable builder. */

@@ -3,11 +3,17 @@ package org.wurtzkit.solvers.workflow;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.provenance.ResultProvenance;
+import org.wurtzkit.solvers.sp.SolverOptions;
+import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * The result of a {@link DesignMap}: for every point (row-major, last axis fastest) its axis
@@ -15,7 +21,7 @@ import org.wurtzkit.units.Decimals;
  * A failed point has NaN values.
  *
  * <p>CSV columns: one per axis ({@code name_unit}), one per computed quantity, then
- * {@code status} ("ok" or "failed: reason").
+ * {@code status} ("ok" or "failed: reason"), after the {@link #provenance()} comment lines.
  */
 public final class DesignMapResult implements CsvTable {
     private final List<Axis> axes;
@@ -25,8 +31,19 @@ public final class DesignMapResult implements CsvTable {
     private final double[][] values;
     private final PointFailure[] failureAt;
     private final List<PointFailure> failureList;
+    private final List<Warning> warnings;
+    private final Setup setup;
 
-    DesignMapResult(List<Axis> axes, List<Column> quantities, double[][] parameters, ParallelPoints.Outcome[] out) {
+    /**
+     * What ran the map besides its axes: the structure factory (code), the solver's options and the
+     * evaluator's description.
+     */
+    record Setup(StructureFactory factory, SolverOptions options, String evaluator) {
+    }
+
+    DesignMapResult(List<Axis> axes, List<Column> quantities, double[][] parameters, ParallelPoints.Outcome[] out,
+            List<Warning>[] pointWarnings, Setup setup) {
+        this.setup = setup;
         this.axes = List.copyOf(axes);
         this.quantities = List.copyOf(quantities);
         List<Column> c = new ArrayList<>();
@@ -53,6 +70,81 @@ public final class DesignMapResult implements CsvTable {
             }
         }
         this.failureList = Collections.unmodifiableList(f);
+        String[] labels = new String[n];
+        @SuppressWarnings("unchecked")
+        List<Warning>[] per = new List[n];
+        for (int i = 0; i < n; i++) {
+            labels[i] = describe(i);
+            per[i] = failureAt[i] == null ? pointWarnings[i] : null;
+        }
+        this.warnings = PointWarnings.of(per, labels);
+    }
+
+    /**
+     * What may make this map mislead: each kind of warning that a computed point raised (its
+     * structure's, its solution's, its sweep's or threshold's, as its evaluator reports them through
+     * {@link PointEvaluator#evaluateWithWarnings}), once, at the first such point, with the count of
+     * the others.
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
+    }
+
+    /**
+     * What produced this map. A map's structures come from its {@link StructureFactory}, which is
+     * code: the provenance cannot hold it. It records instead
+     * <ul>
+     * <li>as its structure, the factory's output at the first computed point (usually point 0),
+     *     whose index is {@code structureAtPoint} in the run;</li>
+     * <li>{@code structureFamily}: that the family is code, not recorded;</li>
+     * <li>each axis as {@code axis<k> = name|unit|values} (values by {@link Double#toString(double)},
+     *     in order), and the evaluator's {@link PointEvaluator#description()};</li>
+     * <li>the solver options, every failed point and the map's warnings.</li>
+     * </ul>
+     * A re-run needs the same factory and evaluator: with them, a map built on these axes with a
+     * solver of these options reproduces the table bit for bit (any thread count); the recorded
+     * structure lets a reader check that the factory at hand gives the same stack at that point.
+     *
+     * @return the provenance, or empty when no point's structure could be built (every point failed
+     *         in its factory)
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        int at = -1;
+        for (int i = 0; i < values.length && at < 0; i++) {
+            if (failureAt[i] == null) {
+                at = i;
+            }
+        }
+        Structure structure = null;
+        if (at >= 0) {
+            structure = setup.factory().at(parameters[at].clone());
+        } else {
+            for (int i = 0; i < values.length && structure == null; i++) {
+                try {
+                    structure = setup.factory().at(parameters[i].clone());
+                    at = i;
+                } catch (InvalidParameterException | org.wurtzkit.errors.WurtzkitException e) {
+                    // this point's factory failed in the map too; try the next
+                }
+            }
+        }
+        if (structure == null) {
+            return Optional.empty();
+        }
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "design map");
+        run.put("structureFamily", "code (a StructureFactory), not recorded, and the structure recorded is its output at "
+                + "point structureAtPoint");
+        run.put("structureAtPoint", Integer.toString(at));
+        for (int a = 0; a < axes.size(); a++) {
+            Axis ax = axes.get(a);
+            run.put("axis" + a, ax.name() + "|" + ax.unit() + "|" + SweepProvenance.values(ax.values()));
+        }
+        run.put("evaluator", setup.evaluator());
+        return Optional.of(SweepProvenance.of(run, structure, setup.options(), failureList, warnings));
     }
 
     private String describe(int i) {
@@ -208,7 +300,7 @@ public final class DesignMapResult implements CsvTable {
                     .append(Decimals.format(lo)).append(" to ").append(Decimals.format(hi, ax.unit())).append(')');
         }
         sb.append("; ").append(quantities.stream().map(Column::header).toList()).append(", ")
-                .append(failureList.size()).append(" failed");
+                .append(failureList.size()).append(" failed").append(Warning.lines(warnings));
         return sb.append('\n').append(preview(10)).toString();
     }
 }

@@ -20,6 +20,7 @@ import org.wurtzkit.solvers.transport.mobility.MobilityResult;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * The designer's trade-off over a family of stacks: for every point of a grid of design variables,
@@ -227,7 +228,7 @@ public final class DesignTradeoff {
     public TradeoffResult run() {
         int n = size();
         @SuppressWarnings("unchecked")
-        List<String>[] warnings = new List[n];
+        List<Warning>[] warnings = new List[n];
         BiasSweep sweeper = new BiasSweep(solver);
         ParallelPoints.Outcome[] out = ParallelPoints.run(n, threads, i -> {
             Structure s = factory.at(parameters(i));
@@ -259,16 +260,17 @@ public final class DesignTradeoff {
                 throw new WurtzkitException(ErrorKind.NOT_CONVERGED, "the trade-off sweep needs every bias point; "
                         + r.failures().size() + " of " + r.size() + " failed, first: " + r.failures().get(0));
             }
-            double vth = r.thresholdVoltage(definition);
+            Threshold th = r.threshold(definition);
+            double vth = th.voltageV();
             Solution zero = r.solution(0).orElseThrow();
             MobilityResult mu = Mobility.of(zero, mobility);
             LeakageCurrent j = GateLeakage.atBias(r, -reverseBiasV, leakage);
-            List<String> w = new ArrayList<>();
-            for (String m : mu.warnings()) {
-                w.add("mobility: " + m);
+            List<Warning> w = new ArrayList<>(Warning.union(s.warnings(), r.warnings(), th.warnings()));
+            for (Warning m : mu.warnings()) {
+                w.add(new Warning(m.kind(), "mobility: " + m.message()));
             }
-            for (String m : j.warnings()) {
-                w.add("leakage: " + m);
+            for (Warning m : j.warnings()) {
+                w.add(new Warning(m.kind(), "leakage: " + m.message()));
             }
             warnings[i] = List.copyOf(w);
             double[] v = new double[WIDTH];
@@ -285,6 +287,38 @@ public final class DesignTradeoff {
             params[i] = parameters(i);
         }
         return new TradeoffResult(this, params, out, warnings, bandTargetV, bandToleranceV);
+    }
+
+    /** {@return the structure factory (code)} */
+    StructureFactory factory() {
+        return factory;
+    }
+
+    /** {@return the solver's options} */
+    org.wurtzkit.solvers.sp.SolverOptions solverOptions() {
+        return solver.options();
+    }
+
+    /**
+     * {@return the settings of this trade-off besides its axes and factory, exactly (numbers by
+     * {@link Double#toString(double)}), as provenance run entries}
+     */
+    java.util.Map<String, String> settings() {
+        java.util.Map<String, String> m = new java.util.LinkedHashMap<>();
+        m.put("reverseBiasV", Double.toString(reverseBiasV));
+        m.put("thresholdDefinition", definition.toString());
+        if (fixedSweep != null) {
+            m.put("thresholdBiasesV", SweepProvenance.values(fixedSweep.grid().values()));
+        } else {
+            m.put("sweepStepV", Double.toString(stepV));
+            m.put("sweepMarginV", Double.toString(marginV));
+            m.put("sweepMarginFraction", Double.toString(marginFraction));
+        }
+        m.put("bandTargetV", Double.toString(bandTargetV));
+        m.put("bandToleranceV", Double.toString(bandToleranceV));
+        m.put("mobilityOptions", mobility.toString());
+        m.put("leakageOptions", leakage.describe());
+        return m;
     }
 
     /** @return e.g. "trade-off over 3 x 3 x 4 stacks: J at V_R = 10 V, threshold at ..., band -4 V +- 0.5 V" */

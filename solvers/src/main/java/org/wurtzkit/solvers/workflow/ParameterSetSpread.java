@@ -9,7 +9,9 @@ import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.ParameterSet;
 import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
+import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * Solves the same design with every parameter set and reports how far the results spread: the
@@ -87,15 +89,19 @@ public final class ParameterSetSpread {
         }
         List<ParameterSet> members = List.copyOf(sets);
         BiasSweep sweep = new BiasSweep(solver);
+        @SuppressWarnings("unchecked")
+        List<Warning>[] memberWarnings = new List[members.size()]; // each slot written by the one worker of its member
         ParallelPoints.Outcome[] out = ParallelPoints.run(members.size(), threads, i -> {
             Structure s = factory.apply(members.get(i));
             if (s == null) {
                 throw new WurtzkitException(ErrorKind.INVALID_CALLBACK_RESULT, "the structure factory returned null");
             }
-            double ns = solver.solve(s).sheetDensityPerCm2();
-            double vth = threshold.thresholdVoltage(s, sweep);
-            return new double[] {ns, vth};
+            Solution own = solver.solve(s);
+            BiasSweepResult r = sweep.run(s, threshold.grid());
+            Threshold t = threshold.threshold(r);
+            memberWarnings[i] = Warning.union(s.warnings(), own.warnings(), r.warnings(), t.warnings());
+            return new double[] {own.sheetDensityPerCm2(), t.voltageV()};
         }, progress);
-        return new SpreadResult(members, out, threshold);
+        return new SpreadResult(members, out, threshold, memberWarnings, factory, solver.options());
     }
 }

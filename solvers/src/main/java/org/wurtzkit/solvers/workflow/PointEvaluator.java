@@ -7,6 +7,7 @@ import org.wurtzkit.errors.Require;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * What a design map computes at each point. Implementations must be thread-safe and
@@ -26,6 +27,52 @@ public interface PointEvaluator {
      * @return one value per column
      */
     double[] evaluate(Structure structure, SelfConsistentSolver solver);
+
+    /**
+     * The values of a point with the warnings they rest on.
+     *
+     * @param values   one value per column
+     * @param warnings what may make them mislead, possibly none
+     */
+    record Evaluated(double[] values, List<Warning> warnings) {
+        /**
+         * Validates and copies the warnings (the values are kept as given; a map checks their count).
+         *
+         * @param values   one value per column
+         * @param warnings what may make them mislead, possibly none
+         */
+        public Evaluated {
+            Require.nonNull("warnings", warnings);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /**
+     * As {@link #evaluate}, with the warnings of the point. The default calls {@link #evaluate} and
+     * returns the structure's own warnings ({@link Structure#warnings()}); the evaluators of this
+     * interface's factories return those of their solutions, sweeps and thresholds too. Maps and
+     * studies call this method, so an implementation that overrides it should compute the same
+     * values as {@link #evaluate}.
+     *
+     * @param structure the point's structure
+     * @param solver    the map's solver
+     * @return the values and the warnings
+     */
+    default Evaluated evaluateWithWarnings(Structure structure, SelfConsistentSolver solver) {
+        return new Evaluated(evaluate(structure, solver), structure.warnings());
+    }
+
+    /**
+     * What this evaluator computes, in words, for a result's provenance. The default says that the
+     * evaluator is code the provenance cannot hold; the factories of this interface name their
+     * quantities and settings.
+     *
+     * @return the description
+     */
+    default String description() {
+        return "a custom PointEvaluator (code, not recorded) with columns "
+                + columns().stream().map(Column::header).toList();
+    }
 
     /**
      * One cold solve per point, from which the quantities are read.
@@ -52,12 +99,22 @@ public interface PointEvaluator {
 
             @Override
             public double[] evaluate(Structure structure, SelfConsistentSolver solver) {
+                return evaluateWithWarnings(structure, solver).values();
+            }
+
+            @Override
+            public Evaluated evaluateWithWarnings(Structure structure, SelfConsistentSolver solver) {
                 Solution s = solver.solve(structure);
                 double[] out = new double[q.length];
                 for (int i = 0; i < q.length; i++) {
                     out[i] = q[i].extractor().applyAsDouble(s);
                 }
-                return out;
+                return new Evaluated(out, Warning.union(structure.warnings(), s.warnings()));
+            }
+
+            @Override
+            public String description() {
+                return "one cold solve per point, read: " + columns.stream().map(Column::header).toList();
             }
         };
     }
@@ -80,7 +137,19 @@ public interface PointEvaluator {
 
             @Override
             public double[] evaluate(Structure structure, SelfConsistentSolver solver) {
-                return new double[] {extraction.thresholdVoltage(structure, new BiasSweep(solver))};
+                return evaluateWithWarnings(structure, solver).values();
+            }
+
+            @Override
+            public Evaluated evaluateWithWarnings(Structure structure, SelfConsistentSolver solver) {
+                BiasSweepResult r = new BiasSweep(solver).run(structure, extraction.grid());
+                Threshold t = extraction.threshold(r);
+                return new Evaluated(new double[] {t.voltageV()}, Warning.union(sweepWarnings(structure, r), t.warnings()));
+            }
+
+            @Override
+            public String description() {
+                return "threshold voltage per point: " + extraction;
             }
         };
     }
@@ -96,5 +165,14 @@ public interface PointEvaluator {
      */
     static SheetDensityAndThreshold sheetDensityAndThreshold(ThresholdDefinition definition) {
         return SheetDensityAndThreshold.of(definition);
+    }
+
+    /**
+     * @param structure a point's structure
+     * @param sweep     its bias sweep
+     * @return the structure's warnings (its own gate bias too, as it is the point's) and the sweep's
+     */
+    private static List<Warning> sweepWarnings(Structure structure, BiasSweepResult sweep) {
+        return Warning.union(structure.warnings(), sweep.warnings());
     }
 }

@@ -12,6 +12,7 @@ import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * A design-map evaluator that gives, for each point, the 2DEG sheet density at the structure's own
@@ -102,6 +103,12 @@ public record SheetDensityAndThreshold(ThresholdDefinition definition, double st
 
     @Override
     public double[] evaluate(Structure structure, SelfConsistentSolver solver) {
+        return evaluateWithWarnings(structure, solver).values();
+    }
+
+    /** {@return the values, with the warnings of the stack, of its sweep and of the threshold} */
+    @Override
+    public Evaluated evaluateWithWarnings(Structure structure, SelfConsistentSolver solver) {
         double model = modelThreshold(structure, solver);
         BiasGrid grid = grid(structure, model);
         BiasSweepResult r = new BiasSweep(solver).run(structure, grid);
@@ -109,7 +116,15 @@ public record SheetDensityAndThreshold(ThresholdDefinition definition, double st
             throw new WurtzkitException(ErrorKind.NOT_CONVERGED, "the threshold sweep needs every bias point; "
                     + r.failures().size() + " of " + r.size() + " failed, first: " + r.failures().get(0));
         }
-        return new double[] {r.sheetDensityPerCm2()[0], r.thresholdVoltage(definition), model};
+        Threshold t = r.threshold(definition);
+        return new Evaluated(new double[] {r.sheetDensityPerCm2()[0], t.voltageV(), model},
+                Warning.union(structure.warnings(), r.warnings(), t.warnings()));
+    }
+
+    /** {@return {@link #toString()}} */
+    @Override
+    public String description() {
+        return toString();
     }
 
     private static double modelThreshold(Structure structure, SelfConsistentSolver solver) {

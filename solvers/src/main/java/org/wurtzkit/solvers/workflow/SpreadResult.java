@@ -3,10 +3,20 @@ package org.wurtzkit.solvers.workflow;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.function.Function;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.ParameterSet;
+import org.wurtzkit.material.ParameterSetHash;
+import org.wurtzkit.provenance.ResultProvenance;
+import org.wurtzkit.solvers.sp.SolverOptions;
+import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * The result of a {@link ParameterSetSpread}: each member (parameter set) with its n_s and V_th,
@@ -14,7 +24,7 @@ import org.wurtzkit.units.Decimals;
  *
  * <p>CSV ({@link #writeCsv(java.io.Writer)}): one row per member, columns
  * {@code parameter_set, sheet_density_cm^-2, threshold_voltage_V, status}. The statistics are a
- * second table, {@link #summary()}.
+ * second table, {@link #summary()}. Both start with the {@link #provenance()} comment lines.
  */
 public final class SpreadResult implements CsvTable {
     private static final List<Column> COLUMNS = List.of(Column.of("parameter_set", ""),
@@ -89,8 +99,24 @@ public final class SpreadResult implements CsvTable {
     private final Statistics threshold;
     private final ThresholdExtraction extraction;
     private final List<PointFailure> failures;
+    private final List<ParameterSet> sets;
+    private final List<Warning> warnings;
+    private final Function<ParameterSet, Structure> factory;
+    private final SolverOptions options;
 
-    SpreadResult(List<ParameterSet> sets, ParallelPoints.Outcome[] out, ThresholdExtraction extraction) {
+    SpreadResult(List<ParameterSet> sets, ParallelPoints.Outcome[] out, ThresholdExtraction extraction,
+            List<Warning>[] memberWarnings, Function<ParameterSet, Structure> factory, SolverOptions options) {
+        this.sets = List.copyOf(sets);
+        this.factory = factory;
+        this.options = options;
+        String[] labels = new String[sets.size()];
+        @SuppressWarnings("unchecked")
+        List<Warning>[] per = new List[sets.size()];
+        for (int i = 0; i < labels.length; i++) {
+            labels[i] = "parameter set " + sets.get(i).name();
+            per[i] = out[i].values() != null ? memberWarnings[i] : null;
+        }
+        this.warnings = PointWarnings.of(per, labels);
         List<Member> m = new ArrayList<>();
         List<PointFailure> f = new ArrayList<>();
         double[] ns = new double[sets.size()];
@@ -161,7 +187,13 @@ public final class SpreadResult implements CsvTable {
                 List.of("median", CsvTable.cell(sheet.median()), CsvTable.cell(threshold.median())),
                 List.of("max", CsvTable.cell(sheet.max()), CsvTable.cell(threshold.max())),
                 List.of("count", Integer.toString(sheet.count()), Integer.toString(threshold.count())));
+        Optional<ResultProvenance> p = provenance();
         return new CsvTable() {
+            @Override
+            public Optional<ResultProvenance> provenance() {
+                return p;
+            }
+
             @Override
             public List<Column> columns() {
                 return cols;
@@ -208,6 +240,64 @@ public final class SpreadResult implements CsvTable {
             sb.append("\n  ").append(m);
         }
         sb.append("\n  n_s: ").append(sheet.toString("cm^-2")).append("\n  V_th: ").append(threshold.toString("V"));
-        return sb.toString();
+        return sb.append(Warning.lines(warnings)).toString();
+    }
+
+    /**
+     * What may make this spread mislead: each kind of warning that a computed member raised (its
+     * stack's, its solution's, its threshold sweep's and threshold's), once, at the first such
+     * member, with the count of the others.
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
+    }
+
+    /**
+     * What produced this spread. The structure of each member comes from a factory of the caller
+     * ({@code Function<ParameterSet, Structure>}), which is code the provenance cannot hold; it
+     * records instead
+     * <ul>
+     * <li>as its structure, the factory's output for the first member whose structure can be built
+     *     (its index is {@code structureOfMember} in the run);</li>
+     * <li>{@code structureFamily}: that the factory is code, not recorded;</li>
+     * <li>each member as {@code set<i> = name sha256 <hash>}: a re-run looks the sets up by name
+     *     ({@link org.wurtzkit.material.ParameterSets#named}) and checks the hash;</li>
+     * <li>the threshold extraction: {@code thresholdDefinition} (its text) and
+     *     {@code thresholdBiasesV} (every bias by {@link Double#toString(double)});</li>
+     * <li>the solver options, every failed member and the spread's warnings.</li>
+     * </ul>
+     * With the same factory, the sets so found and a solver of these options, a re-run gives the
+     * same table bit for bit.
+     *
+     * @return the provenance, or empty when no member's structure can be built
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        Structure structure = null;
+        int at = -1;
+        for (int i = 0; i < sets.size() && structure == null; i++) {
+            try {
+                structure = factory.apply(sets.get(i));
+                at = i;
+            } catch (InvalidParameterException | WurtzkitException e) {
+                // this member's factory failed in the run too; try the next
+            }
+        }
+        if (structure == null) {
+            return Optional.empty();
+        }
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "parameter-set spread");
+        run.put("structureFamily", "code (a function of the parameter set), not recorded, and the structure recorded is "
+                + "its output for member structureOfMember");
+        run.put("structureOfMember", Integer.toString(at));
+        for (int i = 0; i < sets.size(); i++) {
+            run.put("set" + i, sets.get(i).name() + " sha256 " + ParameterSetHash.sha256(sets.get(i)));
+        }
+        run.put("thresholdDefinition", extraction.definition().toString());
+        run.put("thresholdBiasesV", SweepProvenance.values(extraction.grid().values()));
+        return Optional.of(SweepProvenance.of(run, structure, options, failures, warnings));
     }
 }

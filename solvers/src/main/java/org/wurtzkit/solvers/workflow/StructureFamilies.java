@@ -2,10 +2,11 @@ package org.wurtzkit.solvers.workflow;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.wurtzkit.structure.InsulatorLayer;
+import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.Composition;
+import org.wurtzkit.structure.InsulatorLayer;
 import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.LayerMaterial;
 import org.wurtzkit.structure.Structure;
@@ -37,6 +38,16 @@ public final class StructureFamilies {
             @Override
             public Column parameter() {
                 return c;
+            }
+
+            @Override
+            public String description() {
+                return "StructureFamilies.layerThicknessNm(template, \"" + layerName + "\")";
+            }
+
+            @Override
+            public Optional<Structure> template() {
+                return Optional.of(template);
             }
 
             @Override
@@ -73,6 +84,16 @@ public final class StructureFamilies {
             @Override
             public Column parameter() {
                 return c;
+            }
+
+            @Override
+            public String description() {
+                return "StructureFamilies.alFraction(template, \"" + layerName + "\")";
+            }
+
+            @Override
+            public Optional<Structure> template() {
+                return Optional.of(template);
             }
 
             @Override
@@ -134,6 +155,16 @@ public final class StructureFamilies {
             }
 
             @Override
+            public String description() {
+                return "StructureFamilies.insulatorThicknessNm(template, \"" + insulatorName + "\")";
+            }
+
+            @Override
+            public Optional<Structure> template() {
+                return Optional.of(template);
+            }
+
+            @Override
             public Structure at(double nm) {
                 Require.inRange("thickness of insulator \"" + insulatorName + "\" (nm)", nm, Double.MIN_VALUE,
                         Units.mToNm(Layer.MAX_THICKNESS));
@@ -163,6 +194,16 @@ public final class StructureFamilies {
             @Override
             public Column parameter() {
                 return c;
+            }
+
+            @Override
+            public String description() {
+                return "StructureFamilies.recessDepthNm(template, \"" + layerName + "\")";
+            }
+
+            @Override
+            public Optional<Structure> template() {
+                return Optional.of(template);
             }
 
             @Override

@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.workflow;
 
+import java.util.Optional;
 import java.util.function.DoubleFunction;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.structure.Structure;
@@ -18,6 +19,26 @@ public interface StructureFamily {
      * @return the structure
      */
     Structure at(double value);
+
+    /**
+     * What this family is, in words, for a result's provenance. The default says that the family is
+     * code the provenance cannot hold; the families of {@link StructureFamilies} name their factory
+     * method and its layer, e.g. {@code StructureFamilies.layerThicknessNm(template, "barrier")}, which
+     * with {@link #template()} rebuilds them from data.
+     *
+     * @return the description
+     */
+    default String description() {
+        return "code (a StructureFamily), not recorded";
+    }
+
+    /**
+     * {@return the template the family varies, when it is one of {@link StructureFamilies}; empty for
+     * a family of code}
+     */
+    default Optional<Structure> template() {
+        return Optional.empty();
+    }
 
     /**
      * @param name     the parameter's name

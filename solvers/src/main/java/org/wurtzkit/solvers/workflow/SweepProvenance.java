@@ -11,7 +11,11 @@ import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.warnings.Warning;
 
-/** The provenance of a sweep over one parameter, shared by the bias and temperature sweeps. */
+/**
+ * The provenance of a workflow result: of a sweep over one parameter (bias and temperature sweeps),
+ * and of maps, spreads, searches and studies, whose run descriptions their results compose. The one
+ * place where a failed point and a typed warning become provenance lines.
+ */
 final class SweepProvenance {
     private SweepProvenance() {
     }
@@ -31,11 +35,48 @@ final class SweepProvenance {
             SolverOptions options, List<PointFailure> failures, List<Warning> warnings) {
         Map<String, String> run = new LinkedHashMap<>();
         run.put("computation", computation);
+        run.put(key, values(values));
+        return of(run, structure, options, failures, warnings);
+    }
+
+    /**
+     * @param values numbers
+     * @return each written by {@link Double#toString(double)}, separated by one space
+     */
+    static String values(double[] values) {
         StringBuilder b = new StringBuilder();
         for (double v : values) {
             b.append(b.length() == 0 ? "" : " ").append(Double.toString(v));
         }
-        run.put(key, b.toString());
+        return b.toString();
+    }
+
+    /**
+     * @param text numbers as {@link #values(double[])} writes them
+     * @return the numbers
+     */
+    static double[] parseValues(String text) {
+        if (text.isEmpty()) {
+            return new double[0];
+        }
+        String[] parts = text.split(" ");
+        double[] out = new double[parts.length];
+        for (int i = 0; i < parts.length; i++) {
+            out[i] = Double.parseDouble(parts[i]);
+        }
+        return out;
+    }
+
+    /**
+     * @param run       what was computed, {@code computation} first
+     * @param structure the structure recorded
+     * @param options   the solver options
+     * @param failures  the failed points
+     * @param warnings  the result's typed warnings
+     * @return the provenance: a warning line for every failed point, then the result's warnings
+     */
+    static ResultProvenance of(Map<String, String> run, Structure structure, SolverOptions options,
+            List<PointFailure> failures, List<Warning> warnings) {
         List<String> w = new ArrayList<>();
         for (PointFailure f : failures) {
             w.add("point failed: " + f);

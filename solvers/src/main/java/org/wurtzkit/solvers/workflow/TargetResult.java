@@ -1,6 +1,11 @@
 package org.wurtzkit.solvers.workflow;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.wurtzkit.provenance.ResultProvenance;
+import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
 
@@ -9,7 +14,8 @@ import org.wurtzkit.units.Decimals;
  * value of the target quantity there, and every evaluation made on the way. Immutable.
  *
  * <p>CSV: one row per evaluation, columns {@code evaluation, <parameter>_<unit>,
- * <quantity>_<unit>, accepted} (accepted is "yes" on the returned point).
+ * <quantity>_<unit>, accepted} (accepted is "yes" on the returned point), after the
+ * {@link #provenance()} comment lines.
  */
 public final class TargetResult implements CsvTable {
     private final Column parameter;
@@ -22,9 +28,20 @@ public final class TargetResult implements CsvTable {
     private final double[] evaluatedParameters;
     private final double[] evaluatedValues;
     private final List<Column> columns;
+    private final Setup setup;
+
+    /**
+     * How the search ran besides its target: the family, the solver's options, the interval, the
+     * evaluation budget, for a threshold target the extraction (else null), and for a sheet-density
+     * target the relative tolerance as given (else NaN).
+     */
+    record Setup(StructureFamily family, SolverOptions options, double lower, double upper, int maxEvaluations,
+            ThresholdExtraction extraction, double relativeTolerance) {
+    }
 
     TargetResult(Column parameter, Column quantity, double target, double tolerance, double value, double achieved,
-            Structure structure, double[] evaluatedParameters, double[] evaluatedValues) {
+            Structure structure, double[] evaluatedParameters, double[] evaluatedValues, Setup setup) {
+        this.setup = setup;
         this.parameter = parameter;
         this.quantity = quantity;
         this.target = target;
@@ -70,6 +87,48 @@ public final class TargetResult implements CsvTable {
     /** {@return the structure at the value found} */
     public Structure structure() {
         return structure;
+    }
+
+    /**
+     * What produced this search. When the family is one of {@link StructureFamilies}, it is data: the
+     * structure recorded is the family's template ({@code structureRole} "template of the family")
+     * and {@code structureFamily} names the factory method and its layer, e.g.
+     * {@code StructureFamilies.layerThicknessNm(template, "barrier")}; a re-run rebuilds the family from
+     * them. A family of code is not recorded: the structure recorded is then the structure found
+     * ({@code structureRole} "structure found"), and a re-run needs the same family. The run also
+     * records the quantity and its {@code target}, {@code tolerance} (and the {@code relativeTolerance}
+     * as given, for a sheet-density target), the interval {@code lowerEnd},
+     * {@code upperEnd}, {@code maxEvaluations}, for a threshold target the {@code thresholdDefinition}
+     * and {@code thresholdBiasesV}, and every evaluated parameter value in order
+     * ({@code evaluatedValues}); with a solver of the recorded options the search repeats them and
+     * its table bit for bit.
+     *
+     * @return the provenance
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "target search");
+        Optional<Structure> template = setup.family().template();
+        run.put("structureFamily", setup.family().description());
+        run.put("structureRole", template.isPresent() ? "template of the family" : "structure found");
+        run.put("parameter", parameter.header());
+        run.put("quantity", quantity.header());
+        run.put("target", Double.toString(target));
+        run.put("tolerance", Double.toString(tolerance));
+        if (!Double.isNaN(setup.relativeTolerance())) {
+            run.put("relativeTolerance", Double.toString(setup.relativeTolerance()));
+        }
+        run.put("lowerEnd", Double.toString(setup.lower()));
+        run.put("upperEnd", Double.toString(setup.upper()));
+        run.put("maxEvaluations", Integer.toString(setup.maxEvaluations()));
+        if (setup.extraction() != null) {
+            run.put("thresholdDefinition", setup.extraction().definition().toString());
+            run.put("thresholdBiasesV", SweepProvenance.values(setup.extraction().grid().values()));
+        }
+        run.put("evaluatedValues", SweepProvenance.values(evaluatedParameters));
+        return Optional.of(SweepProvenance.of(run, template.orElse(structure), setup.options(), List.of(),
+                warnings()));
     }
 
     /**

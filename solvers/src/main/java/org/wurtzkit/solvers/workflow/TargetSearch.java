@@ -71,7 +71,7 @@ public final class TargetSearch {
         Require.positive("target sheet density (cm^-2)", targetPerCm2);
         Require.inRange("relative tolerance on the sheet density", relativeTolerance, 1e-9, 0.5);
         return search(family, lower, upper, SHEET, targetPerCm2, relativeTolerance * targetPerCm2,
-                s -> solver.solve(s).sheetDensityPerCm2());
+                s -> solver.solve(s).sheetDensityPerCm2(), null, relativeTolerance);
     }
 
     /**
@@ -96,7 +96,7 @@ public final class TargetSearch {
         Require.nonNull("threshold extraction", extraction);
         BiasSweep sweep = new BiasSweep(solver);
         return search(family, lower, upper, THRESHOLD, targetV, toleranceV,
-                s -> extraction.thresholdVoltage(s, sweep));
+                s -> extraction.thresholdVoltage(s, sweep), extraction, Double.NaN);
     }
 
     @FunctionalInterface
@@ -167,8 +167,10 @@ public final class TargetSearch {
     }
 
     private TargetResult search(StructureFamily family, double lower, double upper, Column quantity, double target,
-            double tolerance, Measure measure) {
+            double tolerance, Measure measure, ThresholdExtraction extraction, double relativeTolerance) {
         Require.nonNull("structure family", family);
+        TargetResult.Setup setup = new TargetResult.Setup(family, solver.options(), lower, upper, maxEvaluations,
+                extraction, relativeTolerance);
         String name = family.parameter().name();
         Require.finite("lower end of the " + name + " interval", lower);
         Require.finite("upper end of the " + name + " interval", upper);
@@ -182,10 +184,10 @@ public final class TargetSearch {
         double vLo = ev.v[lo];
         double vHi = ev.v[hi];
         if (Math.abs(vLo - target) <= tolerance) {
-            return result(ev, lo, quantity, target, tolerance);
+            return result(ev, lo, quantity, target, tolerance, setup);
         }
         if (Math.abs(vHi - target) <= tolerance) {
-            return result(ev, hi, quantity, target, tolerance);
+            return result(ev, hi, quantity, target, tolerance, setup);
         }
         double min = Math.min(vLo, vHi);
         double max = Math.max(vLo, vHi);
@@ -204,7 +206,7 @@ public final class TargetSearch {
                 return g;
             }, lower, upper);
         } catch (Accepted a) {
-            return result(ev, ev.index(a.parameter), quantity, target, tolerance);
+            return result(ev, ev.index(a.parameter), quantity, target, tolerance, setup);
         } catch (TooManyEvaluationsException e) {
             throw new WurtzkitException(ErrorKind.NOT_CONVERGED, String.format(Locale.ROOT,
                     "target search for %s = %s%s over %s in [%s, %s]%s: tolerance %s not met in %d evaluations",
@@ -213,7 +215,7 @@ public final class TargetSearch {
         }
         int i = ev.index(root);
         if (Math.abs(ev.v[i] - target) <= tolerance) {
-            return result(ev, i, quantity, target, tolerance);
+            return result(ev, i, quantity, target, tolerance, setup);
         }
         throw new WurtzkitException(ErrorKind.NOT_CONVERGED, String.format(Locale.ROOT,
                 "target search for %s = %s%s: the interval of %s shrank to %s%s, where the value is %s, "
@@ -222,8 +224,9 @@ public final class TargetSearch {
                 lower, upper));
     }
 
-    private static TargetResult result(Evaluations ev, int i, Column quantity, double target, double tolerance) {
+    private static TargetResult result(Evaluations ev, int i, Column quantity, double target, double tolerance,
+            TargetResult.Setup setup) {
         return new TargetResult(ev.family.parameter(), quantity, target, tolerance, ev.p[i], ev.v[i], ev.s[i],
-                Arrays.copyOf(ev.p, ev.n), Arrays.copyOf(ev.v, ev.n));
+                Arrays.copyOf(ev.p, ev.n), Arrays.copyOf(ev.v, ev.n), setup);
     }
 }

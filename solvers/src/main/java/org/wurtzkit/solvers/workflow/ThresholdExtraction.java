@@ -50,7 +50,15 @@ public record ThresholdExtraction(BiasGrid grid, ThresholdDefinition definition)
      * @throws WurtzkitException of kind NOT_CONVERGED if a bias point failed
      */
     public Threshold threshold(Structure structure, BiasSweep sweep) {
-        BiasSweepResult r = Require.nonNull("bias sweep", sweep).run(structure, grid);
+        return threshold(Require.nonNull("bias sweep", sweep).run(structure, grid));
+    }
+
+    /**
+     * @param r the sweep over this extraction's grid
+     * @return V_th with its warnings
+     * @throws WurtzkitException of kind NOT_CONVERGED if a bias point failed
+     */
+    Threshold threshold(BiasSweepResult r) {
         if (!r.failures().isEmpty()) {
             throw new WurtzkitException(ErrorKind.NOT_CONVERGED, "threshold extraction needs every bias point; "
                     + r.failures().size() + " of " + r.size() + " failed, first: " + r.failures().get(0));

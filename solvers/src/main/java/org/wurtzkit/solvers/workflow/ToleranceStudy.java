@@ -18,6 +18,7 @@ import org.wurtzkit.structure.LayerMaterial;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.units.Units;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * A tolerance study: how growth tolerances and uncertain material constants spread the results of
@@ -170,8 +171,21 @@ public final class ToleranceStudy {
      * @throws java.util.concurrent.CancellationException if the calling thread is interrupted
      */
     public ToleranceStudyResult run() {
-        ParallelPoints.Outcome[] out = ParallelPoints.run(size(), threads, this::compute, progress);
-        return ToleranceStudyResult.of(design, outputs, out);
+        @SuppressWarnings("unchecked")
+        List<Warning>[] pointWarnings = new List[size()]; // each slot written by the one worker of its evaluation
+        ParallelPoints.Outcome[] out = ParallelPoints.run(size(), threads, j -> {
+            Computed c = computeWithWarnings(j);
+            pointWarnings[j] = c.warnings();
+            return c.values();
+        }, progress);
+        return ToleranceStudyResult.of(design, outputs, out).withOrigin(origin(), pointWarnings);
+    }
+
+    /** {@return what a result's provenance records of this study} */
+    private ToleranceStudyResult.Origin origin() {
+        List<String> tol = tolerances.stream().map(Tolerance::toString).toList();
+        List<String> ev = evaluators.stream().map(PointEvaluator::description).toList();
+        return new ToleranceStudyResult.Origin(template, solver.options(), tol, ev);
     }
 
     /**
@@ -181,15 +195,28 @@ public final class ToleranceStudy {
      * @return the result, identical to {@link #run()}'s
      */
     public ToleranceStudyResult result(Collection<Evaluation> evaluations) {
-        return ToleranceStudyResult.of(design, outputs, evaluations);
+        return ToleranceStudyResult.of(design, outputs, evaluations).withOrigin(origin(), null);
+    }
+
+    /** The outputs of one evaluation with the warnings of its evaluators. */
+    private record Computed(double[] values, List<Warning> warnings) {
     }
 
     private double[] compute(int evaluation) {
+        return computeWithWarnings(evaluation).values();
+    }
+
+    private Computed computeWithWarnings(int evaluation) {
         Structure s = structure(evaluation);
         double[] out = new double[outputs.size()];
+        List<Warning> warnings = List.of();
         int at = 0;
         for (PointEvaluator e : evaluators) {
-            double[] v = e.evaluate(s, solver);
+            PointEvaluator.Evaluated r = e.evaluateWithWarnings(s, solver);
+            double[] v = r == null ? null : r.values();
+            if (r != null) {
+                warnings = Warning.union(warnings, r.warnings());
+            }
             int w = e.columns().size();
             if (v == null || v.length != w) {
                 throw new IllegalStateException("the evaluator returned " + (v == null ? "null" : v.length + " values")
@@ -198,7 +225,7 @@ public final class ToleranceStudy {
             System.arraycopy(v, 0, out, at, w);
             at += w;
         }
-        return out;
+        return new Computed(out, warnings);
     }
 
     /**

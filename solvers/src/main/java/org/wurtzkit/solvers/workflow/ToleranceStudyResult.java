@@ -5,7 +5,9 @@ import java.util.Arrays;
 import java.util.Collection;
 import java.util.Collections;
 import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.apache.commons.math3.stat.StatUtils;
 import org.apache.commons.math3.stat.descriptive.rank.Percentile;
@@ -13,6 +15,11 @@ import org.wurtzkit.errors.ErrorKind;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.provenance.ResultProvenance;
+import org.wurtzkit.solvers.sp.SolverOptions;
+import org.wurtzkit.structure.Structure;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * The result of a Monte Carlo study ({@link ToleranceStudy}, or any response evaluated over a
@@ -87,11 +94,12 @@ public final class ToleranceStudyResult implements CsvTable {
      * @param indices  one index per input, in input order
      * @param warnings why the indices may mislead, if they may (empty otherwise): a standard error
      *                 above {@value #ROUGH_STANDARD_ERROR}, which can reorder inputs whose indices lie
-     *                 closer than that; rows left out by failures, which select the samples by
-     *                 their outcome
+     *                 closer than that ({@link WarningKind#SENSITIVITY_STANDARD_ERROR_LARGE}); rows
+     *                 left out by failures, which select the samples by their outcome
+     *                 ({@link WarningKind#POINTS_LEFT_OUT})
      */
     public record Sensitivity(Column column, double variance, int rows, int skipped, List<SobolIndex> indices,
-            List<String> warnings) {
+            List<Warning> warnings) {
         /** Standard error of a first-order index above which the ranking gets a warning. */
         public static final double ROUGH_STANDARD_ERROR = 0.05;
 
@@ -141,9 +149,52 @@ public final class ToleranceStudyResult implements CsvTable {
     private final String[] failure;
     private final PointFailure[] failureAt;
     private final List<PointFailure> failures;
+    private final Origin origin; // null when assembled without its study
+    private final List<Warning> warnings;
+
+    /**
+     * What a study's provenance records besides its sample design: the template, the solver's
+     * options, each tolerance and each evaluator in words.
+     */
+    record Origin(Structure template, SolverOptions options, List<String> tolerances, List<String> evaluators) {
+    }
+
+    private ToleranceStudyResult(ToleranceStudyResult r, Origin origin, List<Warning> warnings) {
+        this.design = r.design;
+        this.outputs = r.outputs;
+        this.values = r.values;
+        this.failure = r.failure;
+        this.failureAt = r.failureAt;
+        this.failures = r.failures;
+        this.origin = origin;
+        this.warnings = warnings;
+    }
+
+    /**
+     * @param origin        the study that ran this result
+     * @param pointWarnings each evaluation's warnings, or null when they are not known (evaluations
+     *                      computed elsewhere)
+     * @return this result with its provenance and warnings
+     */
+    ToleranceStudyResult withOrigin(Origin origin, List<Warning>[] pointWarnings) {
+        List<Warning> w = List.of();
+        if (pointWarnings != null) {
+            String[] labels = new String[size()];
+            @SuppressWarnings("unchecked")
+            List<Warning>[] per = new List[size()];
+            for (int j = 0; j < labels.length; j++) {
+                labels[j] = "evaluation " + j + " (" + where(j) + ")";
+                per[j] = failure[j] == null ? pointWarnings[j] : null;
+            }
+            w = PointWarnings.of(per, labels);
+        }
+        return new ToleranceStudyResult(this, origin, w);
+    }
 
     private ToleranceStudyResult(SampleDesign design, List<Column> outputs, double[] values, String[] failure,
             ErrorKind[] kinds) {
+        this.origin = null;
+        this.warnings = List.of();
         this.design = design;
         this.outputs = outputs;
         this.values = values;
@@ -395,15 +446,17 @@ public final class ToleranceStudyResult implements CsvTable {
             double se = Math.sqrt(StatUtils.variance(terms) / m);
             indices.add(new SobolIndex(design.inputs().get(i).column().name(), vi / var, se / var, tot / (2.0 * m) / var));
         }
-        List<String> warnings = new ArrayList<>();
+        List<Warning> warnings = new ArrayList<>();
         double worst = indices.stream().mapToDouble(SobolIndex::firstOrderStandardError).max().orElse(0);
         if (worst > Sensitivity.ROUGH_STANDARD_ERROR) {
-            warnings.add(String.format(java.util.Locale.ROOT, "first-order indices carry standard errors up to %.3f "
-                    + "with %d rows: inputs closer than that may be ranked in either order; add samples", worst, m));
+            warnings.add(new Warning(WarningKind.SENSITIVITY_STANDARD_ERROR_LARGE, String.format(java.util.Locale.ROOT,
+                    "first-order indices carry standard errors up to %.3f with %d rows: inputs closer than that may "
+                    + "be ranked in either order; add samples", worst, m)));
         }
         if (m < n) {
-            warnings.add((n - m) + " of " + n + " rows left out because an evaluation failed: if failures depend on "
-                    + "the inputs, the indices describe only the part of the input space that succeeded");
+            warnings.add(new Warning(WarningKind.POINTS_LEFT_OUT, (n - m) + " of " + n + " rows left out because an "
+                    + "evaluation failed: if failures depend on the inputs, the indices describe only the part of the "
+                    + "input space that succeeded"));
         }
         return new Sensitivity(c, var, m, n - m, indices, warnings);
     }
@@ -434,7 +487,7 @@ public final class ToleranceStudyResult implements CsvTable {
                     CsvTable.cell(s.min()), CsvTable.cell(s.p05()), CsvTable.cell(s.p25()), CsvTable.cell(s.median()),
                     CsvTable.cell(s.p75()), CsvTable.cell(s.p95()), CsvTable.cell(s.max())));
         }
-        return table(cols, rows);
+        return table(cols, rows, provenance());
     }
 
     /**
@@ -453,11 +506,16 @@ public final class ToleranceStudyResult implements CsvTable {
                         Integer.toString(s.rows())));
             }
         }
-        return table(cols, rows);
+        return table(cols, rows, provenance());
     }
 
-    private static CsvTable table(List<Column> cols, List<List<String>> rows) {
+    private static CsvTable table(List<Column> cols, List<List<String>> rows, Optional<ResultProvenance> p) {
         return new CsvTable() {
+            @Override
+            public Optional<ResultProvenance> provenance() {
+                return p;
+            }
+
             @Override
             public List<Column> columns() {
                 return cols;
@@ -520,6 +578,55 @@ public final class ToleranceStudyResult implements CsvTable {
             sb.append("; ").append(s.column().header()).append(" mean ").append(s.mean()).append(" sd ")
                     .append(s.standardDeviation());
         }
-        return sb.append(']').toString();
+        return sb.append(']').append(Warning.lines(warnings)).toString();
+    }
+
+    /**
+     * What may make this study mislead: each kind of warning that a successful evaluation raised
+     * (its stack's, its solution's, its sweep's, as its evaluators report them through
+     * {@link PointEvaluator#evaluateWithWarnings}), once, at the first such evaluation, with the
+     * count of the others. Known only for a result of {@link ToleranceStudy#run()}: evaluations
+     * computed elsewhere ({@link Evaluation}) carry no warnings, so a result assembled from them has
+     * none. The sensitivity indices carry their own ({@link Sensitivity#warnings()}).
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        return warnings;
+    }
+
+    /**
+     * What produced this study, for a result of {@link ToleranceStudy#run()} or
+     * {@link ToleranceStudy#result}: the template as the structure, the solver options, and in the
+     * run: {@code computation} "tolerance study", the design's {@code plan}, {@code samples},
+     * {@code seed} and {@code sensitivity}, each tolerance as {@code tolerance<i>} (its text, e.g.
+     * {@code "Tolerance[barrier_thickness_nm ~ Normal[mean=22.0, standardDeviation=0.5]]"}, every number by
+     * {@link Double#toString(double)}), each evaluator's {@link PointEvaluator#description()} as
+     * {@code evaluator<i>}; then every failed evaluation and the study's warnings. A re-run builds
+     * {@code ToleranceStudy.builder(template)} with tolerances of the same text, the same plan,
+     * samples, seed, sensitivity and evaluators and a solver of these options; it gives the same
+     * table bit for bit, with any thread count.
+     *
+     * @return the provenance, or empty for a result assembled by {@link #of(SampleDesign, List, Collection)}
+     *         without its study
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        if (origin == null) {
+            return Optional.empty();
+        }
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "tolerance study");
+        run.put("plan", design.plan().name());
+        run.put("samples", Integer.toString(design.samples()));
+        run.put("seed", Long.toString(design.seed()));
+        run.put("sensitivity", Boolean.toString(design.sensitivity()));
+        for (int i = 0; i < origin.tolerances().size(); i++) {
+            run.put("tolerance" + i, origin.tolerances().get(i));
+        }
+        for (int i = 0; i < origin.evaluators().size(); i++) {
+            run.put("evaluator" + i, origin.evaluators().get(i));
+        }
+        return Optional.of(SweepProvenance.of(run, origin.template(), origin.options(), failures, warnings));
     }
 }

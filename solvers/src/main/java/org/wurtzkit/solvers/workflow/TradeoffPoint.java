@@ -5,6 +5,7 @@ package org.wurtzkit.solvers.workflow;
 import java.util.List;
 import java.util.Locale;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * One stack of a {@link DesignTradeoff}. A failed stack has NaN numbers, is in no band and on no
@@ -21,11 +22,11 @@ import org.wurtzkit.errors.Require;
  * @param inBand                      whether the point counts for the front (its V_th in the band, or
  *                                    no band set) and it was computed
  * @param onFront                     whether it is on the Pareto front of R_sh against |J| in the band
- * @param warnings                    what the mobility and the leakage rest on that may not hold
+ * @param warnings                    what the stack, its sweep, its mobility and its leakage rest on that may not hold (typed)
  */
 public record TradeoffPoint(int index, double[] design, double sheetDensityPerCm2, double thresholdVoltageV,
         double mobilityCm2PerVs, double sheetResistanceOhmPerSquare, double leakageAPerCm2, boolean inBand,
-        boolean onFront, List<String> warnings) {
+        boolean onFront, List<Warning> warnings) {
     /**
      * Validates and copies.
      *
@@ -38,7 +39,7 @@ public record TradeoffPoint(int index, double[] design, double sheetDensityPerCm
      * @param leakageAPerCm2 gate leakage current density at the reverse bias (A/cm^2), negative in reverse bias as for a Schottky diode
      * @param inBand whether the point counts for the front (its V_th in the band, or no band set) and it was computed
      * @param onFront whether it is on the Pareto front of R_sh against |J| in the band
-     * @param warnings what the mobility and the leakage rest on that may not hold
+     * @param warnings what the stack, its sweep, its mobility and its leakage rest on that may not hold (typed)
      */
     public TradeoffPoint {
         design = Require.nonNull("design values", design).clone();

@@ -5,9 +5,17 @@ package org.wurtzkit.solvers.workflow;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.errors.WurtzkitException;
+import org.wurtzkit.provenance.ResultProvenance;
+import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Decimals;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * The result of a {@link DesignTradeoff}: one {@link TradeoffPoint} per stack (row-major, last axis
@@ -18,7 +26,8 @@ import org.wurtzkit.units.Decimals;
  * {@code threshold_voltage_V}, {@code model_threshold_voltage_V} (the closed-form estimate that placed
  * the sweep; empty with a fixed sweep), {@code mobility_cm^2/Vs}, {@code sheet_resistance_Ohm/sq},
  * {@code gate_leakage_A/cm^2} (signed, at the reverse bias), {@code in_vth_band} and
- * {@code on_front} (true/false), {@code warnings} (joined by " | ", empty if none), {@code status}.
+ * {@code on_front} (true/false), {@code warnings} (the point's warning messages joined by " | ",
+ * empty if none), {@code status}; after the {@link #provenance()} comment lines.
  */
 public final class TradeoffResult implements CsvTable {
     private final List<Axis> axes;
@@ -28,7 +37,8 @@ public final class TradeoffResult implements CsvTable {
     private final String setup;
     private final double[][] parameters;
     private final double[][] values;
-    private final List<String>[] warnings;
+    private final List<Warning>[] warnings;
+    private final DesignTradeoff tradeoff;
     private final boolean[] inBand;
     private final boolean[] onFront;
     private final int[] front;
@@ -36,8 +46,9 @@ public final class TradeoffResult implements CsvTable {
     private final List<PointFailure> failureList;
     private final List<Column> columns;
 
-    TradeoffResult(DesignTradeoff t, double[][] parameters, ParallelPoints.Outcome[] out, List<String>[] warnings,
+    TradeoffResult(DesignTradeoff t, double[][] parameters, ParallelPoints.Outcome[] out, List<Warning>[] warnings,
             double bandTargetV, double bandToleranceV) {
+        this.tradeoff = t;
         this.axes = t.axes();
         this.reverseBiasV = t.reverseBiasV();
         this.bandTargetV = bandTargetV;
@@ -197,21 +208,82 @@ public final class TradeoffResult implements CsvTable {
     }
 
     /**
-     * {@return warnings about the result as a whole: no V_th band (the front then mixes threshold
-     * voltages), an empty band, failed points}
+     * @param i point index
+     * @return the warnings of that stack: its own, its sweep's, its threshold's, and its mobility's
+     *         and leakage's (their messages prefixed "mobility: " and "leakage: "); empty for a
+     *         failed stack
      */
-    public List<String> warnings() {
-        List<String> w = new ArrayList<>();
+    public List<Warning> warnings(int i) {
+        return warnings[i];
+    }
+
+    /**
+     * What may make this trade-off mislead, as a whole: no V_th band
+     * ({@link WarningKind#NO_THRESHOLD_BAND}: the front then mixes threshold voltages), an empty band
+     * ({@link WarningKind#THRESHOLD_BAND_EMPTY}), failed points ({@link WarningKind#POINTS_LEFT_OUT});
+     * then each kind of warning that a computed stack raised ({@link #warnings(int)}), once, at the
+     * first such stack, with the count of the others.
+     *
+     * @return the warnings, empty when there is none
+     */
+    public List<Warning> warnings() {
+        List<Warning> w = new ArrayList<>();
         if (Double.isNaN(bandTargetV)) {
-            w.add("no V_th band set: the front compares stacks of different threshold voltage");
+            w.add(new Warning(WarningKind.NO_THRESHOLD_BAND,
+                    "no V_th band set: the front compares stacks of different threshold voltage"));
         } else if (front.length == 0) {
-            w.add("no computed stack has its V_th within " + Decimals.format(bandToleranceV, "V") + " of "
-                    + Decimals.format(bandTargetV, "V") + ": the front is empty");
+            w.add(new Warning(WarningKind.THRESHOLD_BAND_EMPTY, "no computed stack has its V_th within "
+                    + Decimals.format(bandToleranceV, "V") + " of " + Decimals.format(bandTargetV, "V")
+                    + ": the front is empty"));
         }
         if (!failureList.isEmpty()) {
-            w.add(failureList.size() + " of " + size() + " stacks failed and take no part in the front");
+            w.add(new Warning(WarningKind.POINTS_LEFT_OUT,
+                    failureList.size() + " of " + size() + " stacks failed and take no part in the front"));
         }
-        return List.copyOf(w);
+        String[] labels = new String[size()];
+        for (int i = 0; i < labels.length; i++) {
+            labels[i] = describe(i);
+        }
+        return Warning.union(w, PointWarnings.of(warnings, labels));
+    }
+
+    /**
+     * What produced this trade-off. As for a {@link DesignMapResult#provenance() design map}, the
+     * structure factory is code the provenance cannot hold: the structure recorded is its output at
+     * the first computed stack ({@code structureAtPoint}); the run records each axis as
+     * {@code axis<k> = name|unit|values}, the reverse bias, the threshold definition and the sweep
+     * (its biases, or its step and margins), the V_th band, and the mobility options (their record text) and
+     * the leakage options ({@link org.wurtzkit.solvers.transport.LeakageOptions#describe()}); then every failed stack and the warnings. With the same factory and these
+     * settings, a re-run gives the same table bit for bit.
+     *
+     * @return the provenance, or empty when no stack's structure could be built
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        Structure structure = null;
+        int at = -1;
+        for (int i = 0; i < size() && structure == null; i++) {
+            try {
+                structure = tradeoff.factory().at(parameters[i].clone());
+                at = i;
+            } catch (InvalidParameterException | WurtzkitException e) {
+                // this stack's factory failed in the run too; try the next
+            }
+        }
+        if (structure == null) {
+            return Optional.empty();
+        }
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", "design trade-off");
+        run.put("structureFamily", "code (a StructureFactory), not recorded, and the structure recorded is its output "
+                + "at point structureAtPoint");
+        run.put("structureAtPoint", Integer.toString(at));
+        for (int a = 0; a < axes.size(); a++) {
+            Axis ax = axes.get(a);
+            run.put("axis" + a, ax.name() + "|" + ax.unit() + "|" + SweepProvenance.values(ax.values()));
+        }
+        run.putAll(tradeoff.settings());
+        return Optional.of(SweepProvenance.of(run, structure, tradeoff.solverOptions(), failureList, warnings()));
     }
 
     @Override
@@ -239,7 +311,7 @@ public final class TradeoffResult implements CsvTable {
         r.add(CsvTable.cell(v[DesignTradeoff.J]));
         r.add(Boolean.toString(inBand[i]));
         r.add(Boolean.toString(onFront[i]));
-        r.add(String.join(" | ", warnings[i]));
+        r.add(String.join(" | ", warnings[i].stream().map(Warning::message).toList()));
         r.add(failureAt[i] == null ? "ok" : "failed: " + failureAt[i].message());
         return r;
     }
@@ -258,9 +330,7 @@ public final class TradeoffResult implements CsvTable {
         for (TradeoffPoint p : front()) {
             sb.append("\n  ").append(p);
         }
-        for (String w : warnings()) {
-            sb.append("\n  warning: ").append(w);
-        }
+        sb.append(Warning.lines(warnings()));
         return sb.toString();
     }
 }

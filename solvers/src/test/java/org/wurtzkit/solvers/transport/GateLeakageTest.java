@@ -234,9 +234,24 @@ class GateLeakageTest {
                 / (4 * Math.PI * Constants.VACUUM_PERMITTIVITY * eps));
         assertEquals(expected, plain.barrierTopEv() - image.barrierTopEv(), 0.05 * expected);
         assertTrue(image.total() < plain.total() && plain.total() < 0);
-        assertTrue(plain.warnings().stream().anyMatch(w -> w.contains("image-force lowering is off")), plain.warnings()
+        assertTrue(plain.warnings().stream().anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT
+                && w.message().contains("image-force lowering is off")), plain.warnings()
                 .toString());
-        assertTrue(image.warnings().stream().noneMatch(w -> w.contains("image-force")));
+        assertTrue(image.warnings().stream().noneMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT));
+
+        // the curve gathers its points' warnings by kind, names the first point, and writes them in its CSV
+        LeakageCurve curve = GateLeakage.curve(capped[0], LeakageOptions.defaults());
+        org.wurtzkit.warnings.Warning gathered = curve.warnings().stream()
+                .filter(w -> w.kind() == org.wurtzkit.warnings.WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT).findFirst()
+                .orElseThrow(() -> new AssertionError(curve.warnings().toString()));
+        assertTrue(gathered.message().startsWith("at V_g = "), gathered.message());
+        String csv = curve.toCsvString();
+        assertTrue(csv.contains("# warning: " + gathered), csv);
+        assertTrue(csv.contains("computation=gate leakage curve"), csv);
+        LeakageCurve withImage = GateLeakage.curve(capped[0], LeakageOptions.defaults().withImageForceLowering(true));
+        assertTrue(withImage.warnings().stream()
+                .noneMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.IMAGE_FORCE_LOWERING_LEFT_OUT));
+        assertTrue(withImage.provenance().orElseThrow().run().get("leakageOptions").contains("imageForceLowering=true"));
     }
 
     /**
@@ -264,13 +279,34 @@ class GateLeakageTest {
                 () -> LeakageOptions.defaults().withMechanisms(LeakageMechanism.POOLE_FRENKEL));
     }
 
+    /**
+     * Far beyond pinch-off (V_g = -8 V on a stack whose n_s vanishes near -3 V) no electron gas lies
+     * under the gate: the collector of the current is a band edge above the Fermi level, and the
+     * point and the curve say so with a typed warning; at 0 V (2DEG present) there is none. Charge
+     * control of a HEMT channel: common practice, no source.
+     */
+    @Test
+    void aPinchedOffChannelIsReportedAsNoElectronGasUnderTheGate() {
+        BiasSweepResult deep = SWEEP.run(hemt(0), BiasGrid.linear(0, -8, 17));
+        assertTrue(deep.failures().isEmpty(), () -> deep.failures().toString());
+        assertTrue(deep.sheetDensityPerCm2()[16] < 1e9, "pinched off at -8 V: " + deep.sheetDensityPerCm2()[16]);
+        LeakageCurve c = GateLeakage.curve(deep, LeakageOptions.defaults());
+        assertTrue(c.point(16).orElseThrow().warnings().stream()
+                .anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.NO_ELECTRON_GAS_UNDER_GATE),
+                () -> c.point(16).orElseThrow().warnings().toString());
+        assertTrue(c.point(0).orElseThrow().warnings().stream()
+                .noneMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.NO_ELECTRON_GAS_UNDER_GATE));
+        assertTrue(c.warnings().stream().anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.NO_ELECTRON_GAS_UNDER_GATE
+                && w.message().startsWith("at V_g = ")), c.warnings()::toString);
+    }
+
     /** The J-V table: one row per sweep point, a header with units, numbers that read back. */
     @Test
     void curveWritesCsv() throws IOException {
         LeakageCurve c = GateLeakage.curve(capped[1], LeakageOptions.defaults());
         StringWriter w = new StringWriter();
         c.writeCsv(w);
-        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get()
                 .parse(new StringReader(w.toString())).getRecords();
         assertEquals(List.of("gate_bias_V", "total_A/cm^2", "thermionic_A/cm^2", "tunnelling_A/cm^2",
                 "poole_frenkel_A/cm^2", "barrier_top_eV", "status"), c.headers());
@@ -296,7 +332,8 @@ class GateLeakageTest {
         double a = GateLeakage.atBias(capped[1], -3, LeakageOptions.defaults()).total();
         double b = GateLeakage.atBias(capped[1], -3.5, LeakageOptions.defaults()).total();
         assertTrue(between.total() < a && between.total() > b, between.total() + " between " + a + " and " + b);
-        assertTrue(between.warnings().stream().anyMatch(w -> w.contains("interpolated")));
+        assertTrue(between.warnings().stream().anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.INTERPOLATED_BETWEEN_POINTS
+                && w.message().contains("interpolated")));
     }
 
     /**

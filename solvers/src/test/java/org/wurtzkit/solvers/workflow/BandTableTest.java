@@ -72,9 +72,16 @@ class BandTableTest {
         assertArrayEquals(SOLVED.conductionBand(), t.conductionBandEv(), 0);
         assertArrayEquals(SOLVED.valenceBand(), t.valenceBandEv(), 0);
         assertArrayEquals(SOLVED.electronDensity(), t.electronDensity(), 0);
-        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
-                .parse(new StringReader(t.toCsvString())).getRecords();
+        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true)
+                .get().parse(new StringReader(t.toCsvString())).getRecords();
         assertEquals(t.rowCount(), rows.size());
+        // the table starts with its solution's provenance, from which a cold solve repeats it bit for
+        // bit (the solver is deterministic; common practice, no source)
+        org.wurtzkit.provenance.ResultProvenance p = t.provenance().orElseThrow();
+        assertEquals(SOLVED.provenance(), p);
+        assertTrue(t.toCsvString().startsWith("# produced by wurtzkit "));
+        assertEquals(t.toCsvString(), BandTable.of(new org.wurtzkit.solvers.sp.SelfConsistentSolver(
+                org.wurtzkit.solvers.sp.SolverOptions.fromSettings(p.solverOptions())).solve(p.structure())).toCsvString());
         assertEquals(List.of("depth_nm", "conduction_band_eV", "valence_band_eV", "electrons_cm^-3", "holes_cm^-3",
                 "ionized_donors_cm^-3", "ionized_acceptors_cm^-3"), t.headers());
         int peak = 0;

@@ -95,8 +95,10 @@ class DesignMapTest {
         assertTrue(r.value(0, 0) > 1e12);
         StringWriter w = new StringWriter();
         r.writeCsv(w);
-        String[] lines = w.toString().split("\r\n");
+        assertTrue(w.toString().startsWith("# produced by wurtzkit "), w::toString);
+        String[] lines = w.toString().lines().filter(l -> !l.startsWith("# ")).toArray(String[]::new);
         assertEquals("al_fraction,barrier_thickness_nm,sheet_density_cm^-2,gate_charge_C/m^2,status", lines[0]);
+        assertTrue(w.toString().contains("# warning: point failed: "), w::toString);
         assertTrue(lines[1].endsWith(",ok"), lines[1]);
         assertTrue(lines[2].startsWith("1.5,25.0,,,\"failed: InvalidParameterException"), lines[2]);
 
@@ -122,7 +124,11 @@ class DesignMapTest {
         }
         Path file = dir.resolve("vth.csv");
         r.writeCsv(file);
-        assertTrue(Files.readString(file).startsWith("al_fraction,barrier_thickness_nm,threshold_voltage_V,status"));
+        String text = Files.readString(file);
+        assertTrue(text.startsWith("# produced by wurtzkit "), text);
+        assertTrue(text.contains("evaluator=threshold voltage per point: " + how), text);
+        assertTrue(text.lines().filter(l -> !l.startsWith("# ")).findFirst().orElseThrow()
+                .equals("al_fraction,barrier_thickness_nm,threshold_voltage_V,status"), text);
     }
 
     @Test

@@ -1,5 +1,6 @@
 package org.wurtzkit.solvers.workflow;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -110,15 +111,42 @@ class ParameterSetSpreadTest {
     void csvTables() throws IOException {
         StringWriter w = new StringWriter();
         result.writeCsv(w);
-        String[] lines = w.toString().split("\r\n");
+        String[] lines = w.toString().lines().filter(l -> !l.startsWith("# ")).toArray(String[]::new);
         assertEquals("parameter_set,sheet_density_cm^-2,threshold_voltage_V,status", lines[0]);
         assertEquals(result.members().size() + 1, lines.length);
         assertTrue(lines[1].startsWith(result.members().get(0).parameterSet() + ","));
         StringWriter sum = new StringWriter();
         result.summary().writeCsv(sum);
-        String[] s = sum.toString().split("\r\n");
+        String[] s = sum.toString().lines().filter(l -> !l.startsWith("# ")).toArray(String[]::new);
         assertEquals("statistic,sheet_density_cm^-2,threshold_voltage_V", s[0]);
         assertEquals("min," + result.sheetDensityPerCm2().min() + "," + result.thresholdVoltage().min(), s[1]);
+    }
+
+    /**
+     * Both tables start with the spread's provenance, which names every member with its content
+     * hash, so that a re-run finds the same sets by name and can check their values are unchanged;
+     * the factory is code and the provenance says so. Common practice, no source.
+     */
+    @Test
+    void theTablesStartWithTheProvenanceThatNamesEverySetAndItsHash() {
+        org.wurtzkit.provenance.ResultProvenance p = result.provenance().orElseThrow();
+        assertEquals("parameter-set spread", p.run().get("computation"));
+        assertTrue(p.run().get("structureFamily").startsWith("code"), p.run().toString());
+        for (int i = 0; i < result.members().size(); i++) {
+            String name = result.members().get(i).parameterSet();
+            assertEquals(name + " sha256 " + org.wurtzkit.material.ParameterSetHash.sha256(ParameterSets.named(name)),
+                    p.run().get("set" + i));
+        }
+        int at = Integer.parseInt(p.run().get("structureOfMember"));
+        assertEquals(HEMT.apply(ParameterSets.named(result.members().get(at).parameterSet())), p.structure());
+        assertArrayEquals(HOW.grid().values(), SweepProvenance.parseValues(p.run().get("thresholdBiasesV")));
+        assertEquals(Hemts.COARSE, org.wurtzkit.solvers.sp.SolverOptions.fromSettings(p.solverOptions()));
+        String head = String.join("\n", p.headerLines());
+        assertTrue(result.toCsvString().startsWith("# " + p.headerLines().get(0) + "\r\n"), head);
+        assertTrue(result.summary().toCsvString().startsWith("# " + p.headerLines().get(0) + "\r\n"));
+        for (org.wurtzkit.warnings.Warning x : result.warnings()) {
+            assertTrue(p.warnings().contains(x.toString()), p.warnings().toString());
+        }
     }
 
     @Test

@@ -146,6 +146,24 @@ class SampleDesignTest {
      * first-order indices 0.16 / 0.7225 and 0.5625 / 0.7225, equal to the total effects (an additive
      * response; exact, elementary probability). Tolerances: four standard errors of each estimate.
      */
+    /**
+     * The same linear response with only 8 Sobol rows: each first-order estimate is a mean of 8
+     * terms, so its standard error (sd / sqrt(N) / V, central limit theorem, common practice, no
+     * source) lies far above 0.05 and the ranking gets a typed warning naming the row count.
+     */
+    @Test
+    void aSmallSobolDesignWarnsThatItsRankingIsRough() {
+        List<UncertainInput> in = List.of(UncertainInput.of("x1", "", Distribution.normal(1, 0.2)),
+                UncertainInput.of("x2", "", Distribution.normal(-2, 1.5)));
+        ToleranceStudyResult r = new SampleDesign(in, 8, SamplingPlan.MONTE_CARLO, 2026, true)
+                .run(Y, x -> new double[] {3 + 2 * x[0] - 0.5 * x[1]}, 1, ProgressListener.NONE);
+        ToleranceStudyResult.Sensitivity sens = r.sensitivity(0);
+        assertTrue(sens.indices().stream().anyMatch(i -> i.firstOrderStandardError() > 0.05), sens.toString());
+        assertEquals(List.of(org.wurtzkit.warnings.WarningKind.SENSITIVITY_STANDARD_ERROR_LARGE),
+                sens.warnings().stream().map(org.wurtzkit.warnings.Warning::kind).toList(), sens.warnings().toString());
+        assertTrue(sens.warnings().get(0).message().contains("with 8 rows"), sens.warnings().toString());
+    }
+
     @Test
     void linearResponseToNormalInputsHasTheAnalyticMeanAndVariance() {
         List<UncertainInput> in = List.of(UncertainInput.of("x1", "", Distribution.normal(1, 0.2)),
@@ -278,7 +296,7 @@ class SampleDesignTest {
         ToleranceStudyResult.Sensitivity sens = r.sensitivity(0);
         assertEquals(400, sens.rows() + sens.skipped());
         assertTrue(sens.skipped() > 0);
-        assertTrue(sens.warnings().stream().anyMatch(w -> w.contains("rows left out")), sens.warnings().toString());
+        assertTrue(sens.warnings().stream().anyMatch(w -> w.kind() == org.wurtzkit.warnings.WarningKind.POINTS_LEFT_OUT && w.message().contains("rows left out")), sens.warnings().toString());
     }
 
     /** Bad input: each a clear exception naming the parameter. */

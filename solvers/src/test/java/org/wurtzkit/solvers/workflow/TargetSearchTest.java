@@ -51,7 +51,8 @@ class TargetSearchTest {
                 r.value(), r.evaluations(), lo);
         StringWriter w = new StringWriter();
         r.writeCsv(w);
-        assertTrue(w.toString().startsWith("evaluation,barrier_thickness_nm,sheet_density_cm^-2,accepted\r\n"));
+        assertTrue(w.toString().startsWith("# produced by wurtzkit "), w::toString);
+        assertTrue(w.toString().contains("\r\nevaluation,barrier_thickness_nm,sheet_density_cm^-2,accepted\r\n"));
         assertTrue(w.toString().contains(",yes\r\n"));
     }
 

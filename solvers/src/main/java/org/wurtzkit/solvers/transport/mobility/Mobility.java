@@ -19,6 +19,8 @@ import org.wurtzkit.solvers.workflow.TemperatureSweepResult;
 import org.wurtzkit.structure.LayerState;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.units.Constants;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * The in-plane mobility and sheet resistance of the 2DEG of a converged solution, from the momentum
@@ -62,7 +64,7 @@ public final class Mobility {
         double[] x = solution.depth();
         int n = x.length;
         double[] w = SubbandScattering.boxes(x);
-        Set<String> warnings = new LinkedHashSet<>();
+        Set<Warning> warnings = new LinkedHashSet<>();
 
         // per cell: the material of the layer holding it
         WurtziteMaterial[] cellMaterial = new WurtziteMaterial[n - 1];
@@ -86,8 +88,8 @@ public final class Mobility {
             if (v == null) {
                 Composition c = m.composition();
                 if (c == null) {
-                    warnings.add("alloy disorder: material '" + m.name() + "' declares no composition;"
-                            + " its alloy scattering is taken as 0");
+                    warnings.add(new Warning(WarningKind.ELECTRONS_LEFT_OUT, "alloy disorder: material '" + m.name()
+                            + "' declares no composition; its alloy scattering is taken as 0"));
                     v = 0.0;
                 } else {
                     double omega = Math.sqrt(3) / 4 * m.latticeA() * m.latticeA() * m.latticeC();
@@ -135,16 +137,17 @@ public final class Mobility {
             }
         }
         if (excluded > 0.005 * all) {
-            warnings.add(String.format(Locale.ROOT, "%.2f %% of the subband electrons sit in subbands below the"
-                    + " minimum fraction %.3g and are left out of the mobility", 100 * excluded / all,
-                    options.minimumSubbandFraction()));
+            warnings.add(new Warning(WarningKind.ELECTRONS_LEFT_OUT, String.format(Locale.ROOT, "%.2f %% of the "
+                    + "subband electrons sit in subbands below the minimum fraction %.3g and are left out of the "
+                    + "mobility", 100 * excluded / all, options.minimumSubbandFraction())));
         }
         if (bands.isEmpty()) {
             throw new InvalidParameterException("occupied subbands of the solution", "0",
                     "[1, ...): solve with a quantum window around the channel");
         }
         if (solution.subbandLimitReached()) {
-            warnings.add("the solution reached its subband limit: some electrons are missing from the subbands");
+            warnings.add(new Warning(WarningKind.SUBBAND_LIMIT_REACHED,
+                    "the solution reached its subband limit: some electrons are missing from the subbands"));
         }
         double kt = Constants.BOLTZMANN * t;
         double hbar2 = Constants.HBAR * Constants.HBAR;
@@ -176,15 +179,17 @@ public final class Mobility {
             }
             double gap = -b.energyEv() * Constants.ELEMENTARY_CHARGE;
             if (gap < 2 * kt && b.sheetDensity() > 0.01 * total) {
-                warnings.add(String.format(Locale.ROOT, "subband %d of window %d holds %.0f %% of the electrons but"
-                        + " E_F - E_i = %.1f meV < 2 k_B T: its rates use degenerate (Fermi-surface) formulas",
-                        b.index(), b.window(), 100 * b.sheetDensity() / total, -b.energyEv() * 1e3));
+                warnings.add(new Warning(WarningKind.SCATTERING_MODEL_OUT_OF_VALIDITY, String.format(Locale.ROOT,
+                        "subband %d of window %d holds %.0f %% of the electrons but E_F - E_i = %.1f meV < 2 k_B T: "
+                        + "its rates use degenerate (Fermi-surface) formulas", b.index(), b.window(),
+                        100 * b.sheetDensity() / total, -b.energyEv() * 1e3)));
             }
         }
         double epsGround = Constants.VACUUM_PERMITTIVITY * chan[0].staticPermittivity();
         double qs = Constants.ELEMENTARY_CHARGE * Constants.ELEMENTARY_CHARGE / (2 * epsGround) * dnde;
         if (options.screening() == Screening.THOMAS_FERMI_DEGENERATE && dnde == 0) {
-            warnings.add("degenerate screening: no subband lies below the Fermi level; the rates are unscreened");
+            warnings.add(new Warning(WarningKind.SCREENING_ABSENT,
+                    "degenerate screening: no subband lies below the Fermi level; the rates are unscreened"));
         }
 
         List<ScatteringMechanism> mechs = options.mechanisms();
@@ -249,14 +254,15 @@ public final class Mobility {
                 }
                 rate[i][k] = r;
                 Optional<String> warn = m.warning(s);
-                warn.ifPresent(warnings::add);
+                warn.ifPresent(text -> warnings.add(new Warning(WarningKind.SCATTERING_MODEL_OUT_OF_VALIDITY, text)));
             }
             dens[i] = b.sheetDensity();
             mass[i] = b.inPlaneMass() * Constants.ELECTRON_MASS;
             win[i] = b.window();
             idx[i] = b.index();
         }
-        return new MobilityResult(t, names, dens, mass, win, idx, rate, excluded, new ArrayList<>(warnings));
+        return new MobilityResult(t, names, dens, mass, win, idx, rate, excluded, new ArrayList<>(warnings),
+                solution::provenance, options.toString());
     }
 
     /**
@@ -273,10 +279,12 @@ public final class Mobility {
     public static List<MobilityResult> versusTemperature(TemperatureSweepResult sweep, MobilityOptions options) {
         Require.nonNull("temperature sweep", sweep);
         List<MobilityResult> out = new ArrayList<>();
+        java.util.function.Supplier<org.wurtzkit.provenance.ResultProvenance> source = () -> sweep.provenance()
+                .orElseThrow();
         for (int i = 0; i < sweep.size(); i++) {
             Optional<Solution> s = sweep.solution(i);
             if (s.isPresent()) {
-                out.add(of(s.get(), options));
+                out.add(of(s.get(), options).withSource(source));
             }
         }
         return List.copyOf(out);

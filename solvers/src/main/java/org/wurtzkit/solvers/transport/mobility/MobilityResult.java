@@ -1,8 +1,14 @@
 package org.wurtzkit.solvers.transport.mobility;
 
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.function.Supplier;
 import org.wurtzkit.errors.InvalidParameterException;
+import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.units.Constants;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * Mobility and sheet resistance of a 2DEG: rates per subband and mechanism, mobilities by
@@ -21,11 +27,21 @@ public final class MobilityResult {
     private final int[] subbandIndex;
     private final int[] window;
     private final double[][] rate;
-    private final List<String> warnings;
+    private final List<Warning> warnings;
     private final double excluded;
+    private final Supplier<ResultProvenance> source;
+    private final String options;
 
+    /**
+     * @param source   the provenance of what the mobility was computed from (a solution, or the
+     *                 temperature sweep that holds it)
+     * @param options  the mobility options as text
+     */
     MobilityResult(double temperatureK, List<String> mechanisms, double[] density, double[] mass, int[] window,
-            int[] subbandIndex, double[][] rate, double excluded, List<String> warnings) {
+            int[] subbandIndex, double[][] rate, double excluded, List<Warning> warnings,
+            Supplier<ResultProvenance> source, String options) {
+        this.source = source;
+        this.options = options;
         this.excluded = excluded;
         this.temperatureK = temperatureK;
         this.mechanisms = List.copyOf(mechanisms);
@@ -176,9 +192,74 @@ public final class MobilityResult {
         return 1 / g;
     }
 
-    /** @return the warnings of the models used, without duplicates; empty when none applies */
-    public List<String> warnings() {
+    /**
+     * The warnings of the models used, typed: {@link org.wurtzkit.warnings.WarningKind#SCATTERING_MODEL_OUT_OF_VALIDITY}
+     * (a mechanism's own warning, or a subband too close to the Fermi level for the degenerate
+     * formulas), {@link org.wurtzkit.warnings.WarningKind#ELECTRONS_LEFT_OUT},
+     * {@link org.wurtzkit.warnings.WarningKind#SUBBAND_LIMIT_REACHED} and
+     * {@link org.wurtzkit.warnings.WarningKind#SCREENING_ABSENT}.
+     *
+     * @return the warnings, without duplicates; empty when none applies
+     */
+    public List<Warning> warnings() {
         return warnings;
+    }
+
+    /**
+     * @param newSource the provenance of what this result was computed from
+     * @return this result with that source
+     */
+    MobilityResult withSource(Supplier<ResultProvenance> newSource) {
+        return new MobilityResult(temperatureK, mechanisms, density, mass, window, subbandIndex, rate, excluded,
+                warnings, newSource, options);
+    }
+
+    /** {@return the mobility options as text} */
+    String optionsText() {
+        return options;
+    }
+
+    /** {@return the source supplier, to tell results of one source apart} */
+    Supplier<ResultProvenance> source() {
+        return source;
+    }
+
+    /**
+     * What produced this mobility: the provenance of what it was computed from (the solution of
+     * {@link Mobility#of}, or the temperature sweep of {@link Mobility#versusTemperature}), with the
+     * run's {@code computation} set to "mobility", that source's run kept under keys prefixed
+     * {@code source.}, the mobility options as {@code mobilityOptions} (their record text), and the
+     * source's warnings followed by this result's.
+     *
+     * @return the provenance
+     */
+    public ResultProvenance provenance() {
+        return provenance("mobility", List.of(this));
+    }
+
+    /**
+     * @param computation what the run computed
+     * @param results     the results whose warnings are added
+     * @return the provenance of the source, extended
+     */
+    static ResultProvenance provenance(String computation, List<MobilityResult> results) {
+        MobilityResult first = results.get(0);
+        ResultProvenance p = first.source.get();
+        Map<String, String> run = new LinkedHashMap<>();
+        run.put("computation", computation);
+        p.run().forEach((k, v) -> run.put("source." + k, v));
+        run.put("mobilityOptions", first.options);
+        List<String> w = new ArrayList<>(p.warnings());
+        for (MobilityResult r : results) {
+            for (Warning x : r.warnings) {
+                String line = (results.size() == 1 ? "" : "at T = " + r.temperatureK + " K: ") + x;
+                if (!w.contains(line)) {
+                    w.add(line);
+                }
+            }
+        }
+        return new ResultProvenance(p.libraryVersion(), p.structure(), p.parameterSetName(), p.parameterSetSha256(),
+                p.solverOptions(), run, w);
     }
 
     private int check(int i) {
@@ -200,6 +281,7 @@ public final class MobilityResult {
     public String toString() {
         return String.format(java.util.Locale.ROOT, "MobilityResult[T = %.0f K, n_s = %.3g cm^-2, mu = %.0f cm^2/Vs,"
                 + " R_sh = %.0f ohm/sq, %d subbands, %d warnings]", temperatureK, sheetDensityPerCm2(),
-                mobilityCm2PerVs(), sheetResistanceOhmPerSquare(), density.length, warnings.size());
+                mobilityCm2PerVs(), sheetResistanceOhmPerSquare(), density.length, warnings.size())
+                + Warning.lines(warnings);
     }
 }

@@ -2,8 +2,10 @@ package org.wurtzkit.solvers.transport.mobility;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
+import org.wurtzkit.provenance.ResultProvenance;
 import org.wurtzkit.solvers.workflow.Column;
 import org.wurtzkit.solvers.workflow.CsvTable;
 
@@ -38,6 +40,27 @@ public final class MobilityTable implements CsvTable {
             c.add(Column.of("mobility " + n, "cm^2/Vs"));
         }
         columns = List.copyOf(c);
+    }
+
+    /**
+     * What produced this table, when every row comes from one source (the temperature sweep of
+     * {@link Mobility#versusTemperature}, or one solution): that source's provenance with the run's
+     * {@code computation} "mobility table", the source's run under keys prefixed {@code source.},
+     * the mobility options and every row's warnings (each prefixed with its temperature). Rows of
+     * several sources have no common provenance: then empty.
+     *
+     * @return the provenance, or empty
+     */
+    @Override
+    public Optional<ResultProvenance> provenance() {
+        Object source = results.get(0).source();
+        String options = results.get(0).optionsText();
+        for (MobilityResult r : results) {
+            if (r.source() != source || !r.optionsText().equals(options)) {
+                return Optional.empty();
+            }
+        }
+        return Optional.of(MobilityResult.provenance("mobility table", results));
     }
 
     /** @return the results, in row order */

@@ -95,11 +95,45 @@ class MobilityOfSolutionTest {
         assertEquals("mobility alloy disorder_cm^2/Vs", table.headers().get(4 + 3));
         assertEquals(curve.get(1).mobilityCm2PerVs(), Double.parseDouble(table.row(1).get(2)));
         assertEquals(curve.get(2).mobilityCm2PerVs("polar optical phonon"), Double.parseDouble(table.row(2).get(4)));
+        // the table's CSV starts with the sweep's provenance; repeating the sweep and the mobility from
+        // it alone gives the same CSV bit for bit (the solver is deterministic; common practice, no source)
+        org.wurtzkit.provenance.ResultProvenance p = table.provenance().orElseThrow();
+        assertEquals("mobility table", p.run().get("computation"));
+        assertEquals("temperature sweep", p.run().get("source.computation"));
+        double[] temperatures = java.util.Arrays.stream(p.run().get("source.temperaturesK").split(" "))
+                .mapToDouble(Double::parseDouble).toArray();
+        List<MobilityResult> again = Mobility.versusTemperature(new TemperatureSweep(new org.wurtzkit.solvers.sp
+                .SelfConsistentSolver(org.wurtzkit.solvers.sp.SolverOptions.fromSettings(p.solverOptions())))
+                .run(p.structure(), temperatures), MobilityOptions.defaults());
+        assertEquals(MobilityOptions.defaults().toString(), p.run().get("mobilityOptions"));
+        assertEquals(table.toCsvString(), new MobilityTable(again).toCsvString());
+        assertTrue(table.toCsvString().startsWith("# produced by wurtzkit "));
         for (int i = 1; i < curve.size(); i++) {
             assertTrue(curve.get(i).mobility() < curve.get(i - 1).mobility(), curve.toString());
             assertTrue(curve.get(i).mobility(new PolarOpticalPhonon().name())
                     < curve.get(i - 1).mobility(new PolarOpticalPhonon().name()), curve.toString());
         }
+    }
+
+    /**
+     * At 600 K the electrons spread over many subbands (k_B T = 52 meV against subband spacings of
+     * tens of meV); leaving out every subband below 1 % of the electrons leaves out more than the
+     * 0.5 % the result reports, and the result says how much (typed ELECTRONS_LEFT_OUT). With the
+     * default cut (0.1 %) at 300 K nothing is reported. Boltzmann occupation of subbands: common
+     * practice, no source.
+     */
+    @Test
+    void leavingOutSubbandsIsReportedWithItsShare() {
+        Solution hot = SOLVER.solve(hemt(false, 600));
+        MobilityResult cut = Mobility.of(hot, MobilityOptions.defaults().withMinimumSubbandFraction(0.01));
+        org.wurtzkit.warnings.Warning w = cut.warnings().stream()
+                .filter(x -> x.kind() == org.wurtzkit.warnings.WarningKind.ELECTRONS_LEFT_OUT).findFirst()
+                .orElseThrow(() -> new AssertionError(cut.warnings().toString()));
+        assertTrue(w.message().contains("are left out of the mobility"), w.message());
+        assertTrue(cut.toString().contains("warning: " + w.message()), cut.toString());
+        MobilityResult plain = Mobility.of(SOLVER.solve(hemt(false, 300)), MobilityOptions.defaults());
+        assertTrue(plain.warnings().stream().noneMatch(x -> x.kind() == org.wurtzkit.warnings.WarningKind.ELECTRONS_LEFT_OUT),
+                plain.warnings().toString());
     }
 
     @Test
@@ -133,7 +167,7 @@ class MobilityOfSolutionTest {
         MobilityOptions ifr = MobilityOptions.defaults().withMechanisms(List.of(InterfaceRoughness.DEFAULT));
         MobilityResult m = Mobility.of(SOLVER.solve(metal), ifr);
         MobilityResult nf = Mobility.of(SOLVER.solve(nFace), ifr);
-        assertTrue(nf.warnings().stream().noneMatch(w -> w.startsWith("interface roughness")), nf.warnings().toString());
+        assertTrue(nf.warnings().stream().noneMatch(w -> w.message().startsWith("interface roughness")), nf.warnings().toString());
         double ratio = nf.subbandMobility(0) / m.subbandMobility(0);
         assertTrue(ratio > 0.1 && ratio < 10, "ground-subband roughness mobility N-face / metal-face " + ratio);
     }
