@@ -13,7 +13,22 @@ import org.wurtzkit.errors.Require;
  *
  * <h2>Defaults (no rule given)</h2>
  * <ul>
- * <li><b>Electrons</b> follow the channel everywhere.</li>
+ * <li><b>Electrons</b> follow the channel everywhere, except under a forward-biased Schottky gate
+ * ({@link ForwardBiasElectrons#GATE_SIDE_FOLLOWS_GATE}, the default): there the electrons between
+ * the gate and the conduction-band maximum of the layers above the channel follow the gate (level
+ * -V). The metal holds the electrons on its side of that maximum at its own level (the thermionic
+ * picture of a Schottky contact: at the metal the electron density is N_c exp(-phi_B / kT) whatever
+ * the bias, E. H. Rhoderick and R. H. Williams, Metal-Semiconductor Contacts, 2nd ed., Clarendon
+ * Press 1988), while those beyond it exchange with the channel. The maximum is found on the current
+ * potential in each outer iteration of the solve, so the split is part of the self-consistent loop;
+ * it is frozen once the outer change of the potential falls below
+ * {@value #FORWARD_SPLIT_FREEZE_V} V or after it has moved {@value #FORWARD_SPLIT_MAX_MOVES} times,
+ * so that it cannot oscillate. The rule applies only for a gate bias above 0 V on a Schottky gate
+ * directly on the nitride (an insulator under the gate holds no current, so the electrons under
+ * it follow the channel), only where a channel exists (a positive polarization sheet), and never
+ * in cells that an electron rule covers. At V &le; 0 it changes nothing.
+ * {@link ForwardBiasElectrons#NONE} turns it off (electrons follow the channel everywhere unless a
+ * rule says otherwise, the behaviour before it was introduced).</li>
  * <li><b>Holes</b> follow the gate in every layer above the channel, and the channel in the channel
  * layer and every layer below it. The channel is taken at the deepest interface whose polarization
  * sheet is positive (sigma &gt; 0, where a 2DEG gathers); a layer lies above it when its bottom is
@@ -40,17 +55,52 @@ import org.wurtzkit.errors.Require;
  * the leakage that would flow. A level changes abruptly at a rule's boundary; put boundaries where
  * the carrier concerned is depleted.
  *
- * @param rules the rules, in the order given; for each carrier no two may overlap
+ * @param rules                the rules, in the order given; for each carrier no two may overlap
+ * @param forwardBiasElectrons which contact the electrons on the gate side of the barrier's
+ *                             conduction-band maximum follow under forward bias; default
+ *                             {@link ForwardBiasElectrons#GATE_SIDE_FOLLOWS_GATE}
  */
-public record QuasiFermiLevels(List<Rule> rules) {
-    private static final QuasiFermiLevels DEFAULTS = new QuasiFermiLevels(List.of());
+public record QuasiFermiLevels(List<Rule> rules, ForwardBiasElectrons forwardBiasElectrons) {
+    /**
+     * Outer change of the potential (V) below which the forward-bias split between gate-side and
+     * channel-side electrons is frozen: far below the 0.1 V scale on which the barrier's maximum
+     * moves, and far above the 1e-6 V tolerance, so the last iterations run with a fixed split.
+     */
+    public static final double FORWARD_SPLIT_FREEZE_V = 1e-3;
+    /** Moves of the forward-bias split after which it is frozen, whatever the outer change. */
+    public static final int FORWARD_SPLIT_MAX_MOVES = 8;
+
+    private static final QuasiFermiLevels DEFAULTS = new QuasiFermiLevels(List.of(),
+            ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE);
+
+    /**
+     * Which contact the electrons between a forward-biased Schottky gate and the conduction-band
+     * maximum of the layers above the channel follow, where no electron rule covers them.
+     */
+    public enum ForwardBiasElectrons {
+        /** The gate (the documented default): a forward-biased gate holds its side of the barrier. */
+        GATE_SIDE_FOLLOWS_GATE,
+        /** No forward-bias rule: those electrons follow the channel (the behaviour before this rule). */
+        NONE
+    }
+
+    /**
+     * Rules with the default forward-bias rule {@link ForwardBiasElectrons#GATE_SIDE_FOLLOWS_GATE}.
+     *
+     * @param rules the rules, in the order given; for each carrier no two may overlap
+     */
+    public QuasiFermiLevels(List<Rule> rules) {
+        this(rules, ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE);
+    }
 
     /**
      * Copies and validates the rules: none null, no two for the same carrier overlapping.
      *
      * @param rules the rules, in the order given; for each carrier no two may overlap
+     * @param forwardBiasElectrons the forward-bias rule for gate-side electrons, not null
      */
     public QuasiFermiLevels {
+        Require.nonNull("forward-bias electron rule", forwardBiasElectrons);
         Require.nonNull("quasi-Fermi rules", rules);
         rules = List.copyOf(rules);
         for (int i = 0; i < rules.size(); i++) {
@@ -65,7 +115,7 @@ public record QuasiFermiLevels(List<Rule> rules) {
         }
     }
 
-    /** {@return the documented defaults: no rules} */
+    /** {@return the documented defaults: no rules, gate-side electrons follow a forward-biased gate} */
     public static QuasiFermiLevels defaults() {
         return DEFAULTS;
     }
@@ -103,7 +153,17 @@ public record QuasiFermiLevels(List<Rule> rules) {
     public QuasiFermiLevels with(Rule rule) {
         List<Rule> r = new ArrayList<>(rules);
         r.add(Require.nonNull("quasi-Fermi rule", rule));
-        return new QuasiFermiLevels(r);
+        return new QuasiFermiLevels(r, forwardBiasElectrons);
+    }
+
+    /**
+     * Returns a copy with another forward-bias rule; the rules are kept.
+     *
+     * @param v which contact the gate-side electrons follow under forward bias, not null
+     * @return a copy with {@code forwardBiasElectrons} set to {@code v}
+     */
+    public QuasiFermiLevels withForwardBiasElectrons(ForwardBiasElectrons v) {
+        return new QuasiFermiLevels(rules, v);
     }
 
     /**

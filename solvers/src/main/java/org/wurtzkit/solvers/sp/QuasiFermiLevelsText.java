@@ -12,11 +12,15 @@ import org.wurtzkit.errors.InvalidParameterException;
  * rules joined by {@code ;}, each {@code <carrier>|layer|<name>|<contact>} or
  * {@code <carrier>|depths|<top m>|<bottom m>|<contact>}, with the contact {@code gate}, {@code channel}
  * or {@code floating <eV>} and numbers written by {@link Double#toString(double)}, so that reading
- * gives back an equal record; the defaults (no rules) are the empty text.
+ * gives back an equal record; the defaults (no rules) are the empty text. A forward-bias rule other
+ * than the default is written as a last item {@code forward-bias|<rule>} with the rule's name in
+ * lower case ({@code none}); the default writes nothing, so the text of the default options stays empty.
  */
 final class QuasiFermiLevelsText {
     private static final String ALLOWED = "rules \"<carrier>|layer|<name>|<contact>\" or "
-            + "\"<carrier>|depths|<top m>|<bottom m>|<contact>\" joined by ';'";
+            + "\"<carrier>|depths|<top m>|<bottom m>|<contact>\" joined by ';', then optionally "
+            + "\"forward-bias|<gate_side_follows_gate or none>\"";
+    private static final String FORWARD = "forward-bias";
 
     private QuasiFermiLevelsText() {
     }
@@ -41,6 +45,12 @@ final class QuasiFermiLevelsText {
             }
             sb.append('|').append(contact(r.contact()));
         }
+        if (q.forwardBiasElectrons() != QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE) {
+            if (sb.length() > 0) {
+                sb.append(';');
+            }
+            sb.append(FORWARD).append('|').append(q.forwardBiasElectrons().name().toLowerCase(Locale.ROOT));
+        }
         return sb.toString();
     }
 
@@ -59,6 +69,11 @@ final class QuasiFermiLevelsText {
         try {
             for (String rule : text.split(";", -1)) {
                 String[] f = rule.split("\\|", -1);
+                if (f.length == 2 && FORWARD.equals(f[0])) {
+                    q = q.withForwardBiasElectrons(
+                            QuasiFermiLevels.ForwardBiasElectrons.valueOf(f[1].toUpperCase(Locale.ROOT)));
+                    continue;
+                }
                 Carrier carrier = Carrier.valueOf(f[0].toUpperCase(Locale.ROOT));
                 if (f.length == 4 && "layer".equals(f[1])) {
                     q = q.withLayer(carrier, f[2], contact(f[3], text));

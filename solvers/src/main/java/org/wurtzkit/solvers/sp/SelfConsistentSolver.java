@@ -183,6 +183,14 @@ public final class SelfConsistentSolver {
                 budget = coldStartBudget(d, phi, budget, options.maxNewtonStep());
             }
             newtonSteps += poisson(d, poisson, phi, null, null, tolerance, budget, 0, newtonSteps, history);
+            if (nw == 0) {
+                // the forward-bias split of QuasiFermiLevels on the classical potential: re-solved
+                // until the split stays (it moves at most FORWARD_SPLIT_MAX_MOVES times)
+                while (d.updateGateSideSplit(phi)) {
+                    newtonSteps += poisson(d, poisson, phi, null, null, tolerance, options.maxNewtonIterations(), 0,
+                            newtonSteps, history);
+                }
+            }
         }
         if (nw == 0) {
             ConvergenceRecord rec = new ConvergenceRecord(true, 0, newtonSteps, new double[0],
@@ -194,6 +202,12 @@ public final class SelfConsistentSolver {
         int mixingFrom = -1;
         AndersonMixing mixing = null;
         for (int it = 0; it < options.maxIterations(); it++) {
+            // 0. the forward-bias split of QuasiFermiLevels on the current potential, frozen once
+            // the outer loop is near convergence so that it cannot oscillate
+            if (it > 0 && history[it - 1] < QuasiFermiLevels.FORWARD_SPLIT_FREEZE_V) {
+                d.freezeGateSideSplit();
+            }
+            d.updateGateSideSplit(phi);
             // 1. subbands of every window for the current potential
             try {
                 qs.update(d, phi);

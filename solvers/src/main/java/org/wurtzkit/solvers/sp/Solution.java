@@ -234,7 +234,7 @@ public final class Solution {
             }
         }
         holeSubbands = Collections.unmodifiableList(hb);
-        sheets = Collections.unmodifiableList(gatherSheets(d, qs, bands));
+        sheets = Collections.unmodifiableList(gatherSheets(d, qs, bands, ref));
         double channel = 0;
         double parasitic = 0;
         for (CarrierSheet c : sheets) {
@@ -383,7 +383,7 @@ public final class Solution {
      * Groups the carriers into sheets: each window's subbands by the layer of their centroid, and per layer the classical carriers outside every window interior; then marks the
      * channel and the sheets between it and a gate.
      */
-    private List<CarrierSheet> gatherSheets(Device d, QuantumStates qs, List<Subband> bands) {
+    private List<CarrierSheet> gatherSheets(Device d, QuantumStates qs, List<Subband> bands, double[] ref) {
         int nn = d.n;
         List<org.wurtzkit.structure.LayerState> states = d.structure.layerStates();
         int nl = states.size();
@@ -393,6 +393,7 @@ public final class Solution {
         // the conduction-band maximum between the window top and the interface: the part above it is
         // on the gate side (a parasitic channel under forward bias), the rest is the channel's
         int nw = qs == null ? 0 : qs.windows;
+        int gateSideSplit = d.gateSideCells();
         for (int w = 0; w < nw; w++) {
             double[][] group = new double[nl][];
             double[] gateSide = null;
@@ -401,7 +402,10 @@ public final class Solution {
             int split = a;
             boolean channelWindow = d.channelLayer >= 0 && d.x[a] <= d.channelDepth && d.x[e] >= d.channelDepth
                     && d.channelLayer > d.layerOfCell[Math.max(0, d.mesh.nearestNode(d.channelDepth) - 1)];
-            if (channelWindow) {
+            if (channelWindow && gateSideSplit > 0) {
+                // the split the solve used (QuasiFermiLevels.ForwardBiasElectrons)
+                split = Math.max(a, gateSideSplit);
+            } else if (channelWindow) {
                 int ich = d.mesh.nearestNode(d.channelDepth);
                 double top = Double.NEGATIVE_INFINITY;
                 for (int i = a; i <= ich; i++) {
@@ -433,7 +437,21 @@ public final class Solution {
                     }
                 }
                 double occ = b.sheetDensity();
-                if (normAbove > 0) {
+                if (gateSideSplit > 0 && normAbove > 0) {
+                    // the forward-bias rule holds the gate side at the gate's level: split the
+                    // occupied density itself, node by node, each side at its own level
+                    double[] part = SubbandDensity.sheetPart(d, qs, w, b.index(), potential, ref, a + 1, split);
+                    if (gateSide == null) {
+                        gateSide = new double[] {0, d.structure.layerIndexAt(meanAbove / normAbove), w, d.x[a], d.x[split], 0,
+                            0};
+                        acc.add(gateSide);
+                    }
+                    gateSide[5] += part[1];
+                    gateSide[6] += part[0];
+                    occ = Math.max(0, occ - part[0]);
+                    mean -= meanAbove;
+                    norm -= normAbove;
+                } else if (normAbove > 0) {
                     double f = normAbove / norm;
                     if (gateSide == null) {
                         gateSide = new double[] {0, d.structure.layerIndexAt(meanAbove / normAbove), w, d.x[a], d.x[split], 0,
