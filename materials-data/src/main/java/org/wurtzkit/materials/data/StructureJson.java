@@ -63,6 +63,7 @@ import org.wurtzkit.structure.TopBoundary;
  *   "polarizationModel": {"spontaneous": "vegard" | "bowing", "piezoelectric": "linear" | "nonlinear"},
  *   "bandLineUp": {"rule": "valence-band-table"} | {"rule": "conduction-band-fraction", "fraction": 0.63},
  *   "strainShiftsBandEdges": false,
+ *   "strainShiftsValenceSplittings": true,   (optional, default true; written only when false)
  *   "substrateLattice": {"value": 3.189, "unit": "angstrom"},
  *   "top": {"kind": "schottky-gate", "barrierHeight": {..eV}, "bias": {..V}}
  *        | {"kind": "free-surface", "donorLevelBelowConductionBand": {..eV}, "donorDensity": {..cm^-2}},
@@ -228,6 +229,9 @@ public final class StructureJson {
         }
         g.writeEndObject();
         g.writeBooleanField("strainShiftsBandEdges", s.strainShiftsBandEdges());
+        if (!s.strainShiftsValenceSplittings()) {
+            g.writeBooleanField("strainShiftsValenceSplittings", false);
+        }
         quantity(g, "substrateLattice", s.referenceLatticeA(), Units.ANGSTROM, Units.LENGTH);
         g.writeObjectFieldStart("top");
         if (s.top() instanceof TopBoundary.Schottky sch) {
@@ -527,7 +531,7 @@ public final class StructureJson {
         Structure structure(JsonTree.Node node) {
             JsonTree.Obj root = t.object(node, "");
             t.onlyKeys(root, "", Set.of("formatVersion", "parameterSet", "temperature", "polarity", "polarizationModel",
-                    "bandLineUp", "strainShiftsBandEdges", "substrateLattice", "top", "bottom", "layersFromSurface"));
+                    "bandLineUp", "strainShiftsBandEdges", "strainShiftsValenceSplittings", "substrateLattice", "top", "bottom", "layersFromSurface"));
             JsonTree.Member version = t.required(root, "", "formatVersion");
             double v = t.number(version.value(), "formatVersion");
             if (v != FORMAT_VERSION) {
@@ -575,6 +579,9 @@ public final class StructureJson {
             }
             if ((m = root.get("strainShiftsBandEdges")) != null) {
                 b.strainShiftsBandEdges(t.bool(m.value(), "strainShiftsBandEdges"));
+            }
+            if ((m = root.get("strainShiftsValenceSplittings")) != null) {
+                b.strainShiftsValenceSplittings(t.bool(m.value(), "strainShiftsValenceSplittings"));
             }
             if ((m = root.get("substrateLattice")) != null) {
                 double a = t.quantity(m.value(), "substrateLattice", Units.LENGTH);

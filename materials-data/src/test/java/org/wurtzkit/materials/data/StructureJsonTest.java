@@ -81,6 +81,7 @@ class StructureJsonTest {
         Structure expected = Structure.builder(vm).grow(buffer).grow(grade).grow(channel)
                 .temperature(350).polarity(Polarity.N_FACE).polarizationModel(PolarizationModel.LINEAR)
                 .bandAlignment(BandAlignment.conductionBandFraction(0.63)).strainShiftsBandEdges(true)
+                .strainShiftsValenceSplittings(false)
                 .onInPlaneLattice(3.189 * 1e-10)
                 .top(TopBoundary.freeSurface(1.65, 1.6e13))
                 .bottom(BottomBoundary.fixedFermiLevel(0.2))
@@ -97,6 +98,7 @@ class StructureJsonTest {
         assertEquals(expected, read);
         assertEquals(300, read.temperatureK());
         assertEquals(vm.recommendedPolarizationModel(), read.polarizationModel());
+        assertTrue(read.strainShiftsValenceSplittings());
     }
 
     @ParameterizedTest

@@ -162,6 +162,8 @@ final class Device {
         double t = s.temperatureK();
         WurtziteMaterial lastMaterial = null;
         ValenceBands lastBands = null;
+        org.wurtzkit.strain.Strain lastStrain = null;
+        boolean followStrain = s.valenceBandsFollowStrain();
         double lastNv = 0;
         int nitrideLayers = s.layerStates().size();
         double gateT = s.gateStackThickness();
@@ -208,9 +210,11 @@ final class Device {
             nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
             // heavy, light and crystal-field holes summed with their offsets (ValenceBands); a layer of
             // one composition hands the same material to each of its cells, so compute it once
-            if (m != lastMaterial) {
+            // (strain too, where the stack's valence bands follow it: Structure.valenceBandsAt)
+            if (m != lastMaterial || (followStrain && !p.strain().equals(lastStrain))) {
                 lastMaterial = m;
-                lastBands = ValenceBands.of(m);
+                lastStrain = p.strain();
+                lastBands = s.valenceBandsAt(p);
                 lastNv = lastBands.effectiveDensityOfStates(t);
             }
             nv[k] = lastNv;
