@@ -52,7 +52,12 @@ import org.wurtzkit.errors.Require;
  * <h2>Limits</h2>
  * No current flows: where the two levels of a cell differ, the solve shows the densities that the
  * levels imply (a depleted junction, a quasi-equilibrium under the gate), not the recombination or
- * the leakage that would flow. A level changes abruptly at a rule's boundary; put boundaries where
+ * the leakage that would flow. A gate biased beyond its barrier height conducts, and the two
+ * forward-bias rules bracket it: with the default the barrier under the gate holds no electrons and
+ * the 2DEG keeps growing with the barrier's capacitance; with {@link ForwardBiasElectrons#NONE}
+ * channel electrons spill into the barrier under the gate (a parasitic sheet, reported apart) and
+ * the 2DEG saturates, as measured capacitance-voltage curves of forward-biased HEMT gates show. Such
+ * solutions carry the warning that the gate bias is at or above the barrier height. A level changes abruptly at a rule's boundary; put boundaries where
  * the carrier concerned is depleted.
  *
  * @param rules                the rules, in the order given; for each carrier no two may overlap
