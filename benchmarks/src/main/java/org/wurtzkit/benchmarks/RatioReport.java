@@ -137,6 +137,7 @@ public final class RatioReport {
         // the solver's code takes about 5 s of compilation before its time settles (CPU time > wall time till then)
         jobs.add(new Job("ColdSolveBenchmark\\.", null, null, Mode.AverageTime, 1, 5, S1, 4, S1, true));
         jobs.add(new Job("GateStackBenchmark\\.", null, null, Mode.AverageTime, 1, 4, S1, 4, S1, false));
+        jobs.add(new Job("HoleWindowBenchmark\\.", null, null, Mode.AverageTime, 1, 4, S1, 4, S1, false));
         jobs.add(new Job("SweepBenchmark\\.(coldPoints|continuationWorkflow)$", null, null, Mode.AverageTime, 1, 4, S1, 4,
                 S1, false));
         // 2-s warm-ups: with two 1 s ones the 1-thread map (about 3 maps) was still being compiled; two
@@ -175,6 +176,7 @@ public final class RatioReport {
                 false));
         jobs.add(new Job("ColdSolveBenchmark\\.", null, null, Mode.AverageTime, 5, 10, S1, 10, S1, true));
         jobs.add(new Job("GateStackBenchmark\\.", null, null, Mode.AverageTime, 3, 6, S1, 6, S1, false));
+        jobs.add(new Job("HoleWindowBenchmark\\.", null, null, Mode.AverageTime, 3, 6, S1, 6, S1, false));
         jobs.add(new Job("SweepBenchmark\\.", null, null, Mode.AverageTime, 5, 4, S2, 6, S2, false));
         jobs.add(new Job("DesignMapBenchmark\\.", "threads", new String[] {"1", "2"}, Mode.AverageTime, 5, 4, S2, 6, S2,
                 false, true));
@@ -470,6 +472,10 @@ public final class RatioReport {
                     + "%d Newton | without the insulator: %d nodes, %d outer, %d Newton | — | — |%n", c.gateStack()[0],
                     c.gateStack()[1], c.gateStack()[2], c.nodes(), c.coldOuter(), c.coldNewton()));
         }
+
+        ratioRow(b, "GaN/AlN/GaN cold solve: quantum holes (2DHG window) / classical holes, same mesh",
+                f.get("HoleWindowBenchmark.quantumHolesColdSolve"), f.get("HoleWindowBenchmark.electronsOnlyColdSolve"), 2,
+                false);
         ratioRow(b, "101-point sweep: cold / continuation (workflow BiasSweep, quadratic predictor)",
                 f.get("SweepBenchmark.coldPoints"), f.get("SweepBenchmark.continuationWorkflow"), 3, true);
         ratioRow(b, "(context) 101-point sweep: cold / plain continuation (solve(s, previous) loop)",

@@ -11,6 +11,7 @@ import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.BandGap;
 import org.wurtzkit.material.Composition;
 import org.wurtzkit.material.ParameterSet;
+import org.wurtzkit.material.ValenceBands;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.polarization.Polarity;
 import org.wurtzkit.polarization.Polarization;
@@ -55,6 +56,7 @@ public final class Structure {
     private final PolarizationModel polarizationModel;
     private final BandAlignment bandAlignment;
     private final boolean strainShiftsBandEdges;
+    private final boolean strainShiftsValenceSplittings;
     private final double temperatureK;
     private final TopBoundary top;
     private final BottomBoundary bottom;
@@ -83,6 +85,7 @@ public final class Structure {
                 : parameters.recommendedPolarizationModel();
         this.bandAlignment = b.bandAlignment != null ? b.bandAlignment : BandAlignment.recommendedFor(parameters);
         this.strainShiftsBandEdges = b.strainShiftsBandEdges;
+        this.strainShiftsValenceSplittings = b.strainShiftsValenceSplittings;
         this.temperatureK = b.temperatureK;
         this.top = b.top;
         this.bottom = b.bottom;
@@ -239,6 +242,7 @@ public final class Structure {
         b.polarizationModel = polarizationModel;
         b.bandAlignment = bandAlignment;
         b.strainShiftsBandEdges = strainShiftsBandEdges;
+        b.strainShiftsValenceSplittings = strainShiftsValenceSplittings;
         b.temperatureK = temperatureK;
         b.top = top;
         b.bottom = bottom;
@@ -296,6 +300,7 @@ public final class Structure {
                 && Double.compare(s.referenceLatticeA, referenceLatticeA) == 0 && s.polarity == polarity
                 && s.polarizationModel.equals(polarizationModel) && s.bandAlignment.equals(bandAlignment)
                 && s.strainShiftsBandEdges == strainShiftsBandEdges
+                && s.strainShiftsValenceSplittings == strainShiftsValenceSplittings
                 && Double.compare(s.temperatureK, temperatureK) == 0 && s.top.equals(top) && s.bottom.equals(bottom)
                 && s.criticalThicknessModel.equals(criticalThicknessModel) && s.gateStack.equals(gateStack)
                 && s.sheetsBottomUp.equals(sheetsBottomUp);
@@ -304,7 +309,7 @@ public final class Structure {
     @Override
     public int hashCode() {
         return java.util.Objects.hash(parameters, bottomUp, referenceLatticeA, polarity, polarizationModel,
-                bandAlignment, strainShiftsBandEdges, temperatureK, top, bottom, criticalThicknessModel, gateStack,
+                bandAlignment, strainShiftsBandEdges, strainShiftsValenceSplittings, temperatureK, top, bottom, criticalThicknessModel, gateStack,
                 sheetsBottomUp);
     }
 
@@ -481,9 +486,45 @@ public final class Structure {
     }
 
     /**
+     * {@return whether strain also shifts the valence splittings (heavy, light and crystal-field
+     * hole), in force only where {@link #strainShiftsBandEdges()} is; default true}
+     */
+    public boolean strainShiftsValenceSplittings() {
+        return strainShiftsValenceSplittings;
+    }
+
+    /**
+     * {@return whether the valence bands of this stack are those of its strain: both
+     * {@link #strainShiftsBandEdges()} and {@link #strainShiftsValenceSplittings()}}
+     */
+    public boolean valenceBandsFollowStrain() {
+        return strainShiftsBandEdges && strainShiftsValenceSplittings;
+    }
+
+    /**
+     * The valence bands (heavy, light and crystal-field hole) at a point of this stack: those of its
+     * strain ({@link ValenceBands#of(org.wurtzkit.material.WurtziteMaterial, double, double)}) if
+     * {@link #valenceBandsFollowStrain()}, else the unstrained ones.
+     *
+     * @param point a point of this stack
+     * @return its valence bands
+     */
+    public ValenceBands valenceBandsAt(PointState point) {
+        Require.nonNull("point state", point);
+        if (valenceBandsFollowStrain()) {
+            return ValenceBands.of(point.material(), point.strain().xx(), point.strain().zz());
+        }
+        return ValenceBands.of(point.material());
+    }
+
+    /**
      * The band edges at a point of this stack: the structure's {@link #bandAlignment()} at its
-     * temperature, plus the point's strain shifts if {@link #strainShiftsBandEdges()}. The one
-     * line-up rule of the full solver and of the closed-form charge-balance model.
+     * temperature, plus the point's strain shifts if {@link #strainShiftsBandEdges()}. The valence
+     * edge is the top of the three valence bands: with {@link #valenceBandsFollowStrain()} it moves
+     * with the top band of the strained splittings (the heavy-hole shift, plus
+     * {@link ValenceBands#topShiftBeyondHeavyHoleEv()} where another band is on top with or without
+     * strain); otherwise by the heavy-hole shift alone. The one line-up rule of the full solver and
+     * of the closed-form charge-balance model.
      *
      * @param point a point of this stack (from {@link #pointAt(double)} or {@link #layerStates()})
      * @return E_c and E_v on the parameter set's energy scale (eV)
@@ -492,7 +533,12 @@ public final class Structure {
         Require.nonNull("point state", point);
         BandEdges e = bandAlignment.edges(parameters, point.material(), temperatureK);
         if (strainShiftsBandEdges) {
-            e = e.shiftedBy(point.bandShift().conductionEv(), point.bandShift().valenceEv());
+            double dv = point.bandShift().valenceEv();
+            if (strainShiftsValenceSplittings) {
+                // exactly 0 where the heavy hole is on top with and without strain
+                dv += valenceBandsAt(point).topShiftBeyondHeavyHoleEv();
+            }
+            e = e.shiftedBy(point.bandShift().conductionEv(), dv);
         }
         return e;
     }
@@ -710,6 +756,7 @@ public final class Structure {
         private PolarizationModel polarizationModel;
         private BandAlignment bandAlignment;
         private boolean strainShiftsBandEdges;
+        private boolean strainShiftsValenceSplittings = true;
         private double temperatureK = 300;
         private TopBoundary top;
         private BottomBoundary bottom = new BottomBoundary.ZeroField();
@@ -851,6 +898,27 @@ public final class Structure {
          */
         public Builder strainShiftsBandEdges(boolean shifts) {
             this.strainShiftsBandEdges = shifts;
+            return this;
+        }
+
+        /**
+         * Whether strain also moves the valence splittings: the heavy-, light- and crystal-field-hole
+         * edges at k = 0 of the 6x6 k.p Hamiltonian under biaxial c-plane strain (S. L. Chuang and
+         * C. S. Chang, Phys. Rev. B 54, 2491 (1996)), with their masses and offsets, for the valence
+         * edge, the classical holes and the quantum holes. In force only where
+         * {@link #strainShiftsBandEdges(boolean)} is on. Default true: a strain large enough to shift
+         * the edges moves the splittings (tens of meV at 1 % strain) by more than their unstrained
+         * size (GaN: 10 and 17 meV), and under tension puts the |Z&gt;-like band on top, as measured in
+         * strained GaN (e.g. the excitonic transitions of B. Gil, O. Briot and R.-L. Aulombard,
+         * Phys. Rev. B 52, R17028 (1995), from memory). False keeps the unstrained splittings, the
+         * valence edge moving with the heavy-hole deformation potentials alone (the behaviour before
+         * this option).
+         *
+         * @param shifts whether strain shifts the valence splittings
+         * @return this builder
+         */
+        public Builder strainShiftsValenceSplittings(boolean shifts) {
+            this.strainShiftsValenceSplittings = shifts;
             return this;
         }
 

@@ -200,14 +200,20 @@ final class Invariants {
         if (s.top() instanceof TopBoundary.Schottky g) {
             assertEquals(g.barrierHeightEv() - g.biasV(), ec[0], ENERGY_EXACT, "E_c(0) = phi_B - V" + where);
         }
-        // quasi-Fermi levels (QuasiFermiLevels defaults): electrons at the channel's 0 eV; holes at the
-        // gate's -V or the channel's 0 eV, and at 0 eV everywhere with a free surface
+        // quasi-Fermi levels (QuasiFermiLevels defaults): electrons at the channel's 0 eV, except
+        // under a forward-biased gate a top segment (gate to the barrier's E_c maximum) at the
+        // gate's -V; holes at the gate's -V or the channel's 0 eV, and at 0 eV with a free surface
         double[] efn = sol.electronFermiLevel();
         double[] efp = sol.holeFermiLevel();
         if (o.quasiFermiLevels().rules().isEmpty()) {
             double gate = s.top() instanceof TopBoundary.Schottky g ? -g.biasV() : 0;
+            boolean forward = gate < 0 && o.quasiFermiLevels().forwardBiasElectrons()
+                    == org.wurtzkit.solvers.sp.QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE;
+            boolean gateSegment = forward;
             for (int i = 0; i < n; i++) {
-                assertEquals(0.0, efn[i], ENERGY_EXACT, "electrons at the channel level" + where);
+                gateSegment &= Math.abs(efn[i] - gate) <= ENERGY_EXACT;
+                assertEquals(gateSegment ? gate : 0.0, efn[i], ENERGY_EXACT,
+                        "electrons at the channel level below a top segment at the gate's" + where);
                 assertTrue(Math.abs(efp[i]) <= ENERGY_EXACT || Math.abs(efp[i] - gate) <= ENERGY_EXACT,
                         "holes at the gate or channel level, not " + efp[i] + where);
             }

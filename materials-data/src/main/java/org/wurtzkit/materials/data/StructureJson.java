@@ -67,6 +67,7 @@ import org.wurtzkit.structure.TopBoundary;
  *   "polarizationModel": {"spontaneous": "vegard" | "bowing", "piezoelectric": "linear" | "nonlinear"},
  *   "bandLineUp": {"rule": "valence-band-table"} | {"rule": "conduction-band-fraction", "fraction": 0.63},
  *   "strainShiftsBandEdges": false,
+ *   "strainShiftsValenceSplittings": true,   (optional, default true; written only when false)
  *   "substrateLattice": {"value": 3.189, "unit": "angstrom"},
  *   "top": {"kind": "schottky-gate", "barrierHeight": {..eV}, "bias": {..V}}
  *        | {"kind": "free-surface", "donorLevelBelowConductionBand": {..eV}, "donorDensity": {..cm^-2}},
@@ -309,6 +310,9 @@ public final class StructureJson {
         }
         g.writeEndObject();
         g.writeBooleanField("strainShiftsBandEdges", s.strainShiftsBandEdges());
+        if (!s.strainShiftsValenceSplittings()) {
+            g.writeBooleanField("strainShiftsValenceSplittings", false);
+        }
         quantity(g, "substrateLattice", s.referenceLatticeA(), Units.ANGSTROM, Units.LENGTH);
         g.writeObjectFieldStart("top");
         if (s.top() instanceof TopBoundary.Schottky sch) {
@@ -373,6 +377,9 @@ public final class StructureJson {
         }
         if (!s.criticalThicknessModel().equals(CriticalThicknessModel.C_PLANE_WURTZITE)) {
             cannot.add("a critical-thickness model other than the default");
+        }
+        if (!s.strainShiftsValenceSplittings()) {
+            cannot.add("valence splittings left unstrained (strainShiftsValenceSplittings false)");
         }
         for (Layer l : s.layersBottomUp()) {
             for (Dopant d : l.dopants()) {
@@ -751,7 +758,8 @@ public final class StructureJson {
             this.version = version(t, root);
             t.onlyKeys(root, "", keys(root, "", Set.of("formatVersion", "parameterSet", "temperature", "polarity",
                     "polarizationModel", "bandLineUp", "strainShiftsBandEdges", "substrateLattice", "top", "bottom",
-                    "layersFromSurface"), "criticalThicknessModel", "gateStackFromTop"));
+                    "layersFromSurface"), "criticalThicknessModel", "gateStackFromTop",
+                    "strainShiftsValenceSplittings"));
             ParameterSet set = parameterSet(root);
             Structure.Builder b = Structure.builder(set);
             JsonTree.Member m;
@@ -792,6 +800,9 @@ public final class StructureJson {
             }
             if ((m = root.get("strainShiftsBandEdges")) != null) {
                 b.strainShiftsBandEdges(t.bool(m.value(), "strainShiftsBandEdges"));
+            }
+            if ((m = root.get("strainShiftsValenceSplittings")) != null) {
+                b.strainShiftsValenceSplittings(t.bool(m.value(), "strainShiftsValenceSplittings"));
             }
             if ((m = root.get("substrateLattice")) != null) {
                 double a = t.quantity(m.value(), "substrateLattice", Units.LENGTH);

@@ -82,6 +82,7 @@ class StructureJsonRoundTripProperties {
         assertEquals(s, StructureJson.reader().read(StructureJson.writeCompact(s), "property"));
         boolean onlyV2 = !s.gateStack().isEmpty() || !s.interfaceSheets().isEmpty()
                 || !s.criticalThicknessModel().equals(CriticalThicknessModel.C_PLANE_WURTZITE)
+                || !s.strainShiftsValenceSplittings()
                 || s.layersBottomUp().stream().anyMatch(l -> l.material() instanceof LayerMaterial.Custom
                         || l.dopants().stream().anyMatch(d -> d.ionization() == Dopant.Ionization.FULL));
         if (onlyV2) {
@@ -230,8 +231,9 @@ class StructureJsonRoundTripProperties {
                     l.relaxation());
         });
         return Combinators.combine(structures(), ionized.list().ofMinSize(1).ofMaxSize(4),
-                sheets().list().ofMaxSize(4), insulatorLayers().list().ofMaxSize(3), criticalThicknessModels())
-                .as((base, ls, sheetSpecs, gate, model) -> {
+                sheets().list().ofMaxSize(4), insulatorLayers().list().ofMaxSize(3), criticalThicknessModels(),
+                Arbitraries.of(true, false))
+                .as((base, ls, sheetSpecs, gate, model, strainedSplittings) -> {
                     // the layers and choices of a version-1 structure, with version-2 layers on top
                     Structure.Builder plain = base.toBuilder();
                     ls.forEach(plain::grow);
@@ -242,7 +244,8 @@ class StructureJsonRoundTripProperties {
                             noSheets.referenceLatticeA()).polarity(base.polarity())
                             .polarizationModel(base.polarizationModel()).bandAlignment(base.bandAlignment())
                             .strainShiftsBandEdges(base.strainShiftsBandEdges()).temperatureK(base.temperatureK())
-                            .bottom(base.bottom()).criticalThicknessModel(model);
+                            .bottom(base.bottom()).criticalThicknessModel(model)
+                            .strainShiftsValenceSplittings(strainedSplittings);
                     for (int i = 0; i < n; i++) {
                         b.grow(bottomUp.get(i));
                         if (i < sheetSpecs.size()) {

@@ -97,6 +97,7 @@ class StructureJsonTest {
         assertEquals(expected, read);
         assertEquals(300, read.temperatureK());
         assertEquals(vm.recommendedPolarizationModel(), read.polarizationModel());
+        assertTrue(read.strainShiftsValenceSplittings());
     }
 
     @ParameterizedTest

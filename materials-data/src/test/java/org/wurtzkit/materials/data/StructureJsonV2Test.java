@@ -58,6 +58,7 @@ class StructureJsonV2Test {
                 .deposit(new InsulatorLayer("gate oxide", ald, 12 * NM))
                 .criticalThicknessModel(new CriticalThicknessModel.CPlaneWurtzite(
                         CriticalThickness.MATTHEWS_BLAKESLEE_60, new CriticalThicknessModel.ChannelCracking(12)))
+                .strainShiftsBandEdges(true).strainShiftsValenceSplittings(false)
                 .top(TopBoundary.schottky(3.2).atBiasV(-1.5))
                 .build();
         Structure read = StructureJsonTest.golden("every-section-v2.json");

@@ -83,10 +83,11 @@ public record CarrierSheet(Carrier carrier, Role role, String layer, int window,
      * @param p            hole density at the nodes (m^-3)
      * @param bands        the electron subbands, windows in order
      * @param holeSubbands the hole subbands, windows in order
+     * @param ref          the potential the subbands were computed on (V)
      * @return the sheets, quantum ones first (window order), then classical ones (layer order, top down)
      */
     static List<CarrierSheet> gather(Device d, double[] phi, QuantumStates qs, double[] n, double[] p, List<Subband> bands,
-            List<HoleSubband> holeSubbands) {
+            List<HoleSubband> holeSubbands, double[] ref) {
         int nn = d.n;
         List<org.wurtzkit.structure.LayerState> states = d.structure.layerStates();
         int nl = states.size();
@@ -96,6 +97,7 @@ public record CarrierSheet(Carrier carrier, Role role, String layer, int window,
         // the conduction-band maximum between the window top and the interface: the part above it is
         // on the gate side (a parasitic channel under forward bias), the rest is the channel's
         int nw = qs == null ? 0 : qs.windows;
+        int gateSideSplit = d.gateSideCells();
         for (int w = 0; w < nw; w++) {
             double[][] group = new double[nl][];
             double[] gateSide = null;
@@ -104,7 +106,10 @@ public record CarrierSheet(Carrier carrier, Role role, String layer, int window,
             int split = a;
             boolean channelWindow = d.channelLayer >= 0 && d.x[a] <= d.channelDepth && d.x[e] >= d.channelDepth
                     && d.channelLayer > d.layerOfCell[Math.max(0, d.mesh.nearestNode(d.channelDepth) - 1)];
-            if (channelWindow) {
+            if (channelWindow && gateSideSplit > 0) {
+                // the split the solve used (QuasiFermiLevels.ForwardBiasElectrons)
+                split = Math.max(a, gateSideSplit);
+            } else if (channelWindow) {
                 int ich = d.mesh.nearestNode(d.channelDepth);
                 double top = Double.NEGATIVE_INFINITY;
                 for (int i = a; i <= ich; i++) {
@@ -136,7 +141,21 @@ public record CarrierSheet(Carrier carrier, Role role, String layer, int window,
                     }
                 }
                 double occ = b.sheetDensity();
-                if (normAbove > 0) {
+                if (gateSideSplit > 0 && normAbove > 0) {
+                    // the forward-bias rule holds the gate side at the gate's level: split the
+                    // occupied density itself, node by node, each side at its own level
+                    double[] part = SubbandDensity.sheetPart(d, qs, w, b.index(), phi, ref, a + 1, split);
+                    if (gateSide == null) {
+                        gateSide = new double[] {0, d.structure.layerIndexAt(meanAbove / normAbove), w, d.x[a], d.x[split], 0,
+                            0};
+                        acc.add(gateSide);
+                    }
+                    gateSide[5] += part[1];
+                    gateSide[6] += part[0];
+                    occ = Math.max(0, occ - part[0]);
+                    mean -= meanAbove;
+                    norm -= normAbove;
+                } else if (normAbove > 0) {
                     double f = normAbove / norm;
                     if (gateSide == null) {
                         gateSide = new double[] {0, d.structure.layerIndexAt(meanAbove / normAbove), w, d.x[a], d.x[split], 0,

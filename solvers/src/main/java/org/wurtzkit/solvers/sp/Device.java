@@ -94,7 +94,17 @@ final class Device {
     final double channelDepth; // deepest interface with sigma > 0 (m), NaN if none
     final int channelLayer; // the layer on the well side (lower E_c) of that interface, -1 if none
     final boolean[] deepFollowHoles; // per layer: deep levels follow the hole level (layer grown p-type)
-    final boolean quasiFermiUniform; // every cell's electron level is 0 (the channel's)
+    boolean quasiFermiUniform; // every cell's electron level is 0 (the channel's); moves with the forward-bias split
+
+    // forward-bias rule (QuasiFermiLevels.ForwardBiasElectrons): the only state of a Device that a
+    // solve changes. Cells [forwardTopCell, forwardSplit) follow the gate; the split node is searched
+    // in [forwardTopCell, forwardChannelNode]; forwardTopCell < 0 when the rule does not apply
+    private boolean[] electronRuleCell; // cell covered by a user's electron rule (never reassigned)
+    private int forwardTopCell = -1;
+    private int forwardChannelNode = -1;
+    private int forwardSplit;
+    private int forwardMoves;
+    private boolean forwardFrozen;
 
     /** true where the two cells around node i hold the same material and species (no interface). */
     final boolean[] sameCellsAround;
@@ -152,6 +162,8 @@ final class Device {
         double t = s.temperatureK();
         WurtziteMaterial lastMaterial = null;
         ValenceBands lastBands = null;
+        org.wurtzkit.strain.Strain lastStrain = null;
+        boolean followStrain = s.valenceBandsFollowStrain();
         double lastNv = 0;
         int nitrideLayers = s.layerStates().size();
         double gateT = s.gateStackThickness();
@@ -198,9 +210,11 @@ final class Device {
             nc[k] = CarrierDensity.effectiveDensityOfStates(em.electronDensityOfStates(), t);
             // heavy, light and crystal-field holes summed with their offsets (ValenceBands); a layer of
             // one composition hands the same material to each of its cells, so compute it once
-            if (m != lastMaterial) {
+            // (strain too, where the stack's valence bands follow it: Structure.valenceBandsAt)
+            if (m != lastMaterial || (followStrain && !p.strain().equals(lastStrain))) {
                 lastMaterial = m;
-                lastBands = ValenceBands.of(m);
+                lastStrain = p.strain();
+                lastBands = s.valenceBandsAt(p);
                 lastNv = lastBands.effectiveDensityOfStates(t);
             }
             nv[k] = lastNv;
@@ -348,6 +362,13 @@ final class Device {
         channelDepth = chDepth;
         channelLayer = chLayer;
         resolveQuasiFermiLevels(s, o.quasiFermiLevels());
+        if (o.quasiFermiLevels().forwardBiasElectrons() == QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE
+                && top instanceof TopBoundary.Schottky && gateBiasV > 0 && s.gateStackThickness() == 0
+                && !Double.isNaN(channelDepth)) {
+            forwardChannelNode = mesh.nearestNode(channelDepth);
+            forwardTopCell = 0;
+            forwardSplit = 0;
+        }
         for (int j = 0; j < sheetNode.length; j++) {
             sheetFermiEv[j] = interfaceStateFermiLevelEv(sheetNode[j]);
         }
@@ -448,6 +469,7 @@ final class Device {
         int[] ruleP = new int[cells];
         java.util.Arrays.fill(ruleN, -1);
         java.util.Arrays.fill(ruleP, -1);
+        electronRuleCell = new boolean[cells];
         double total = s.totalThickness();
         for (int r = 0; r < rules.size(); r++) {
             QuasiFermiLevels.Rule rule = rules.get(r);
@@ -495,6 +517,7 @@ final class Device {
                 }
                 owner[k] = r;
                 if (electrons) {
+                    electronRuleCell[k] = true;
                     efn[k] = level;
                     contactN[k] = rule.contact();
                 } else {
@@ -503,6 +526,85 @@ final class Device {
                 }
             }
         }
+    }
+
+    /**
+     * The forward-bias rule of {@link QuasiFermiLevels.ForwardBiasElectrons#GATE_SIDE_FOLLOWS_GATE}
+     * on the potential {@code phi}: finds the node of the highest conduction-band edge between the
+     * top of the stack and the channel interface (each node's edge the higher of its two cells'
+     * E_c - phi there) and lets the cells above it follow the gate, the others the channel (cells a
+     * user's electron rule covers keep that rule). The first of equal maxima wins. Once
+     * {@link #freezeGateSideSplit()} was called, or after
+     * {@value QuasiFermiLevels#FORWARD_SPLIT_MAX_MOVES} moves, the split stays where it is. O(N).
+     *
+     * @param phi the current potential (V)
+     * @return whether the split moved (the densities then changed)
+     */
+    boolean updateGateSideSplit(double[] phi) {
+        if (forwardTopCell < 0 || forwardFrozen) {
+            return false;
+        }
+        int best = forwardTopCell;
+        double top = Double.NEGATIVE_INFINITY;
+        for (int i = forwardTopCell; i <= forwardChannelNode; i++) {
+            double e = Double.NEGATIVE_INFINITY;
+            if (i > forwardTopCell) {
+                e = ec[i - 1] - phi[i];
+            }
+            if (i < forwardChannelNode) {
+                e = Math.max(e, ec[i] - phi[i]);
+            }
+            if (e > top) {
+                top = e;
+                best = i;
+            }
+        }
+        if (best == forwardSplit) {
+            return false;
+        }
+        int from = Math.min(best, forwardSplit);
+        int to = Math.max(best, forwardSplit);
+        double gateLevel = FermiContact.GATE.levelEv(gateBiasV);
+        for (int k = from; k < to; k++) {
+            if (electronRuleCell != null && electronRuleCell[k]) {
+                continue;
+            }
+            boolean gate = k < best;
+            efn[k] = gate ? gateLevel : 0;
+            contactN[k] = gate ? FermiContact.GATE : FermiContact.CHANNEL;
+        }
+        forwardSplit = best;
+        if (++forwardMoves >= QuasiFermiLevels.FORWARD_SPLIT_MAX_MOVES) {
+            forwardFrozen = true;
+        }
+        // the levels moved: the quantities that depend on them follow
+        boolean uniform = true;
+        for (double v : efn) {
+            uniform &= v == 0;
+        }
+        quasiFermiUniform = uniform;
+        for (int i = Math.max(1, from); i <= Math.min(n - 2, to); i++) {
+            sameCellsAround[i] = sameCellsAroundBase(i) && efn[i - 1] == efn[i] && efp[i - 1] == efp[i];
+        }
+        for (int j = 0; j < sheetNode.length; j++) {
+            sheetFermiEv[j] = interfaceStateFermiLevelEv(sheetNode[j]);
+        }
+        return true;
+    }
+
+    /** Freezes the forward-bias split where it is (the outer loop is near convergence). */
+    void freezeGateSideSplit() {
+        forwardFrozen = true;
+    }
+
+    /** {@return the number of cells from the top that follow the gate by the forward-bias rule} */
+    int gateSideCells() {
+        return forwardTopCell < 0 ? 0 : forwardSplit;
+    }
+
+    private boolean sameCellsAroundBase(int i) {
+        int a = i - 1;
+        return ec[a] == ec[i] && ev[a] == ev[i] && nc[a] == nc[i] && nv[a] == nv[i] && layerOfCell[a] == layerOfCell[i];
     }
 
     /**

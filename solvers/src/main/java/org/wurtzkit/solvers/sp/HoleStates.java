@@ -61,6 +61,18 @@ final class HoleStates {
         }
     }
 
+    /** {@return whether the last update found any hole subband (a window holds a hole well)} */
+    boolean any() {
+        for (int[] c : count) {
+            for (int v : c) {
+                if (v > 0) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
     /** Solves every window for the potential phi (V); counts stay 0 where no hole state can be occupied. */
     void update(Device d, double[] phi) {
         double cut = d.options.subbandCutoffKT() * d.vt;

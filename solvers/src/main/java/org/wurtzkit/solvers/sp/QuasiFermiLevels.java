@@ -13,7 +13,22 @@ import org.wurtzkit.errors.Require;
  *
  * <h2>Defaults (no rule given)</h2>
  * <ul>
- * <li><b>Electrons</b> follow the channel everywhere.</li>
+ * <li><b>Electrons</b> follow the channel everywhere, except under a forward-biased Schottky gate
+ * ({@link ForwardBiasElectrons#GATE_SIDE_FOLLOWS_GATE}, the default): there the electrons between
+ * the gate and the conduction-band maximum of the layers above the channel follow the gate (level
+ * -V). The metal holds the electrons on its side of that maximum at its own level (the thermionic
+ * picture of a Schottky contact: at the metal the electron density is N_c exp(-phi_B / kT) whatever
+ * the bias, E. H. Rhoderick and R. H. Williams, Metal-Semiconductor Contacts, 2nd ed., Clarendon
+ * Press 1988), while those beyond it exchange with the channel. The maximum is found on the current
+ * potential in each outer iteration of the solve, so the split is part of the self-consistent loop;
+ * it is frozen once the outer change of the potential falls below
+ * {@value #FORWARD_SPLIT_FREEZE_V} V or after it has moved {@value #FORWARD_SPLIT_MAX_MOVES} times,
+ * so that it cannot oscillate. The rule applies only for a gate bias above 0 V on a Schottky gate
+ * directly on the nitride (an insulator under the gate holds no current, so the electrons under
+ * it follow the channel), only where a channel exists (a positive polarization sheet), and never
+ * in cells that an electron rule covers. At V &le; 0 it changes nothing.
+ * {@link ForwardBiasElectrons#NONE} turns it off (electrons follow the channel everywhere unless a
+ * rule says otherwise, the behaviour before it was introduced).</li>
  * <li><b>Holes</b> follow the gate in every layer above the channel, and the channel in the channel
  * layer and every layer below it. The channel is taken at the deepest interface whose polarization
  * sheet is positive (sigma &gt; 0, where a 2DEG gathers); a layer lies above it when its bottom is
@@ -61,15 +76,45 @@ import org.wurtzkit.errors.Require;
  * <h2>Limits</h2>
  * No current flows: where the two levels of a cell differ, the solve shows the densities that the
  * levels imply (a depleted junction, a quasi-equilibrium under the gate), not the recombination or
- * the leakage that would flow. A level changes abruptly at a rule's boundary; put boundaries where
+ * the leakage that would flow. A gate biased beyond its barrier height conducts, and the two
+ * forward-bias rules bracket it: with the default the barrier under the gate holds no electrons and
+ * the 2DEG keeps growing with the barrier's capacitance; with {@link ForwardBiasElectrons#NONE}
+ * channel electrons spill into the barrier under the gate (a parasitic sheet, reported apart) and
+ * the 2DEG saturates, as measured capacitance-voltage curves of forward-biased HEMT gates show. Such
+ * solutions carry the warning that the gate bias is at or above the barrier height. A level changes abruptly at a rule's boundary; put boundaries where
  * the carrier concerned is depleted.
  *
- * @param rules the rules, in the order given; for each carrier no two may overlap
- * @param holesUnderInsulator the default contact of the holes above the channel when an insulator
- *        separates them from the gate metal
+ * @param rules                the rules, in the order given; for each carrier no two may overlap
+ * @param holesUnderInsulator  the default contact of the holes above the channel when an insulator
+ *                             separates them from the gate metal; default
+ *                             {@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS}
+ * @param forwardBiasElectrons which contact the electrons on the gate side of the barrier's
+ *                             conduction-band maximum follow under forward bias; default
+ *                             {@link ForwardBiasElectrons#GATE_SIDE_FOLLOWS_GATE}
  */
-public record QuasiFermiLevels(List<Rule> rules, HolesUnderInsulator holesUnderInsulator) {
+public record QuasiFermiLevels(List<Rule> rules, HolesUnderInsulator holesUnderInsulator,
+        ForwardBiasElectrons forwardBiasElectrons) {
+    /**
+     * Outer change of the potential (V) below which the forward-bias split between gate-side and
+     * channel-side electrons is frozen: far below the 0.1 V scale on which the barrier's maximum
+     * moves, and far above the 1e-6 V tolerance, so the last iterations run with a fixed split.
+     */
+    public static final double FORWARD_SPLIT_FREEZE_V = 1e-3;
+    /** Moves of the forward-bias split after which it is frozen, whatever the outer change. */
+    public static final int FORWARD_SPLIT_MAX_MOVES = 8;
+
     private static final QuasiFermiLevels DEFAULTS = new QuasiFermiLevels(List.of());
+
+    /**
+     * Which contact the electrons between a forward-biased Schottky gate and the conduction-band
+     * maximum of the layers above the channel follow, where no electron rule covers them.
+     */
+    public enum ForwardBiasElectrons {
+        /** The gate (the documented default): a forward-biased gate holds its side of the barrier. */
+        GATE_SIDE_FOLLOWS_GATE,
+        /** No forward-bias rule: those electrons follow the channel (the behaviour before this rule). */
+        NONE
+    }
 
     /**
      * The contact of the holes above the channel when a gate stack separates them from the gate
@@ -93,9 +138,11 @@ public record QuasiFermiLevels(List<Rule> rules, HolesUnderInsulator holesUnderI
      * @param rules the rules, in the order given; for each carrier no two may overlap
      * @param holesUnderInsulator the default contact of the holes above the channel under a gate
      *        stack, not null
+     * @param forwardBiasElectrons the forward-bias rule for gate-side electrons, not null
      */
     public QuasiFermiLevels {
         Require.nonNull("holes-under-insulator rule", holesUnderInsulator);
+        Require.nonNull("forward-bias electron rule", forwardBiasElectrons);
         Require.nonNull("quasi-Fermi rules", rules);
         rules = List.copyOf(rules);
         for (int i = 0; i < rules.size(); i++) {
@@ -111,15 +158,19 @@ public record QuasiFermiLevels(List<Rule> rules, HolesUnderInsulator holesUnderI
     }
 
     /**
-     * Rules with the default holes under an insulator ({@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS}).
+     * Rules with the default holes under an insulator ({@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS})
+     * and the default forward-bias rule ({@link ForwardBiasElectrons#GATE_SIDE_FOLLOWS_GATE}).
      *
      * @param rules the rules, in the order given; for each carrier no two may overlap
      */
     public QuasiFermiLevels(List<Rule> rules) {
-        this(rules, HolesUnderInsulator.CHANNEL_FOR_P_LAYERS);
+        this(rules, HolesUnderInsulator.CHANNEL_FOR_P_LAYERS, ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE);
     }
 
-    /** {@return the documented defaults: no rules, {@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS}} */
+    /**
+     * {@return the documented defaults: no rules, {@link HolesUnderInsulator#CHANNEL_FOR_P_LAYERS},
+     * gate-side electrons follow a forward-biased gate}
+     */
     public static QuasiFermiLevels defaults() {
         return DEFAULTS;
     }
@@ -131,7 +182,7 @@ public record QuasiFermiLevels(List<Rule> rules, HolesUnderInsulator holesUnderI
      *        {@link HolesUnderInsulator#CHANNEL_EVERYWHERE} or {@link HolesUnderInsulator#GATE}
      */
     public QuasiFermiLevels withHolesUnderInsulator(HolesUnderInsulator choice) {
-        return new QuasiFermiLevels(rules, Require.nonNull("holes-under-insulator rule", choice));
+        return new QuasiFermiLevels(rules, Require.nonNull("holes-under-insulator rule", choice), forwardBiasElectrons);
     }
 
     /**
@@ -167,7 +218,17 @@ public record QuasiFermiLevels(List<Rule> rules, HolesUnderInsulator holesUnderI
     public QuasiFermiLevels with(Rule rule) {
         List<Rule> r = new ArrayList<>(rules);
         r.add(Require.nonNull("quasi-Fermi rule", rule));
-        return new QuasiFermiLevels(r, holesUnderInsulator);
+        return new QuasiFermiLevels(r, holesUnderInsulator, forwardBiasElectrons);
+    }
+
+    /**
+     * Returns a copy with another forward-bias rule; the rules are kept.
+     *
+     * @param v which contact the gate-side electrons follow under forward bias, not null
+     * @return a copy with {@code forwardBiasElectrons} set to {@code v}
+     */
+    public QuasiFermiLevels withForwardBiasElectrons(ForwardBiasElectrons v) {
+        return new QuasiFermiLevels(rules, holesUnderInsulator, v);
     }
 
     /**

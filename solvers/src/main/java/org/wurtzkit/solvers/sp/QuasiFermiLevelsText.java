@@ -12,14 +12,20 @@ import org.wurtzkit.errors.InvalidParameterException;
  * rules joined by {@code ;}, each {@code <carrier>|layer|<name>|<contact>} or
  * {@code <carrier>|depths|<top m>|<bottom m>|<contact>}, with the contact {@code gate}, {@code channel}
  * or {@code floating <eV>} and numbers written by {@link Double#toString(double)}, so that reading
- * gives back an equal record; a non-default {@link QuasiFermiLevels.HolesUnderInsulator} adds the
- * item {@code holesUnderInsulator|<choice>} (lower case); the defaults (no rules) are the empty text.
+ * gives back an equal record; the defaults (no rules) are the empty text. A non-default
+ * {@link QuasiFermiLevels.HolesUnderInsulator} adds the item {@code holesUnderInsulator|<choice>}
+ * (lower case); a forward-bias rule other than the default adds a last item
+ * {@code forward-bias|<rule>} with the rule's name in lower case ({@code none}); defaults write
+ * nothing, so the text of the default options stays empty.
  */
 final class QuasiFermiLevelsText {
     private static final String ALLOWED = "rules \"<carrier>|layer|<name>|<contact>\" or "
-            + "\"<carrier>|depths|<top m>|<bottom m>|<contact>\" and optionally \"holesUnderInsulator|<channel_everywhere or gate>\", joined by ';'";
+            + "\"<carrier>|depths|<top m>|<bottom m>|<contact>\" joined by ';', then optionally "
+            + "\"holesUnderInsulator|<channel_everywhere or gate>\" and "
+            + "\"forward-bias|<gate_side_follows_gate or none>\"";
 
     private static final String HOLES_UNDER_INSULATOR = "holesUnderInsulator";
+    private static final String FORWARD = "forward-bias";
 
     private QuasiFermiLevelsText() {
     }
@@ -50,6 +56,12 @@ final class QuasiFermiLevelsText {
             }
             sb.append(HOLES_UNDER_INSULATOR).append('|').append(q.holesUnderInsulator().name().toLowerCase(Locale.ROOT));
         }
+        if (q.forwardBiasElectrons() != QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE) {
+            if (sb.length() > 0) {
+                sb.append(';');
+            }
+            sb.append(FORWARD).append('|').append(q.forwardBiasElectrons().name().toLowerCase(Locale.ROOT));
+        }
         return sb.toString();
     }
 
@@ -71,6 +83,11 @@ final class QuasiFermiLevelsText {
                 if (f.length == 2 && HOLES_UNDER_INSULATOR.equals(f[0])) {
                     q = q.withHolesUnderInsulator(
                             QuasiFermiLevels.HolesUnderInsulator.valueOf(f[1].toUpperCase(Locale.ROOT)));
+                    continue;
+                }
+                if (f.length == 2 && FORWARD.equals(f[0])) {
+                    q = q.withForwardBiasElectrons(
+                            QuasiFermiLevels.ForwardBiasElectrons.valueOf(f[1].toUpperCase(Locale.ROOT)));
                     continue;
                 }
                 Carrier carrier = Carrier.valueOf(f[0].toUpperCase(Locale.ROOT));

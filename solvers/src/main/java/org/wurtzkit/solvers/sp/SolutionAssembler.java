@@ -167,7 +167,7 @@ final class SolutionAssembler {
         }
         List<HoleSubband> holeSubbands = Collections.unmodifiableList(hb);
         List<CarrierSheet> sheets = Collections.unmodifiableList(
-                CarrierSheet.gather(d, phi, qs, n, p, bands, holeSubbands));
+                CarrierSheet.gather(d, phi, qs, n, p, bands, holeSubbands, ref));
         checkFinite(structure, potential, ec, ev, n, p, report.donors(), report.acceptors(), charge, field);
         List<Warning> warnings = warnings(d, phi, depth, ec, n, p, windows, subbands, wellSheetDensity,
                 subbandLimitReached);

@@ -89,6 +89,42 @@ final class SubbandDensity {
         return sum;
     }
 
+    /**
+     * The part of the sheet density of subband k of window w that lies on the nodes
+     * [fromNode, toNode) of the window's interior, each node with its own quasi-Fermi level, and the
+     * first moment of that part in depth: where a window spans two levels (a forward-biased gate's
+     * side and the channel's), the occupied density of each side, not the probability of the wave
+     * function there.
+     *
+     * @param d        the device
+     * @param qs       the subbands, computed at phiRef
+     * @param w        window index
+     * @param k        subband index within the window
+     * @param phi      potential (V), every node
+     * @param phiRef   potential at which the subbands were computed (V), every node
+     * @param fromNode first node (clipped to the window's interior)
+     * @param toNode   node after the last
+     * @return {sheet density (m^-2), its first moment in depth (m^-1)}
+     */
+    static double[] sheetPart(Device d, QuantumStates qs, int w, int k, double[] phi, double[] phiRef, int fromNode,
+            int toNode) {
+        double invVt = 1 / d.vt;
+        int a = d.windowStart[w];
+        double[] psiK = qs.psi[w][k];
+        double sum = 0;
+        double moment = 0;
+        for (int i = Math.max(a + 1, fromNode); i < Math.min(d.windowEnd[w], toNode); i++) {
+            double psi = psiK[i - a];
+            double fn = d.quasiFermiUniform ? 0 : d.efn[i < d.n - 1 ? i : i - 1];
+            double eta = (fn - qs.energy[w][k]) * invVt + (phi[i] - phiRef[i]) * invVt;
+            double g = qs.dos[w][k] * psi * psi;
+            double v = g * lnOnePlusExp(eta, Math.exp(-Math.abs(eta))) * d.box(i);
+            sum += v;
+            moment += v * d.x[i];
+        }
+        return new double[] {sum, moment};
+    }
+
     /** ln(1 + e^eta) given ex = e^-|eta|. */
     private static double lnOnePlusExp(double eta, double ex) {
         return eta > 0 ? eta + Math.log1p(ex) : Math.log1p(ex);

@@ -245,6 +245,7 @@ public final class StructureFamilies {
                 .polarizationModel(template.polarizationModel())
                 .bandAlignment(template.bandAlignment())
                 .strainShiftsBandEdges(template.strainShiftsBandEdges())
+                .strainShiftsValenceSplittings(template.strainShiftsValenceSplittings())
                 .criticalThicknessModel(template.criticalThicknessModel())
                 .temperatureK(template.temperatureK())
                 .top(template.top())

@@ -297,6 +297,7 @@ public final class ToleranceStudy {
                 .polarizationModel(template.polarizationModel())
                 .bandAlignment(alignment)
                 .strainShiftsBandEdges(template.strainShiftsBandEdges())
+                .strainShiftsValenceSplittings(template.strainShiftsValenceSplittings())
                 .criticalThicknessModel(template.criticalThicknessModel())
                 .temperatureK(temperature)
                 .top(top)

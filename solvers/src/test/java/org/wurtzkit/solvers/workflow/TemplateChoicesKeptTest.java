@@ -27,6 +27,7 @@ class TemplateChoicesKeptTest {
                         .withDopant(Dopant.donorsPerCm3(1e17, 0.02).fullyIonized()))
                 .bandAlignment(BandAlignment.conductionBandFraction(0.65))
                 .strainShiftsBandEdges(true)
+                .strainShiftsValenceSplittings(false)
                 .criticalThicknessModel(CriticalThickness.MATTHEWS_BLAKESLEE_60)
                 .top(TopBoundary.schottky(1.0))
                 .build();
@@ -35,6 +36,7 @@ class TemplateChoicesKeptTest {
     private static void assertSameChoices(Structure expected, Structure actual) {
         assertEquals(expected.bandAlignment(), actual.bandAlignment());
         assertEquals(expected.strainShiftsBandEdges(), actual.strainShiftsBandEdges());
+        assertEquals(expected.strainShiftsValenceSplittings(), actual.strainShiftsValenceSplittings());
         assertEquals(expected.criticalThicknessModel(), actual.criticalThicknessModel());
     }
 
@@ -57,6 +59,7 @@ class TemplateChoicesKeptTest {
             Structure st = s.structure(j);
             assertEquals(BandAlignment.conductionBandFraction(x[0]), st.bandAlignment());
             assertEquals(t.strainShiftsBandEdges(), st.strainShiftsBandEdges());
+            assertEquals(t.strainShiftsValenceSplittings(), st.strainShiftsValenceSplittings());
             assertEquals(t.criticalThicknessModel(), st.criticalThicknessModel());
             assertEquals(Dopant.Ionization.FULL, st.layersBottomUp().get(1).dopants().get(0).ionization());
             assertEquals(t.parameters().conductionBandOffsetFraction(), st.parameters().conductionBandOffsetFraction());
