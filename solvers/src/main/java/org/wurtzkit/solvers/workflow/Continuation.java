@@ -122,6 +122,37 @@ final class Continuation {
         return out;
     }
 
+    /**
+     * A linear guess through two neighbouring solutions, both carried onto the new stack layer by
+     * layer ({@link #alignedDepth}): phi = phi_newer + t (phi_newer - phi_older) at the carried
+     * depths of the newer one, the older interpolated there linearly (and held at its end values
+     * beyond its range).
+     *
+     * @param older the solution before {@code newer} on a line of points
+     * @param newer the last solution on that line
+     * @param t     (p - p_newer) / (p_newer - p_older) for the line's parameter p
+     * @param next  the stack to be solved
+     * @return {depths (m), potential (V)} of the guess
+     */
+    static double[][] alignedLinearGuess(Solution older, Solution newer, double t, Structure next) {
+        double[] z = alignedDepth(newer, next);
+        double[] zo = alignedDepth(older, next);
+        double[] vo = older.potential();
+        double[] v = newer.potential();
+        double[] guess = new double[z.length];
+        int j = 0;
+        for (int i = 0; i < z.length; i++) {
+            double x = z[i];
+            while (j < zo.length - 2 && zo[j + 1] < x) {
+                j++;
+            }
+            double u = Math.max(0, Math.min(1, (x - zo[j]) / (zo[j + 1] - zo[j])));
+            double old = vo[j] + u * (vo[j + 1] - vo[j]);
+            guess[i] = v[i] + t * (v[i] - old);
+        }
+        return new double[][] {z, guess};
+    }
+
     /** Depths of the top, every interface and the bottom of a stack (m), gate stack first. */
     private static double[] interfaces(Structure s) {
         List<InsulatorLayer> gate = s.gateStack();

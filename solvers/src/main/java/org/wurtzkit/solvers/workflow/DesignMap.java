@@ -37,7 +37,8 @@ import org.wurtzkit.structure.Structure;
  * the map has that many points. A worker takes a whole chain: its first point is solved cold and
  * every further point starts from the solution of the one before it in the chain (the last that
  * converged), carried onto the new stack layer by layer (a thicker barrier moves the channel's
- * potential with the channel), a failed continued solve being retried cold. The chains depend only on the axis
+ * potential with the channel), or, when the two points before it in the chain lie on the same row,
+ * from the linear extrapolation through both, a failed continued solve being retried cold. The chains depend only on the axis
  * sizes, never on the thread count or on which worker takes which chain, so a continued map is
  * also the same bit for bit for any thread count. Its values agree with those of cold solves to
  * within the solver's convergence tolerance, not bit for bit. It needs the quantities evaluator
@@ -155,7 +156,9 @@ public final class DesignMap {
             int[] order = serpentine();
             int[] start = chainStarts(n);
             out = ParallelPoints.run(n, order, start, threads, c -> {
-                Solution[] last = {null}; // the chain's last converged solution
+                // the chain's last two converged solutions and their point indices
+                Solution[] last = new Solution[2];
+                int[] at = {-1, -1};
                 return i -> {
                     Structure s = structureAt(i);
                     Solution sol;
@@ -163,12 +166,15 @@ public final class DesignMap {
                         sol = solver.solve(s);
                     } else {
                         try {
-                            sol = solver.solve(s, Continuation.alignedDepth(last[0], s), last[0].potential());
+                            sol = continued(s, i, last, at);
                         } catch (InvalidParameterException | WurtzkitException e) {
                             sol = solver.solve(s); // continued solve failed: cold, as a map without continuation
                         }
                     }
+                    last[1] = last[0];
+                    at[1] = at[0];
                     last[0] = sol;
+                    at[0] = i;
                     return q.read(sol);
                 };
             }, progress);
@@ -180,6 +186,26 @@ public final class DesignMap {
             params[i] = parameters(i);
         }
         return new DesignMapResult(axes, evaluator.columns(), params, out);
+    }
+
+    /**
+     * A continued solve of point i: linear through the chain's last two solutions when all three
+     * points lie along one row (the last axis), else from the last solution alone; both carried
+     * onto the point's stack layer by layer.
+     */
+    private Solution continued(Structure s, int i, Solution[] last, int[] at) {
+        int row = axes.get(axes.size() - 1).size();
+        if (last[1] != null && at[0] / row == i / row && at[1] / row == i / row) {
+            Axis axis = axes.get(axes.size() - 1);
+            double p = axis.get(i % row);
+            double p1 = axis.get(at[0] % row);
+            double p2 = axis.get(at[1] % row);
+            if (p1 != p2 && (p - p1) * (p1 - p2) > 0) {
+                double[][] guess = Continuation.alignedLinearGuess(last[1], last[0], (p - p1) / (p1 - p2), s);
+                return solver.solve(s, guess[0], guess[1]);
+            }
+        }
+        return solver.solve(s, Continuation.alignedDepth(last[0], s), last[0].potential());
     }
 
     private Structure structureAt(int i) {
