@@ -467,11 +467,11 @@ public final class RatioReport {
         mapRows(b, "plain pool", f.get("DesignMapBenchmark.executorMap@threads=1"),
                 f.get("DesignMapBenchmark.executorMap@threads=2"));
         for (String t : new String[] {"1", "2"}) {
-            Figure cold = f.get("DesignMapBenchmark.workflowMap@threads=" + t);
-            Figure continued = f.get("DesignMapBenchmark.continuedMap@threads=" + t);
-            if (cold != null && continued != null) {
-                Span w = cold.wall().over(continued.wall());
-                Span u = cold.process().over(continued.process());
+            Figure mapCold = f.get("DesignMapBenchmark.workflowMap@threads=" + t);
+            Figure mapContinued = f.get("DesignMapBenchmark.continuedMap@threads=" + t);
+            if (mapCold != null && mapContinued != null) {
+                Span w = mapCold.wall().over(mapContinued.wall());
+                Span u = mapCold.process().over(mapContinued.process());
                 b.append(String.format(Locale.ROOT, "| (context) 200-point design map, %s thread(s): cold / continued "
                         + "(DesignMap.Builder.continuation, issue 18) | %s× (%s× – %s×) | %s× (%s× – %s×) (JVM) | — | — |%n",
                         t, num(w.median()), num(w.min()), num(w.max()), num(u.median()), num(u.min()), num(u.max())));

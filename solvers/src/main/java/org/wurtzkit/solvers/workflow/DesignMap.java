@@ -38,9 +38,9 @@ import org.wurtzkit.structure.Structure;
  * every further point starts from the solution of the one before it in the chain (the last that
  * converged), carried onto the new stack layer by layer (a thicker barrier moves the channel's
  * potential with the channel), or, when the two points before it in the chain lie on the same row,
- * from the linear extrapolation through both, a failed continued solve being retried cold. The chains depend only on the axis
- * sizes, never on the thread count or on which worker takes which chain, so a continued map is
- * also the same bit for bit for any thread count. Its values agree with those of cold solves to
+ * from the linear extrapolation through both, a failed continued solve being retried cold. The
+ * chains depend only on the axis sizes, never on the thread count or on which worker takes which
+ * chain, so a continued map is also the same bit for bit for any thread count. Its values agree with those of cold solves to
  * within the solver's convergence tolerance, not bit for bit. It needs the quantities evaluator
  * ({@link Builder#quantities(Quantity...)}, the default).
  *
