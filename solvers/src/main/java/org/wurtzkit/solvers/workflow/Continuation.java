@@ -123,32 +123,47 @@ final class Continuation {
     }
 
     /**
-     * A linear guess through two neighbouring solutions, both carried onto the new stack layer by
-     * layer ({@link #alignedDepth}): phi = phi_newer + t (phi_newer - phi_older) at the carried
-     * depths of the newer one, the older interpolated there linearly (and held at its end values
-     * beyond its range).
+     * A guess extrapolated through two or three neighbouring solutions on a line of points, all
+     * carried onto the new stack layer by layer ({@link #alignedDepth}): the Lagrange polynomial
+     * through them in the line's parameter p (linear through two, quadratic through three),
+     * evaluated at the new point's p, at the carried depths of the newest one; the older ones are
+     * interpolated there linearly (and held at their end values beyond their range).
      *
-     * @param older the solution before {@code newer} on a line of points
-     * @param newer the last solution on that line
-     * @param t     (p - p_newer) / (p_newer - p_older) for the line's parameter p
-     * @param next  the stack to be solved
+     * @param from   the solutions, oldest first, the newest last
+     * @param p      their parameters, distinct
+     * @param target the parameter of the point to be solved
+     * @param next   the stack to be solved
      * @return {depths (m), potential (V)} of the guess
      */
-    static double[][] alignedLinearGuess(Solution older, Solution newer, double t, Structure next) {
-        double[] z = alignedDepth(newer, next);
-        double[] zo = alignedDepth(older, next);
-        double[] vo = older.potential();
-        double[] v = newer.potential();
+    static double[][] alignedGuess(Solution[] from, double[] p, double target, Structure next) {
+        int m = from.length;
+        int newest = m - 1;
+        double[] z = alignedDepth(from[newest], next);
         double[] guess = new double[z.length];
-        int j = 0;
-        for (int i = 0; i < z.length; i++) {
-            double x = z[i];
-            while (j < zo.length - 2 && zo[j + 1] < x) {
-                j++;
+        for (int j = 0; j < m; j++) {
+            double w = 1;
+            for (int k = 0; k < m; k++) {
+                if (k != j) {
+                    w *= (target - p[k]) / (p[j] - p[k]);
+                }
             }
-            double u = Math.max(0, Math.min(1, (x - zo[j]) / (zo[j + 1] - zo[j])));
-            double old = vo[j] + u * (vo[j + 1] - vo[j]);
-            guess[i] = v[i] + t * (v[i] - old);
+            double[] v = from[j].potential();
+            if (j == newest) {
+                for (int i = 0; i < z.length; i++) {
+                    guess[i] += w * v[i];
+                }
+                continue;
+            }
+            double[] zo = alignedDepth(from[j], next);
+            int a = 0;
+            for (int i = 0; i < z.length; i++) {
+                double x = z[i];
+                while (a < zo.length - 2 && zo[a + 1] < x) {
+                    a++;
+                }
+                double u = Math.max(0, Math.min(1, (x - zo[a]) / (zo[a + 1] - zo[a])));
+                guess[i] += w * (v[a] + u * (v[a + 1] - v[a]));
+            }
         }
         return new double[][] {z, guess};
     }

@@ -37,8 +37,9 @@ import org.wurtzkit.structure.Structure;
  * the map has that many points. A worker takes a whole chain: its first point is solved cold and
  * every further point starts from the solution of the one before it in the chain (the last that
  * converged), carried onto the new stack layer by layer (a thicker barrier moves the channel's
- * potential with the channel), or, when the two points before it in the chain lie on the same row,
- * from the linear extrapolation through both, a failed continued solve being retried cold. The
+ * potential with the channel), or, when the points before it in the chain lie on the same row,
+ * from the extrapolation through the last two (linear) or three (quadratic) of them, a failed
+ * continued solve being retried cold. The
  * chains depend only on the axis sizes, never on the thread count or on which worker takes which
  * chain, so a continued map is also the same bit for bit for any thread count. Its values agree with those of cold solves to
  * within the solver's convergence tolerance, not bit for bit. It needs the quantities evaluator
@@ -156,9 +157,9 @@ public final class DesignMap {
             int[] order = serpentine();
             int[] start = chainStarts(n);
             out = ParallelPoints.run(n, order, start, threads, c -> {
-                // the chain's last two converged solutions and their point indices
-                Solution[] last = new Solution[2];
-                int[] at = {-1, -1};
+                // the chain's last converged solutions, newest first, and their point indices
+                Solution[] last = new Solution[Continuation.PREDICTOR_POINTS];
+                int[] at = new int[Continuation.PREDICTOR_POINTS];
                 return i -> {
                     Structure s = structureAt(i);
                     Solution sol;
@@ -171,8 +172,10 @@ public final class DesignMap {
                             sol = solver.solve(s); // continued solve failed: cold, as a map without continuation
                         }
                     }
-                    last[1] = last[0];
-                    at[1] = at[0];
+                    for (int k = last.length - 1; k > 0; k--) {
+                        last[k] = last[k - 1];
+                        at[k] = at[k - 1];
+                    }
                     last[0] = sol;
                     at[0] = i;
                     return q.read(sol);
@@ -189,21 +192,27 @@ public final class DesignMap {
     }
 
     /**
-     * A continued solve of point i: linear through the chain's last two solutions when all three
-     * points lie along one row (the last axis), else from the last solution alone; both carried
-     * onto the point's stack layer by layer.
+     * A continued solve of point i: extrapolated through the chain's last solutions that lie on
+     * the same row (the last axis) as i, up to {@link Continuation#PREDICTOR_POINTS} of them
+     * (quadratic through three, linear through two), else from the last solution alone; all
+     * carried onto the point's stack layer by layer.
      */
     private Solution continued(Structure s, int i, Solution[] last, int[] at) {
-        int row = axes.get(axes.size() - 1).size();
-        if (last[1] != null && at[0] / row == i / row && at[1] / row == i / row) {
-            Axis axis = axes.get(axes.size() - 1);
-            double p = axis.get(i % row);
-            double p1 = axis.get(at[0] % row);
-            double p2 = axis.get(at[1] % row);
-            if (p1 != p2 && (p - p1) * (p1 - p2) > 0) {
-                double[][] guess = Continuation.alignedLinearGuess(last[1], last[0], (p - p1) / (p1 - p2), s);
-                return solver.solve(s, guess[0], guess[1]);
+        Axis axis = axes.get(axes.size() - 1);
+        int row = axis.size();
+        int held = 0;
+        while (held < last.length && last[held] != null && at[held] / row == i / row) {
+            held++;
+        }
+        if (held >= 2) {
+            Solution[] from = new Solution[held];
+            double[] p = new double[held];
+            for (int k = 0; k < held; k++) {
+                from[held - 1 - k] = last[k];
+                p[held - 1 - k] = axis.get(at[k] % row);
             }
+            double[][] guess = Continuation.alignedGuess(from, p, axis.get(i % row), s);
+            return solver.solve(s, guess[0], guess[1]);
         }
         return solver.solve(s, Continuation.alignedDepth(last[0], s), last[0].potential());
     }
