@@ -32,7 +32,8 @@ import org.wurtzkit.structure.Structure;
  * A 200-point design map of an invented demo family around the reference HEMT: Al fraction
  * 0.15 ... 0.35 (10 values) times barrier thickness 10 ... 29 nm (20 values), cold solves, on
  * {@code threads} = 1 and 2 worker threads; the 1-thread map is the baseline of the 2-thread
- * one in the same run. Two forms: the library's {@link DesignMap} ({@code
+ * one in the same run; the same map with continuation between neighbours ({@link #continuedMap})
+ * beside the cold one. Two forms: the library's {@link DesignMap} ({@code
  * org.wurtzkit.solvers.workflow}) and a plain fixed thread pool over the same prebuilt
  * structures (the bare scaling of the solver, without the workflow's bookkeeping).
  */
@@ -56,6 +57,8 @@ public class DesignMapBenchmark {
         public int threads;
 
         DesignMap map;
+        /** The same map with continuation between neighbouring points (issue 18). */
+        DesignMap continued;
         Structure[] structures;
         SelfConsistentSolver solver;
         ExecutorService pool;
@@ -71,6 +74,13 @@ public class DesignMapBenchmark {
                     .solver(solver)
                     .threads(threads)
                     .build();
+            continued = DesignMap.builder(p -> Scenarios.hemt(p[0], p[1], 0.0))
+                    .axis(AL_FRACTION)
+                    .axis(BARRIER)
+                    .solver(solver)
+                    .threads(threads)
+                    .continuation(true)
+                    .build();
             structures = new Structure[AL_FRACTION.size() * BARRIER.size()];
             int k = 0;
             for (int i = 0; i < AL_FRACTION.size(); i++) {
@@ -82,6 +92,18 @@ public class DesignMapBenchmark {
             if (!r.failures().isEmpty()) {
                 throw new IllegalStateException("design map failures: " + r.failures());
             }
+            DesignMapResult rc = continued.run();
+            if (!rc.failures().isEmpty()) {
+                throw new IllegalStateException("continued design map failures: " + rc.failures());
+            }
+            double worst = 0;
+            for (int i = 0; i < r.size(); i++) {
+                worst = Math.max(worst, Math.abs(rc.value(i, 0) / r.value(i, 0) - 1));
+            }
+            if (!(worst <= 1e-6)) {
+                throw new IllegalStateException("continued map differs from the cold map: n_s by " + worst + " relative");
+            }
+            System.out.printf("%n[design map] continued vs cold: largest relative difference in n_s %.2e%n", worst);
             pool = Executors.newFixedThreadPool(threads);
             caller = Executors.newSingleThreadExecutor();
         }
@@ -111,6 +133,24 @@ public class DesignMapBenchmark {
     public DesignMapResult workflowMap(Map m) throws Exception {
         try {
             return m.caller.submit(m.map::run).get();
+        } catch (ExecutionException e) {
+            throw new IllegalStateException(e.getCause());
+        }
+    }
+
+    /**
+     * Library workflow with continuation ({@code DesignMap.Builder.continuation(true)}): chains of
+     * neighbouring points, each point started from its predecessor's solution; called as
+     * {@link #workflowMap}, whose cold map is its baseline in the same run.
+     *
+     * @param m state
+     * @return the map
+     * @throws Exception if the map throws
+     */
+    @Benchmark
+    public DesignMapResult continuedMap(Map m) throws Exception {
+        try {
+            return m.caller.submit(m.continued::run).get();
         } catch (ExecutionException e) {
             throw new IllegalStateException(e.getCause());
         }

@@ -142,8 +142,8 @@ public final class RatioReport {
                 S1, false));
         // 2-s warm-ups: with two 1 s ones the 1-thread map (about 3 maps) was still being compiled; two
         // interleaved forks per side (1, 2, 2, 1), as the map ratio is the one a shared host disturbs
-        jobs.add(new Job("DesignMapBenchmark\\.workflowMap$", "threads", new String[] {"1", "2"}, Mode.AverageTime, 2,
-                3, S2, 3, S1, false, true));
+        jobs.add(new Job("DesignMapBenchmark\\.(workflowMap|continuedMap)$", "threads", new String[] {"1", "2"},
+                Mode.AverageTime, 2, 3, S2, 3, S1, false, true));
         // a 200-sample study against a 200-point map, both on 2 threads (the full run: 10 000 each)
         jobs.add(new Job("ToleranceStudyBenchmark\\.", "samples", new String[] {"200"}, Mode.AverageTime, 1, 3, S2, 4,
                 S1, false));
@@ -490,6 +490,17 @@ public final class RatioReport {
                 f.get("DesignMapBenchmark.workflowMap@threads=2"));
         mapRows(b, "plain pool", f.get("DesignMapBenchmark.executorMap@threads=1"),
                 f.get("DesignMapBenchmark.executorMap@threads=2"));
+        for (String t : new String[] {"1", "2"}) {
+            Figure mapCold = f.get("DesignMapBenchmark.workflowMap@threads=" + t);
+            Figure mapContinued = f.get("DesignMapBenchmark.continuedMap@threads=" + t);
+            if (mapCold != null && mapContinued != null) {
+                Span w = mapCold.wall().over(mapContinued.wall());
+                Span u = mapCold.process().over(mapContinued.process());
+                b.append(String.format(Locale.ROOT, "| (context) 200-point design map, %s thread(s): cold / continued "
+                        + "(DesignMap.Builder.continuation, issue 18) | %s× (%s× – %s×) | %s× (%s× – %s×) (JVM) | — | — |%n",
+                        t, num(w.median()), num(w.min()), num(w.max()), num(u.median()), num(u.min()), num(u.max())));
+            }
+        }
         for (String n : new String[] {"200", "10000"}) {
             studyRow(b, n, f.get("ToleranceStudyBenchmark.toleranceStudy@samples=" + n),
                     f.get("ToleranceStudyBenchmark.designMap@samples=" + n));

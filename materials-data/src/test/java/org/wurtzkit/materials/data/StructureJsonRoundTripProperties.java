@@ -153,7 +153,7 @@ class StructureJsonRoundTripProperties {
     }
 
     static Arbitrary<Insulator> insulators() {
-        Arbitrary<Insulator> inline = Combinators.combine(Arbitraries.strings().ofMaxLength(10), real(1e-3, 1000),
+        Arbitrary<Insulator> inline = Combinators.combine(Arbitraries.strings().ofMaxLength(10), real(1, 1000),
                 real(1e-3, 20), real(-5, 10), Arbitraries.strings().ofMaxLength(40)).as(Insulator::new);
         return Arbitraries.oneOf(Arbitraries.of(Insulators.all()), inline);
     }

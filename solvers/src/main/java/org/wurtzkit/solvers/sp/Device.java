@@ -165,6 +165,7 @@ final class Device {
         org.wurtzkit.strain.Strain lastStrain = null;
         boolean followStrain = s.valenceBandsFollowStrain();
         double lastNv = 0;
+        PointState lastPoint = null;
         int nitrideLayers = s.layerStates().size();
         double gateT = s.gateStackThickness();
         int walk = 0;
@@ -199,7 +200,27 @@ final class Device {
             }
             int li = walk;
             layerOfCell[k] = li;
-            PointState p = s.pointAt(li, mid);
+            LayerState layerState = s.layerStates().get(li);
+            // a uniform layer has one state, its top's (as Structure.pointAt returns): its cells after
+            // the first copy the first one's values instead of resolving them again
+            PointState p = layerState.layer().material().isGraded() ? s.pointAt(li, mid) : layerState.top();
+            if (p == lastPoint && k > 0 && !insulatorCell[k - 1]) {
+                eps[k] = eps[k - 1];
+                px[k] = px[k - 1];
+                ec[k] = ec[k - 1];
+                ev[k] = ev[k - 1];
+                nc[k] = nc[k - 1];
+                nv[k] = nv[k - 1];
+                for (int b = 0; b < 3; b++) {
+                    holeMassZ[b][k] = holeMassZ[b][k - 1];
+                    holeMassXY[b][k] = holeMassXY[b][k - 1];
+                    holeOffset[b][k] = holeOffset[b][k - 1];
+                }
+                massZ[k] = massZ[k - 1];
+                massXY[k] = massXY[k - 1];
+                continue;
+            }
+            lastPoint = p;
             WurtziteMaterial m = p.material();
             eps[k] = m.permittivityStaticAlongC() * Constants.VACUUM_PERMITTIVITY;
             px[k] = -p.alongGrowth();

@@ -68,6 +68,8 @@ final class NewtonPoisson {
     private final double[] delta;
     private final double[] scratch;
     private final double[] backup;
+    /** eps_k / h_k of every cell (F/m^2), computed once: residual and Jacobian read it every step. */
+    private final double[] stiffness;
     private final PointDensities cell = new PointDensities();
 
     /**
@@ -91,6 +93,10 @@ final class NewtonPoisson {
         delta = new double[n];
         scratch = new double[n];
         backup = new double[n];
+        stiffness = new double[n - 1];
+        for (int k = 0; k < n - 1; k++) {
+            stiffness[k] = d.eps[k] / d.h[k];
+        }
     }
 
     /**
@@ -146,7 +152,7 @@ final class NewtonPoisson {
             jacobian();
             if (floating) {
                 for (int i = 0; i < n; i++) {
-                    double stiff = (i > 0 ? d.eps[i - 1] / d.h[i - 1] : 0) + (i < n - 1 ? d.eps[i] / d.h[i] : 0);
+                    double stiff = (i > 0 ? stiffness[i - 1] : 0) + (i < n - 1 ? stiffness[i] : 0);
                     diag[i] += FLOATING_REGULARISATION * stiff;
                 }
             }
@@ -272,10 +278,10 @@ final class NewtonPoisson {
             }
             double f = -q[i];
             if (i > 0) {
-                f += d.eps[i - 1] / d.h[i - 1] * (phi[i] - phi[i - 1]) - d.px[i - 1];
+                f += stiffness[i - 1] * (phi[i] - phi[i - 1]) - d.px[i - 1];
             }
             if (i < n - 1) {
-                f += -d.eps[i] / d.h[i] * (phi[i + 1] - phi[i]) + d.px[i];
+                f += -stiffness[i] * (phi[i + 1] - phi[i]) + d.px[i];
             } else {
                 f += d.px[n - 2]; // zero field: D at the bottom is the bulk polarization
             }
@@ -301,12 +307,12 @@ final class NewtonPoisson {
             }
             double jd = -dq[i];
             if (i > 0) {
-                double c = d.eps[i - 1] / d.h[i - 1];
+                double c = stiffness[i - 1];
                 jd += c;
                 sub[i - 1] = -c;
             }
             if (i < n - 1) {
-                double c = d.eps[i] / d.h[i];
+                double c = stiffness[i];
                 jd += c;
                 sup[i] = -c;
             }

@@ -19,6 +19,13 @@ package org.wurtzkit.solvers.sp;
  * <p>Stateless; every method reads the subbands of {@link QuantumStates} as they stand.
  */
 final class SubbandDensity {
+    /**
+     * Below this e^eta, ln(1 + x) = x - x^2/2 + ... + x^5/5 and x/(1 + x) = x - x^2 + ... + x^5 are
+     * exact to 2e-16 and 1e-15 relative (the first omitted terms, x^6/6 and x^6, over x): cheaper
+     * than a logarithm and a division for the subbands several kT above the Fermi level.
+     */
+    static final double SERIES_LIMIT = 1e-3;
+
     private SubbandDensity() {
     }
 
@@ -49,11 +56,16 @@ final class SubbandDensity {
                 double eta = (fn - qs.energy[w][k]) * invVt + shift;
                 double g = qs.dos[w][k] * psi * psi;
                 double ex = Math.exp(-Math.abs(eta));
-                nq += g * lnOnePlusExp(eta, ex);
                 // d ln(1 + e^eta)/d eta = 1/(1 + e^-eta), from the same exponential
                 if (eta > 0) {
+                    nq += g * (eta + log1p(ex));
                     dnq += g * invVt / (1 + ex);
+                } else if (ex < SERIES_LIMIT) {
+                    // a subband well above the Fermi level (most of them): both by their series
+                    nq += g * ex * (1 - ex * (1.0 / 2 - ex * (1.0 / 3 - ex * (1.0 / 4 - ex * (1.0 / 5)))));
+                    dnq += g * invVt * ex * (1 - ex * (1 - ex * (1 - ex * (1 - ex))));
                 } else {
+                    nq += g * log1p(ex);
                     dnq += g * invVt * ex / (1 + ex);
                 }
             }
@@ -127,6 +139,21 @@ final class SubbandDensity {
 
     /** ln(1 + e^eta) given ex = e^-|eta|. */
     private static double lnOnePlusExp(double eta, double ex) {
-        return eta > 0 ? eta + Math.log1p(ex) : Math.log1p(ex);
+        return eta > 0 ? eta + log1p(ex) : log1p(ex);
+    }
+
+    /**
+     * ln(1 + x) for x in [0, 1] from the natural logarithm: with u = 1 + x rounded,
+     * ln(1 + x) = x ln(u) / (u - 1), exact to a few ulps (D. Goldberg, ACM Comput. Surv. 23, 5
+     * (1991), Theorem 4). Math.log is a compiler intrinsic, while Math.log1p calls the slower
+     * fdlibm routine; this is the innermost operation of every charge evaluation (one per subband
+     * and window node).
+     *
+     * @param x the argument, in [0, 1]
+     * @return ln(1 + x)
+     */
+    static double log1p(double x) {
+        double u = 1 + x;
+        return u == 1 ? x : Math.log(u) * x / (u - 1);
     }
 }

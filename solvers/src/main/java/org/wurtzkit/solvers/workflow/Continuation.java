@@ -1,6 +1,7 @@
 package org.wurtzkit.solvers.workflow;
 
 import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.CancellationException;
 import org.wurtzkit.errors.InvalidParameterException;
@@ -8,6 +9,8 @@ import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.solvers.sp.PotentialPredictor;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
 import org.wurtzkit.solvers.sp.Solution;
+import org.wurtzkit.structure.InsulatorLayer;
+import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.Structure;
 
 /** The continuation loop shared by the sweeps. */
@@ -81,5 +84,104 @@ final class Continuation {
                 lastSuccess = solutions[i];
             }
         }
+    }
+
+    /**
+     * The depths of a neighbouring solution's nodes carried onto another stack of the same layer
+     * sequence, layer by layer: a node a fraction t through layer k of the old stack lands a
+     * fraction t through layer k of the new one (below the last interface, the old offset is
+     * kept). So a guess for a stack with a thicker barrier puts the old channel's potential at the
+     * new channel, not 1 nm off it; with a plain depth interpolation the polarization step of the
+     * guess would sit beside the interface's, and the first outer iteration would have to move it.
+     * A stack with another number of layers gets the old depths unchanged.
+     *
+     * @param previous the neighbouring solution
+     * @param next     the stack to be solved
+     * @return strictly increasing depths (m) at which {@code previous.potential()} is the guess
+     */
+    static double[] alignedDepth(Solution previous, Structure next) {
+        double[] z = previous.depth();
+        double[] from = interfaces(previous.structure());
+        double[] to = interfaces(next);
+        if (from.length != to.length) {
+            return z;
+        }
+        double[] out = new double[z.length];
+        int k = 0;
+        int last = from.length - 1;
+        for (int i = 0; i < z.length; i++) {
+            while (k < last && z[i] > from[k + 1]) {
+                k++;
+            }
+            if (k == last) {
+                out[i] = z[i] + (to[last] - from[last]);
+            } else {
+                out[i] = to[k] + (z[i] - from[k]) * (to[k + 1] - to[k]) / (from[k + 1] - from[k]);
+            }
+        }
+        return out;
+    }
+
+    /**
+     * A guess extrapolated through two or three neighbouring solutions on a line of points, all
+     * carried onto the new stack layer by layer ({@link #alignedDepth}): the Lagrange polynomial
+     * through them in the line's parameter p (linear through two, quadratic through three),
+     * evaluated at the new point's p, at the carried depths of the newest one; the older ones are
+     * interpolated there linearly (and held at their end values beyond their range).
+     *
+     * @param from   the solutions, oldest first, the newest last
+     * @param p      their parameters, distinct
+     * @param target the parameter of the point to be solved
+     * @param next   the stack to be solved
+     * @return {depths (m), potential (V)} of the guess
+     */
+    static double[][] alignedGuess(Solution[] from, double[] p, double target, Structure next) {
+        int m = from.length;
+        int newest = m - 1;
+        double[] z = alignedDepth(from[newest], next);
+        double[] guess = new double[z.length];
+        for (int j = 0; j < m; j++) {
+            double w = 1;
+            for (int k = 0; k < m; k++) {
+                if (k != j) {
+                    w *= (target - p[k]) / (p[j] - p[k]);
+                }
+            }
+            double[] v = from[j].potential();
+            if (j == newest) {
+                for (int i = 0; i < z.length; i++) {
+                    guess[i] += w * v[i];
+                }
+                continue;
+            }
+            double[] zo = alignedDepth(from[j], next);
+            int a = 0;
+            for (int i = 0; i < z.length; i++) {
+                double x = z[i];
+                while (a < zo.length - 2 && zo[a + 1] < x) {
+                    a++;
+                }
+                double u = Math.max(0, Math.min(1, (x - zo[a]) / (zo[a + 1] - zo[a])));
+                guess[i] += w * (v[a] + u * (v[a + 1] - v[a]));
+            }
+        }
+        return new double[][] {z, guess};
+    }
+
+    /** Depths of the top, every interface and the bottom of a stack (m), gate stack first. */
+    private static double[] interfaces(Structure s) {
+        List<InsulatorLayer> gate = s.gateStack();
+        List<Layer> layers = s.layersTopDown();
+        double[] b = new double[gate.size() + layers.size() + 1];
+        int j = 0;
+        for (InsulatorLayer g : gate) {
+            b[j + 1] = b[j] + g.thickness();
+            j++;
+        }
+        for (Layer l : layers) {
+            b[j + 1] = b[j] + l.thickness();
+            j++;
+        }
+        return b;
     }
 }

@@ -11,6 +11,7 @@ import java.util.concurrent.Future;
 import java.util.concurrent.ThreadFactory;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.IntFunction;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.WurtzkitException;
 
@@ -50,6 +51,33 @@ final class ParallelPoints {
      *                               workers are interrupted), or a worker thread was interrupted
      */
     static Outcome[] run(int count, int threads, Task task, ProgressListener progress) {
+        int[] order = new int[count];
+        int[] start = new int[count + 1];
+        for (int i = 0; i < count; i++) {
+            order[i] = i;
+            start[i + 1] = i + 1;
+        }
+        return run(count, order, start, threads, c -> task, progress);
+    }
+
+    /**
+     * Runs chains of points: a worker takes a whole chain and runs its points in the chain's order
+     * with one task made for that chain ({@code taskOfChain}), which may carry state from one
+     * point to the next (e.g. the previous point's solution as the next one's start). Since a
+     * chain's points see only their own chain, the outcome does not depend on the thread count or
+     * on which worker takes which chain, as long as the chains do not depend on the thread count.
+     *
+     * @param count       number of points, &ge; 1
+     * @param order       every point index in [0, count) once, chain after chain
+     * @param chainStart  chain c is {@code order[chainStart[c] .. chainStart[c + 1])}; length = chains + 1
+     * @param threads     worker threads, &ge; 1 (1: run in the calling thread)
+     * @param taskOfChain makes the task of chain c; called once per chain, on the thread that runs it
+     * @param progress    receives (done, total) once per point, serialized
+     * @return one outcome per point
+     * @throws CancellationException as {@link #run(int, int, Task, ProgressListener)}
+     */
+    static Outcome[] run(int count, int[] order, int[] chainStart, int threads, IntFunction<Task> taskOfChain,
+            ProgressListener progress) {
         Outcome[] out = new Outcome[count];
         Object lock = new Object();
         int[] done = {0};
@@ -59,14 +87,26 @@ final class ParallelPoints {
                 progress.progress(done[0], count);
             }
         };
-        int workers = Math.min(threads, count);
+        int chains = chainStart.length - 1;
+        int workers = Math.min(threads, chains);
         if (workers <= 1) {
-            for (int i = 0; i < count; i++) {
-                if (Thread.currentThread().isInterrupted()) {
-                    throw interrupted(i, count, null);
+            for (int c = 0; c < chains; c++) {
+                Task task = null;
+                for (int k = chainStart[c]; k < chainStart[c + 1]; k++) {
+                    int i = order[k];
+                    if (Thread.currentThread().isInterrupted()) {
+                        int finished;
+                        synchronized (lock) {
+                            finished = done[0];
+                        }
+                        throw interrupted(finished, count, null);
+                    }
+                    if (task == null) {
+                        task = taskOfChain.apply(c);
+                    }
+                    out[i] = one(task, i);
+                    tick.run();
                 }
-                out[i] = one(task, i);
-                tick.run();
             }
             return out;
         }
@@ -84,9 +124,9 @@ final class ParallelPoints {
         try {
             for (int w = 0; w < workers; w++) {
                 futures.add(exec.submit(() -> {
-                    // the flag is checked before a point is claimed, so no claimed point is left
-                    // empty; a worker whose flag is set (a task restored it, or shutdownNow) stops
-                    // every worker before its next point, and the map reports the points not done
+                    // the flag is checked before every point; a worker whose flag is set (a task
+                    // restored it, or shutdownNow) stops every worker before its next point, and
+                    // the map reports the points not done
                     while (true) {
                         if (Thread.currentThread().isInterrupted()) {
                             stop.set(true);
@@ -94,12 +134,22 @@ final class ParallelPoints {
                         if (stop.get()) {
                             return;
                         }
-                        int i = next.getAndIncrement();
-                        if (i >= count) {
+                        int c = next.getAndIncrement();
+                        if (c >= chains) {
                             return;
                         }
-                        out[i] = one(task, i);
-                        tick.run();
+                        Task task = taskOfChain.apply(c);
+                        for (int k = chainStart[c]; k < chainStart[c + 1]; k++) {
+                            int i = order[k];
+                            if (Thread.currentThread().isInterrupted()) {
+                                stop.set(true);
+                            }
+                            if (stop.get()) {
+                                return;
+                            }
+                            out[i] = one(task, i);
+                            tick.run();
+                        }
                     }
                 }));
             }

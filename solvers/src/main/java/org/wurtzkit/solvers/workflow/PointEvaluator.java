@@ -5,7 +5,6 @@ import java.util.List;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
-import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.structure.Structure;
 import org.wurtzkit.warnings.Warning;
 
@@ -90,33 +89,7 @@ public interface PointEvaluator {
         for (Quantity x : q) {
             cols.add(Require.nonNull("quantity", x).column());
         }
-        List<Column> columns = List.copyOf(cols);
-        return new PointEvaluator() {
-            @Override
-            public List<Column> columns() {
-                return columns;
-            }
-
-            @Override
-            public double[] evaluate(Structure structure, SelfConsistentSolver solver) {
-                return evaluateWithWarnings(structure, solver).values();
-            }
-
-            @Override
-            public Evaluated evaluateWithWarnings(Structure structure, SelfConsistentSolver solver) {
-                Solution s = solver.solve(structure);
-                double[] out = new double[q.length];
-                for (int i = 0; i < q.length; i++) {
-                    out[i] = q[i].extractor().applyAsDouble(s);
-                }
-                return new Evaluated(out, Warning.union(structure.warnings(), s.warnings()));
-            }
-
-            @Override
-            public String description() {
-                return "one cold solve per point, read: " + columns.stream().map(Column::header).toList();
-            }
-        };
+        return new QuantityEvaluator(q, List.copyOf(cols));
     }
 
     /**
