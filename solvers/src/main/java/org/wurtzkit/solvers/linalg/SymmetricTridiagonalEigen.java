@@ -108,6 +108,10 @@ public final class SymmetricTridiagonalEigen {
     private double[] start;
     /** Per eigenvalue: bracket width at which bisection hands an isolated eigenvalue over (NaN: not yet isolated). */
     private double[] refineWidth;
+    /** Ends of the hints' brackets, their pivots and Sturm counts (two per eigenvalue). */
+    private double[] hintPoints;
+    private double[] hintPivots;
+    private int[] hintCounts;
     /** Per eigenvalue: finished (value and vector) by the twisted-factorisation Rayleigh iteration. */
     private boolean[] fast;
     /**
@@ -512,6 +516,9 @@ public final class SymmetricTridiagonalEigen {
         lowerCount = new int[n];
         start = new double[n];
         refineWidth = new double[n];
+        hintPoints = new double[2 * n];
+        hintPivots = new double[2 * n];
+        hintCounts = new int[2 * n];
         upperCount = new int[n];
         fast = new boolean[n];
         shift = new double[n];
@@ -631,7 +638,8 @@ public final class SymmetricTridiagonalEigen {
         // the pivot floor, so that an exact Weyl bound is never rejected by rounding
         double slack = 8.0 * EPS * tnorm + 4.0 * pivmin;
         double r = hintRadius * scale + slack;
-        double[] points = fa;
+        double[] points = hintPoints;
+        int[] counts = hintCounts;
         int np = 0;
         for (int t = 0; t < h; t++) {
             double c = hints[t] * scale;
@@ -639,14 +647,14 @@ public final class SymmetricTridiagonalEigen {
             points[np++] = Math.max(c - r, gl);
             points[np++] = Math.min(c + r, hiInit);
         }
-        sturmCounts(n, points, fb, countWork, np);
+        sturmCounts(n, points, hintPivots, counts, np);
         for (int t = 0; t < h; t++) {
-            if (!(countWork[2 * t] <= t && countWork[2 * t + 1] > t)) {
+            if (!(counts[2 * t] <= t && counts[2 * t + 1] > t)) {
                 rejectedHints++;
                 start[t] = Double.NaN;
             }
         }
-        narrow(m, points, countWork, np);
+        narrow(m, points, counts, np);
     }
 
     /**
