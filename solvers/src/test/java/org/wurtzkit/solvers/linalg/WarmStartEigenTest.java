@@ -1,3 +1,5 @@
+// SPDX-License-Identifier: Apache-2.0
+// Copyright 2026 The wurtzkit developers
 package org.wurtzkit.solvers.linalg;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
