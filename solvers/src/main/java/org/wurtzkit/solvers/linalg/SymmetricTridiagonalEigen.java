@@ -23,7 +23,16 @@ import org.wurtzkit.errors.Require;
  * is bisected until its bracket is no wider than {@code 2 eps |lambda| + eps ||T||} (or cannot
  * be split in floating point).
  *
- * <p><b>Eigenvectors</b> are computed by inverse iteration with the shifted matrix
+ * <p><b>Fast path</b> (with eigenvectors, {@code n >= 32}): bisection stops once an eigenvalue is
+ * alone in its bracket (Sturm counts t and t+1 at its ends) and the bracket has shrunk by 2^-6;
+ * the eigenvalue and its vector are then found together by Rayleigh-quotient iteration on twisted
+ * factorisations, all such eigenvalues interleaved in the same sweeps, safeguarded by the
+ * bracket and accepted only after an explicit residual check. Vectors of eigenvalues closer than
+ * {@link #CLUSTER_RELATIVE_GAP} {@code ||T||} are orthogonalised against each other. Whatever
+ * this path does not finish takes the path described here and below. The warm-started overloads
+ * start the search from Weyl brackets around earlier eigenvalues, each checked by Sturm counts.
+ *
+ * <p><b>Eigenvectors</b> (otherwise) are computed by inverse iteration with the shifted matrix
  * {@code T - sigma I}, factorised once per eigenvalue by Gaussian elimination with partial
  * pivoting (pivots below {@code eps ||T||} are perturbed to that size), from a pseudo-random
  * start vector (Golub &amp; Van Loan, <i>Matrix Computations</i>, 4th ed., Johns Hopkins 2013,
