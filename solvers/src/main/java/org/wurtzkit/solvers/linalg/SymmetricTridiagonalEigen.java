@@ -23,7 +23,16 @@ import org.wurtzkit.errors.Require;
  * is bisected until its bracket is no wider than {@code 2 eps |lambda| + eps ||T||} (or cannot
  * be split in floating point).
  *
- * <p><b>Eigenvectors</b> are computed by inverse iteration with the shifted matrix
+ * <p><b>Fast path</b> (with eigenvectors, {@code n >= 32}): bisection stops once an eigenvalue is
+ * alone in its bracket (Sturm counts t and t+1 at its ends) and the bracket has shrunk by 2^-6;
+ * the eigenvalue and its vector are then found together by Rayleigh-quotient iteration on twisted
+ * factorisations, all such eigenvalues interleaved in the same sweeps, safeguarded by the
+ * bracket and accepted only after an explicit residual check. Vectors of eigenvalues closer than
+ * {@link #CLUSTER_RELATIVE_GAP} {@code ||T||} are orthogonalised against each other. Whatever
+ * this path does not finish takes the path described here and below. The warm-started overloads
+ * start the search from Weyl brackets around earlier eigenvalues, each checked by Sturm counts.
+ *
+ * <p><b>Eigenvectors</b> (otherwise) are computed by inverse iteration with the shifted matrix
  * {@code T - sigma I}, factorised once per eigenvalue by Gaussian elimination with partial
  * pivoting (pivots below {@code eps ||T||} are perturbed to that size), from a pseudo-random
  * start vector (Golub &amp; Van Loan, <i>Matrix Computations</i>, 4th ed., Johns Hopkins 2013,
@@ -62,13 +71,29 @@ public final class SymmetricTridiagonalEigen {
     private static final int MAX_INVERSE_ITERATIONS = 12;
     /** Iterations done after the residual test first passes (dstein does two [from memory]). */
     private static final int EXTRA_ITERATIONS = 1;
-    /** Relative bracket width at which a well-separated eigenvalue leaves bisection. */
-    private static final double COARSE_RELATIVE_TOLERANCE = 1e-9;
+    /**
+     * Relative bracket width below which bisection stops trying to separate eigenvalues that
+     * share a bracket (they then take the full-bisection path; no count is wasted, since that
+     * path starts from the same brackets).
+     */
+    private static final double ISOLATION_RELATIVE_WIDTH = 1e-9;
+    /**
+     * Factor by which an isolated bracket is narrowed by bisection before the Rayleigh iteration
+     * takes over: Sturm counts of several brackets run interleaved at about the cost of one,
+     * while a Rayleigh round costs two dependent sweeps and a vector (chosen by measurement on
+     * the benchmark's channel well: 2^-6 left the fewest sweeps in all).
+     */
+    private static final double REFINE_FACTOR = 0x1.0p-6;
     /** Below this order full bisection is cheap enough to use always. */
-    private static final int COARSE_MIN_SIZE = 32;
-    /** A coarse bracket counts as separated when its neighbours are this many coarse widths away. */
-    private static final double COARSE_SEPARATION = 1e3;
+    private static final int RAYLEIGH_MIN_SIZE = 32;
     private static final long SEED = 0x2545F4914F6CDD1DL;
+    /** Cap on the twisted Rayleigh iteration; past it the eigenvalue takes the bisection path. */
+    private static final int MAX_RAYLEIGH_ITERATIONS = 40;
+    /**
+     * Entries of a twisted-factorisation vector below this (relative to its twist entry 1) are
+     * zero: squares of smaller numbers would be subnormal, whose arithmetic is many times slower.
+     */
+    private static final double NEGLIGIBLE = 0x1.0p-400;
 
     private int capacity = -1;
     private double[] d;
@@ -76,8 +101,6 @@ public final class SymmetricTridiagonalEigen {
     private double[] e2;
     private double[] lower;
     private double[] upper;
-    /** Per eigenvalue: bisected only to the coarse tolerance, to be finished by a Rayleigh quotient. */
-    private boolean[] coarse;
     private double[] scaledValues;
     /** Reciprocals of U's diagonal after factorShifted. */
     private double[] fa;
@@ -87,6 +110,38 @@ public final class SymmetricTridiagonalEigen {
     private boolean[] swapped;
     private double[] work;
     private int[] countWork;
+    /** Sturm counts at lower[t] and upper[t]: the bracket holds only eigenvalue t when they are t and t+1. */
+    private int[] lowerCount;
+    private int[] upperCount;
+    /** Start shift of the Rayleigh iteration per eigenvalue (scaled hint), NaN for the midpoint. */
+    private double[] start;
+    /** Per eigenvalue: bracket width at which bisection hands an isolated eigenvalue over (NaN: not yet isolated). */
+    private double[] refineWidth;
+    /** Ends of the hints' brackets, their pivots and Sturm counts (two per eigenvalue). */
+    private double[] hintPoints;
+    private double[] hintPivots;
+    private int[] hintCounts;
+    /** Per eigenvalue: finished (value and vector) by the twisted-factorisation Rayleigh iteration. */
+    private boolean[] fast;
+    /**
+     * Forward pivots D+ of the twisted factorisations and the ratios e_i/D-_{i+1},
+     * entry i of active eigenvalue a at i * (number active) + a; grown on demand to N times the
+     * number of eigenvalues iterated together.
+     */
+    private double[] plusPivot;
+    private double[] minusRatio;
+    /** Per eigenvalue: the bracket that isolated it when the Rayleigh iteration started. */
+    private double[] isolatedLower;
+    private double[] isolatedUpper;
+    /** Per eigenvalue: current shift and last residual of the Rayleigh iteration. */
+    private double[] shift;
+    private double[] previousResidual;
+    /** Per active eigenvalue: running pivot, gamma, Sturm count, twist index, eigenvalue index. */
+    private double[] rayleighQ;
+    private double[] rayleighGamma;
+    private int[] rayleighCount;
+    private int[] rayleighTwist;
+    private int[] activeIndex;
 
     private double scale;
     private double pivmin;
@@ -97,6 +152,7 @@ public final class SymmetricTridiagonalEigen {
     private double gu;
     private double lastPivotMagnitude;
     private SplittableRandom rng;
+    private int rejectedHints;
 
     /** Creates a solver with empty work space (it grows on first use). */
     public SymmetricTridiagonalEigen() {
@@ -212,8 +268,8 @@ public final class SymmetricTridiagonalEigen {
         Require.inRange("k", k, 1, n);
         validateOutputs(valuesOut, vectorsOut, k, n);
         prepare(diag, off, n);
-        bisect(n, k, gu, vectorsOut != null);
-        finish(n, k, valuesOut, vectorsOut);
+        initBrackets(n, k, gu, n, null, 0, 0.0);
+        solvePrepared(n, k, valuesOut, vectorsOut);
         return k;
     }
 
@@ -237,20 +293,123 @@ public final class SymmetricTridiagonalEigen {
         Require.notNaN("bound", bound);
         Require.inRange("kMax", kMax, 1, n);
         validateOutputs(valuesOut, vectorsOut, kMax, n);
+        return belowPrepared(diag, off, n, bound, kMax, valuesOut, vectorsOut, null, 0, 0.0);
+    }
+
+    /**
+     * Warm-started form of {@link #lowestInto(double[], double[], int, double[], double[][])}
+     * for a matrix that differs from one solved before by a change of its diagonal of at most
+     * {@code hintRadius} in every entry (a changed potential). By Weyl's inequality each
+     * eigenvalue then moved by at most {@code hintRadius} (R. A. Horn and C. R. Johnson,
+     * <i>Matrix Analysis</i>, 2nd ed., Cambridge 2013, Cor. 4.3.15 [from memory]), so
+     * {@code [hints[t] - hintRadius, hints[t] + hintRadius]} brackets eigenvalue {@code t}. Every
+     * such bracket is verified by two Sturm counts before it is used: a bracket that does not hold
+     * (a wrong hint or too small a radius) is only a pair of counted points, which narrow the
+     * cold brackets as any bisection point does, so the result never depends on the hint being
+     * right; {@link #rejectedHints()} tells how many did not hold. The eigenpairs agree with the
+     * cold call's to round-off (the search path differs, so not bit for bit); for fixed inputs
+     * the result is deterministic.
+     *
+     * @param diag       diagonal, length {@code n >= 1}, finite
+     * @param off        off-diagonal, length {@code n-1}, finite
+     * @param k          number of eigenpairs, in {@code [1, n]}
+     * @param valuesOut  output, length at least {@code k}
+     * @param vectorsOut output, at least {@code k} rows of length at least {@code n}, or null
+     * @param hints      earlier eigenvalues, ascending, at least {@code hintCount} of them
+     * @param hintCount  number of hints used, in {@code [0, hints.length]}; hints beyond
+     *                   {@code k} are ignored
+     * @param hintRadius bound on the move of every eigenvalue since the hints (for a diagonal
+     *                   change, its largest magnitude), finite and {@code >= 0}
+     * @return {@code k}
+     * @throws IllegalArgumentException on invalid arguments
+     * @throws ArithmeticException      if inverse iteration fails to converge
+     */
+    public int lowestInto(double[] diag, double[] off, int k, double[] valuesOut, double[][] vectorsOut,
+                          double[] hints, int hintCount, double hintRadius) {
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.inRange("k", k, 1, n);
+        validateOutputs(valuesOut, vectorsOut, k, n);
+        validateHints(hints, hintCount, hintRadius);
         prepare(diag, off, n);
-        double s = scale;
-        double bs = bound * s;
+        initBrackets(n, k, gu, n, hints, hintCount, hintRadius);
+        solvePrepared(n, k, valuesOut, vectorsOut);
+        return k;
+    }
+
+    /**
+     * Warm-started form of {@link #belowInto(double[], double[], double, int, double[], double[][])};
+     * the hints are used and checked as in
+     * {@link #lowestInto(double[], double[], int, double[], double[][], double[], int, double)}.
+     *
+     * @param diag       diagonal, length {@code n >= 1}, finite
+     * @param off        off-diagonal, length {@code n-1}, finite
+     * @param bound      upper bound (not NaN; {@code +Infinity} means no bound)
+     * @param kMax       largest number of eigenpairs, in {@code [1, n]}
+     * @param valuesOut  output, length at least {@code kMax}
+     * @param vectorsOut output, at least {@code kMax} rows of length at least {@code n}, or null
+     * @param hints      earlier eigenvalues, ascending, at least {@code hintCount} of them
+     * @param hintCount  number of hints used, in {@code [0, hints.length]}
+     * @param hintRadius bound on the move of every eigenvalue since the hints, finite, {@code >= 0}
+     * @return the number {@code m = min(countBelow(bound), kMax)} of eigenpairs written
+     * @throws IllegalArgumentException on invalid arguments
+     * @throws ArithmeticException      if inverse iteration fails to converge
+     */
+    public int belowInto(double[] diag, double[] off, double bound, int kMax, double[] valuesOut,
+                         double[][] vectorsOut, double[] hints, int hintCount, double hintRadius) {
+        int n = SymmetricTridiagonalMatrix.validate(diag, off);
+        Require.notNaN("bound", bound);
+        Require.inRange("kMax", kMax, 1, n);
+        validateOutputs(valuesOut, vectorsOut, kMax, n);
+        validateHints(hints, hintCount, hintRadius);
+        return belowPrepared(diag, off, n, bound, kMax, valuesOut, vectorsOut, hints, hintCount, hintRadius);
+    }
+
+    /**
+     * Number of hints of the last warm-started call whose Weyl bracket did not hold (0 after a
+     * cold call).
+     *
+     * @return count in {@code [0, hintCount]}
+     */
+    public int rejectedHints() {
+        return rejectedHints;
+    }
+
+    private int belowPrepared(double[] diag, double[] off, int n, double bound, int kMax, double[] valuesOut,
+                              double[][] vectorsOut, double[] hints, int hintCount, double hintRadius) {
+        prepare(diag, off, n);
+        rejectedHints = 0;
+        double bs = bound * scale;
         if (!(bs > gl)) {
             return 0;
         }
         double hi = Math.min(bs, gu);
-        int m = Math.min(sturmCount(n, hi), kMax);
+        int hiCount = sturmCount(n, hi);
+        int m = Math.min(hiCount, kMax);
         if (m == 0) {
             return 0;
         }
-        bisect(n, m, hi, vectorsOut != null);
-        finish(n, m, valuesOut, vectorsOut);
+        initBrackets(n, m, hi, hiCount, hints, hintCount, hintRadius);
+        solvePrepared(n, m, valuesOut, vectorsOut);
         return m;
+    }
+
+    private static void validateHints(double[] hints, int hintCount, double hintRadius) {
+        if (hints == null) {
+            throw Require.invalid("hints", "null", "(a non-null array)");
+        }
+        Require.inRange("hintCount", hintCount, 0, hints.length);
+        if (!(hintRadius >= 0.0 && hintRadius < Double.POSITIVE_INFINITY)) {
+            throw Require.invalid("hintRadius", hintRadius, "[0, +Infinity) (finite)");
+        }
+        for (int t = 0; t < hintCount; t++) {
+            double h = hints[t];
+            if (!(h - h == 0.0)) {
+                throw Require.invalid("hints[" + t + "]", h, "(-Infinity, +Infinity) (finite values only)");
+            }
+            if (t > 0 && h < hints[t - 1]) {
+                throw Require.invalid("hints[" + t + "]", h, "[" + hints[t - 1] + ", +Infinity) (ascending)");
+            }
+        }
     }
 
     /**
@@ -355,7 +514,6 @@ public final class SymmetricTridiagonalEigen {
         e2 = new double[n];
         lower = new double[n];
         upper = new double[n];
-        coarse = new boolean[n];
         scaledValues = new double[n];
         fa = new double[n];
         fb = new double[n];
@@ -364,6 +522,23 @@ public final class SymmetricTridiagonalEigen {
         swapped = new boolean[n];
         work = new double[n];
         countWork = new int[n];
+        lowerCount = new int[n];
+        start = new double[n];
+        refineWidth = new double[n];
+        hintPoints = new double[2 * n];
+        hintPivots = new double[2 * n];
+        hintCounts = new int[2 * n];
+        upperCount = new int[n];
+        fast = new boolean[n];
+        shift = new double[n];
+        isolatedLower = new double[n];
+        isolatedUpper = new double[n];
+        previousResidual = new double[n];
+        rayleighQ = new double[n];
+        rayleighGamma = new double[n];
+        rayleighCount = new int[n];
+        rayleighTwist = new int[n];
+        activeIndex = new int[n];
     }
 
     /** Copies and scales the matrix; computes pivmin and a safe Gershgorin bracket. */
@@ -396,13 +571,31 @@ public final class SymmetricTridiagonalEigen {
         double widen = 2.0 * EPS * tnorm * n + 2.0 * pivmin;
         lo -= widen;
         hi += widen;
-        while (sturmCount(n, lo) != 0) {
-            widen *= 2.0;
-            lo -= widen;
+        // both ends in one interleaved sweep (the usual case: both hold at once)
+        boolean lowHolds;
+        boolean highHolds;
+        if (n >= 2) {
+            double[] ends = fa;
+            ends[0] = lo;
+            ends[1] = hi;
+            sturmCounts(n, ends, fb, countWork, 2);
+            lowHolds = countWork[0] == 0;
+            highHolds = countWork[1] == n;
+        } else {
+            lowHolds = sturmCount(n, lo) == 0;
+            highHolds = sturmCount(n, hi) == n;
         }
-        while (sturmCount(n, hi) != n) {
-            widen *= 2.0;
-            hi += widen;
+        if (!lowHolds) {
+            do {
+                widen *= 2.0;
+                lo -= widen;
+            } while (sturmCount(n, lo) != 0);
+        }
+        if (!highHolds) {
+            do {
+                widen *= 2.0;
+                hi += widen;
+            } while (sturmCount(n, hi) != n);
         }
         gl = lo;
         gu = hi;
@@ -431,73 +624,335 @@ public final class SymmetricTridiagonalEigen {
     // ------------------------------------------------------------------ bisection
 
     /**
-     * Bisection on Sturm counts for the m lowest eigenvalues below hiInit (scaled), into
-     * scaledValues. All unfinished eigenvalues are bisected simultaneously: one sweep over the
-     * matrix evaluates the Sturm counts at the midpoints of all distinct open brackets, as LAPACK's
-     * dlaebz does, so the k independent recurrences interleave, and every count narrows the
-     * brackets of all wanted eigenvalues. When eigenvectors follow, an eigenvalue
-     * whose bracket is well separated from its neighbours is bisected only to
-     * {@link #COARSE_RELATIVE_TOLERANCE} of the norm and finished by the Rayleigh quotient of its
-     * inverse-iteration vector, whose error is of the order of the squared residual over the gap
-     * (B. N. Parlett, The Symmetric Eigenvalue Problem, SIAM 1998, sec. 4.6; from memory). Clustered
-     * eigenvalues are bisected to full precision.
+     * Sets the brackets of the m lowest eigenvalues to [gl, hiInit] (Sturm counts 0 and hiCount)
+     * and, with hints, narrows them by the counts at the ends of the hints' Weyl brackets.
      */
-    private void bisect(int n, int m, double hiInit, boolean vectorsFollow) {
+    private void initBrackets(int n, int m, double hiInit, int hiCount, double[] hints, int hintCount,
+                              double hintRadius) {
+        rejectedHints = 0;
+        for (int t = 0; t < m; t++) {
+            lower[t] = gl;
+            upper[t] = hiInit;
+            lowerCount[t] = 0;
+            upperCount[t] = hiCount;
+            start[t] = Double.NaN;
+            refineWidth[t] = Double.NaN;
+            fast[t] = false;
+        }
+        int h = hints == null ? 0 : Math.min(hintCount, m);
+        if (h == 0 || n == 1 || zeroMatrix) {
+            return;
+        }
+        // the radius is widened by round-off of the shifted diagonal (a few eps ||T||) and
+        // the pivot floor, so that an exact Weyl bound is never rejected by rounding
+        double slack = 8.0 * EPS * tnorm + 4.0 * pivmin;
+        double r = hintRadius * scale + slack;
+        double[] points = hintPoints;
+        int[] counts = hintCounts;
+        int np = 0;
+        for (int t = 0; t < h; t++) {
+            double c = hints[t] * scale;
+            start[t] = c;
+            points[np++] = Math.max(c - r, gl);
+            points[np++] = Math.min(c + r, hiInit);
+        }
+        sturmCounts(n, points, hintPivots, counts, np);
+        for (int t = 0; t < h; t++) {
+            if (!(counts[2 * t] <= t && counts[2 * t + 1] > t)) {
+                rejectedHints++;
+                start[t] = Double.NaN;
+            }
+        }
+        narrow(m, points, counts, np);
+    }
+
+    /**
+     * Finds the m lowest eigenvalues (scaled) from the brackets of initBrackets, with vectors
+     * unless vectorsOut is null, and writes them unscaled.
+     *
+     * <p>With vectors (and n &ge; {@link #RAYLEIGH_MIN_SIZE}), all brackets are first bisected
+     * simultaneously until each holds one eigenvalue (Sturm counts t and t+1 at its ends). An
+     * isolated eigenvalue is then finished by Rayleigh-quotient iteration on twisted
+     * factorisations ({@link #twistedRayleigh}), which yields its vector at the same time.
+     * Eigenvalues that stay in a shared bracket, whose iteration fails, or that end closer than
+     * {@link #CLUSTER_RELATIVE_GAP} {@code ||T||} to a wanted neighbour, are bisected to full
+     * precision and get their vectors by inverse iteration with re-orthogonalisation as before.
+     */
+    private void solvePrepared(int n, int m, double[] valuesOut, double[][] vectorsOut) {
         if (n == 1 || zeroMatrix) {
             // exact: a 1 x 1 matrix is its eigenvalue; an all-zero matrix has only the eigenvalue 0,
             // which bisection to the fallback norm 1 would place only within 1e-16 of it
             for (int t = 0; t < m; t++) {
                 scaledValues[t] = n == 1 ? d[0] : 0.0;
-                coarse[t] = false;
             }
+            finish(n, m, valuesOut, vectorsOut);
             return;
         }
-        for (int t = 0; t < m; t++) {
-            lower[t] = gl;
-            upper[t] = hiInit;
-            coarse[t] = vectorsFollow && n >= COARSE_MIN_SIZE;
+        if (vectorsOut != null && n >= RAYLEIGH_MIN_SIZE) {
+            bisectPass(n, m, ISOLATION_RELATIVE_WIDTH * tnorm, true);
+            twistedRayleighAll(n, m, vectorsOut);
         }
-        double absTol = EPS * tnorm;
-        if (vectorsFollow && n >= COARSE_MIN_SIZE) {
-            double coarseTol = COARSE_RELATIVE_TOLERANCE * tnorm;
-            bisectPass(n, m, coarseTol);
-            double guard = COARSE_SEPARATION * coarseTol;
-            for (int t = 0; t < m; t++) {
-                boolean isolatedBelow = t == 0 || lower[t] - upper[t - 1] > guard; // nothing lies below the lowest
-                boolean isolatedAbove = t == m - 1 ? true : lower[t + 1] - upper[t] > guard;
-                if (t == m - 1 && m < n) {
-                    // the next eigenvalue (not wanted) may sit just above: check its Sturm count
-                    isolatedAbove = sturmCount(n, upper[t] + guard) == t + 1;
-                }
-                coarse[t] = isolatedBelow && isolatedAbove;
-            }
-        }
-        bisectPass(n, m, absTol);
+        bisectPass(n, m, EPS * tnorm, false);
         for (int j = 0; j < m; j++) {
+            if (fast[j]) {
+                continue;
+            }
             double value = 0.5 * (lower[j] + upper[j]);
             if (j > 0 && value < scaledValues[j - 1]) {
                 value = scaledValues[j - 1]; // keep the order inside the bisection tolerance
             }
             scaledValues[j] = value;
         }
+        finish(n, m, valuesOut, vectorsOut);
     }
 
-    /** Bisects every bracket not marked coarse (all of them while tol is coarse) down to tol. */
-    private void bisectPass(int n, int m, double tol) {
+    /**
+     * Rayleigh-quotient iteration on twisted factorisations {@code T - sigma I = N_r Delta_r N_r^T}
+     * for every eigenvalue alone in its bracket (I. S. Dhillon and B. N. Parlett, "Orthogonal
+     * eigenvectors and relative gaps", SIAM J. Matrix Anal. Appl. 25, 858 (2004); B. N. Parlett
+     * and I. S. Dhillon, "Fernando's solution to Wilkinson's problem: an application of double
+     * factorization", Linear Algebra Appl. 267, 247 (1997) [both from memory]). One forward sweep
+     * gives the pivots D+ of {@code L D+ L^T} (the Sturm pivots, so their signs count the
+     * eigenvalues below sigma and narrow the bracket), one backward sweep those of
+     * {@code U D- U^T}; the twist index r minimises {@code |gamma_r| = |D+_r - e_r^2 / D-_{r+1}|},
+     * and the solution of {@code N_r Delta_r N_r^T z = gamma_r e_r}, {@code z_r = 1}, takes one
+     * multiplication per entry. Then {@code ||(T - sigma) z|| = |gamma_r|} and the Rayleigh
+     * quotient of z is {@code sigma + gamma_r / ||z||^2}, the next shift (cubic convergence); a
+     * shift outside the bracket is replaced by the bracket's midpoint. An eigenvalue is done when
+     * the residual {@code |gamma_r| / ||z||} has reached the inverse-iteration tolerance and the
+     * correction has settled at round-off; it is accepted only if the interval of half-width the
+     * residual around its value (which holds an eigenvalue) lies inside the isolating bracket (or
+     * Sturm counts say it holds eigenvalue t), so that it cannot belong to a neighbour.
+     *
+     * <p>The eigenvalues iterate in rounds, and within a round the forward and backward sweeps of
+     * all of them run interleaved (one loop over the matrix, the eigenvalues inner), so that the
+     * divisions of independent recurrences overlap instead of each waiting for the previous one.
+     * An eigenvalue that has not converged after {@link #MAX_RAYLEIGH_ITERATIONS} rounds stays
+     * unfinished (fast false) for the bisection path.
+     */
+    private void twistedRayleighAll(int n, int m, double[][] vectors) {
+        int na = 0;
+        for (int t = 0; t < m; t++) {
+            if (lowerCount[t] == t && upperCount[t] == t + 1) {
+                activeIndex[na++] = t;
+                double sigma = start[t];
+                shift[t] = sigma > lower[t] && sigma < upper[t] ? sigma : 0.5 * (lower[t] + upper[t]);
+                isolatedLower[t] = lower[t];
+                isolatedUpper[t] = upper[t];
+                previousResidual[t] = Double.POSITIVE_INFINITY;
+            }
+        }
+        ensureRayleighCapacity(n, na);
+        double resTol = 16.0 * EPS * tnorm * Math.max(1.0, Math.sqrt(n));
+        double roundoff = 2.0 * EPS * tnorm;
+        double pm = pivmin;
+        double[] dp = plusPivot;
+        double[] um = minusRatio;
+        double[] q = rayleighQ;
+        double[] g = rayleighGamma;
+        int[] cnt = rayleighCount;
+        int[] tw = rayleighTwist;
+        int[] act = activeIndex;
+        for (int round = 0; round < MAX_RAYLEIGH_ITERATIONS && na > 0; round++) {
+            double d0 = d[0];
+            for (int a = 0; a < na; a++) {
+                double qa = d0 - shift[act[a]];
+                if (Math.abs(qa) <= pm) {
+                    qa = -pm;
+                }
+                q[a] = qa;
+                dp[a] = qa;
+                cnt[a] = qa < 0.0 ? 1 : 0;
+            }
+            for (int i = 0; i < n - 1; i++) {
+                double ei = e[i];
+                double di = d[i + 1];
+                int next = i * na + na;
+                for (int a = 0; a < na; a++) {
+                    double qa = di - shift[act[a]] - ei / q[a] * ei;
+                    if (Math.abs(qa) <= pm) {
+                        qa = -pm;
+                    }
+                    if (qa < 0.0) {
+                        cnt[a]++;
+                    }
+                    q[a] = qa;
+                    dp[next + a] = qa;
+                }
+            }
+            double dl = d[n - 1];
+            int last = (n - 1) * na;
+            for (int a = 0; a < na; a++) {
+                int t = act[a];
+                double sigma = shift[t];
+                if (cnt[a] <= t) {
+                    if (sigma > lower[t]) {
+                        lower[t] = sigma;
+                        lowerCount[t] = cnt[a];
+                    }
+                } else if (sigma < upper[t]) {
+                    upper[t] = sigma;
+                    upperCount[t] = cnt[a];
+                }
+                double r = dl - sigma;
+                if (Math.abs(r) <= pm) {
+                    r = -pm;
+                }
+                q[a] = r;
+                g[a] = dp[last + a];
+                tw[a] = n - 1;
+            }
+            for (int i = n - 2; i >= 0; i--) {
+                double ei = e[i];
+                double di = d[i];
+                int base = i * na;
+                for (int a = 0; a < na; a++) {
+                    double u = ei / q[a];
+                    um[base + a] = u;
+                    double ue = u * ei;
+                    double gi = dp[base + a] - ue;
+                    if (Math.abs(gi) < Math.abs(g[a])) {
+                        g[a] = gi;
+                        tw[a] = i;
+                    }
+                    double r = di - shift[act[a]] - ue;
+                    if (Math.abs(r) <= pm) {
+                        r = -pm;
+                    }
+                    q[a] = r;
+                }
+            }
+            int kept = 0;
+            for (int a = 0; a < na; a++) {
+                int t = act[a];
+                int status = twistedStep(n, na, a, t, tw[a], g[a], vectors[t], resTol, roundoff);
+                if (status == 0) {
+                    act[kept++] = t;
+                } else if (status > 0) {
+                    fast[t] = true;
+                }
+            }
+            na = kept;
+        }
+    }
+
+    /**
+     * The vector of one twisted factorisation and what follows from it for eigenvalue t:
+     * 1 = converged (value and unit vector stored), -1 = given up, 0 = next shift set.
+     */
+    private int twistedStep(int n, int na, int a, int t, int twist, double gamma, double[] v,
+                            double resTol, double roundoff) {
+        double[] dp = plusPivot;
+        double[] um = minusRatio;
+        // z decays through barriers; entries below NEGLIGIBLE (relative to z_r = 1, far below any
+        // tolerance) are set to zero, with the rest of that side, so that no arithmetic reaches
+        // the slow subnormal range
+        v[twist] = 1.0;
+        double sum = 1.0;
+        double z = 1.0;
+        int i = twist - 1;
+        for (; i >= 0; i--) {
+            z = -(e[i] / dp[i * na + a]) * z; // e_i / D+_i: independent of z, so it pipelines
+            if (Math.abs(z) < NEGLIGIBLE) {
+                break;
+            }
+            v[i] = z;
+            sum += z * z;
+        }
+        for (; i >= 0; i--) {
+            v[i] = 0.0;
+        }
+        z = 1.0;
+        i = twist + 1;
+        for (; i < n; i++) {
+            z = -um[(i - 1) * na + a] * z;
+            if (Math.abs(z) < NEGLIGIBLE) {
+                break;
+            }
+            v[i] = z;
+            sum += z * z;
+        }
+        for (; i < n; i++) {
+            v[i] = 0.0;
+        }
+        if (!(sum < Double.POSITIVE_INFINITY)) {
+            return -1;
+        }
+        double sigma = shift[t];
+        double norm = Math.sqrt(sum);
+        double rho = Math.abs(gamma) / norm;
+        double next = sigma + gamma / sum;
+        boolean settled = Math.abs(gamma / sum) <= 4.0 * roundoff || rho >= 0.5 * previousResidual[t];
+        double lo = lower[t];
+        double hi = upper[t];
+        if (rho <= resTol && settled) {
+            double margin = rho + roundoff;
+            // the isolating bracket (before the iteration narrowed it towards the value)
+            boolean inside = next - margin >= isolatedLower[t] && next + margin <= isolatedUpper[t];
+            if (!inside && !(sturmCount(n, next - margin) == t && sturmCount(n, next + margin) == t + 1)) {
+                return -1;
+            }
+            double inv = 1.0 / norm;
+            for (int c = 0; c < n; c++) {
+                v[c] *= inv;
+            }
+            // the residual from gamma assumes exact recurrences; the explicit one also covers
+            // entries set to zero and pivots replaced by the pivot floor
+            if (!(residual(n, v, next) <= resTol)) {
+                return -1;
+            }
+            fixSign(v, n);
+            scaledValues[t] = next;
+            return 1;
+        }
+        previousResidual[t] = rho;
+        double s = next > lo && next < hi ? next : 0.5 * (lo + hi);
+        if (!(s > lo && s < hi)) {
+            return -1; // bracket exhausted in floating point without convergence
+        }
+        shift[t] = s;
+        return 0;
+    }
+
+    private void ensureRayleighCapacity(int n, int na) {
+        long need = (long) n * Math.max(na, 1);
+        if (need > Integer.MAX_VALUE - 8) {
+            throw new IllegalStateException("work space of " + need + " entries is too large");
+        }
+        if (plusPivot == null || plusPivot.length < need) {
+            plusPivot = new double[(int) need];
+            minusRatio = new double[(int) need];
+        }
+    }
+
+    /**
+     * Bisects the brackets of the eigenvalues not yet finished: down to tol, or, when
+     * isolateOnly, until each holds one eigenvalue (brackets narrower than tol holding several are
+     * left as they are).
+     */
+    private void bisectPass(int n, int m, double tol, boolean isolateOnly) {
         double[] points = fa; // reuse factorisation arrays as scratch: not needed until later
         double[] pivots = fb;
         int[] counts = countWork;
-        boolean full = tol <= EPS * tnorm;
         while (true) {
             int np = 0;
             double lastLo = Double.NaN;
             double lastHi = Double.NaN;
             for (int t = 0; t < m; t++) {
-                if (full && coarse[t]) {
-                    continue; // finished by its Rayleigh quotient
+                if (fast[t]) {
+                    continue; // finished
                 }
                 double lo = lower[t];
                 double hi = upper[t];
+                if (isolateOnly && lowerCount[t] == t && upperCount[t] == t + 1) {
+                    // isolated: a few more halvings, cheap here, spare Rayleigh rounds later
+                    if (Double.isNaN(refineWidth[t])) {
+                        refineWidth[t] = (hi - lo) * REFINE_FACTOR;
+                    }
+                    if (hi - lo <= refineWidth[t]) {
+                        continue;
+                    }
+                }
                 if (lo == lastLo && hi == lastHi) {
                     continue; // same bracket as the previous eigenvalue: one evaluation serves both
                 }
@@ -514,17 +969,24 @@ public final class SymmetricTridiagonalEigen {
                 break;
             }
             sturmCounts(n, points, pivots, counts, np);
-            for (int a = 0; a < np; a++) {
-                double x = points[a];
-                int c = counts[a];
-                for (int t = 0; t < m; t++) {
-                    if (c <= t) {
-                        if (x > lower[t]) {
-                            lower[t] = x;
-                        }
-                    } else if (x < upper[t]) {
-                        upper[t] = x;
+            narrow(m, points, counts, np);
+        }
+    }
+
+    /** Narrows every bracket with the Sturm counts at np points. */
+    private void narrow(int m, double[] points, int[] counts, int np) {
+        for (int a = 0; a < np; a++) {
+            double x = points[a];
+            int c = counts[a];
+            for (int t = 0; t < m; t++) {
+                if (c <= t) {
+                    if (x > lower[t]) {
+                        lower[t] = x;
+                        lowerCount[t] = c;
                     }
+                } else if (x < upper[t]) {
+                    upper[t] = x;
+                    upperCount[t] = c;
                 }
             }
         }
@@ -582,7 +1044,11 @@ public final class SymmetricTridiagonalEigen {
             double pertol = 10.0 * EPS * Math.max(Math.abs(lambda), 1e-3 * tnorm);
             double shift = lambda - previousShift < pertol ? previousShift + pertol : lambda;
             previousShift = shift;
-            inverseIteration(n, j, clusterStart, shift, vectorsOut);
+            if (fast[j]) {
+                orthogonalise(n, j, clusterStart, vectorsOut);
+            } else {
+                inverseIteration(n, j, clusterStart, shift, vectorsOut);
+            }
         }
         for (int j = 0; j < m; j++) {
             valuesOut[j] = scaledValues[j] * inv;
@@ -601,7 +1067,6 @@ public final class SymmetricTridiagonalEigen {
         randomUnit(x, n);
         double resTol = 16.0 * EPS * tnorm * Math.max(1.0, Math.sqrt(n));
         double best = Double.POSITIVE_INFINITY;
-        double bestLambda = lambda;
         double startScale = Math.max(EPS, lastPivotMagnitude) * tnorm;
         double extraScale = 1.0;
         int extra = 0;
@@ -634,19 +1099,9 @@ public final class SymmetricTridiagonalEigen {
             for (int i = 0; i < n; i++) {
                 x[i] *= invNorm;
             }
-            if (coarse[j]) {
-                double rq = rayleighQuotient(n, x);
-                // inside the Sturm bracket (widened by round-off; neighbours are far beyond it), the
-                // bracket guarantees which eigenvalue the quotient belongs to
-                double slack = 4.0 * EPS * Math.max(Math.abs(lower[j]), Math.abs(upper[j])) + EPS * tnorm;
-                if (rq >= lower[j] - slack && rq <= upper[j] + slack) {
-                    lambda = rq;
-                }
-            }
             double res = residual(n, x, lambda);
             if (res < best) {
                 best = res;
-                bestLambda = lambda;
                 System.arraycopy(x, 0, v, 0, n);
             }
             if (res <= resTol) {
@@ -660,8 +1115,38 @@ public final class SymmetricTridiagonalEigen {
                     + " = " + lambda / scale + ": relative residual " + best / tnorm
                     + " after " + MAX_INVERSE_ITERATIONS + " iterations");
         }
-        scaledValues[j] = bestLambda;
         fixSign(v, n);
+    }
+
+    /**
+     * Makes the Rayleigh-iteration vector j orthogonal to the vectors of its cluster before it
+     * (modified Gram-Schmidt, twice), then unit and sign-fixed again. A vector with a residual
+     * rho is off the exact eigenvector by about rho / gap, so neighbours closer than
+     * {@link #CLUSTER_RELATIVE_GAP} {@code ||T||} get this correction; it moves the residual by
+     * less than the removed overlap times the gap.
+     */
+    private void orthogonalise(int n, int j, int clusterStart, double[][] vectors) {
+        if (clusterStart == j) {
+            return;
+        }
+        double[] x = vectors[j];
+        for (int pass = 0; pass < 2; pass++) {
+            for (int c = clusterStart; c < j; c++) {
+                double[] q = vectors[c];
+                double dot = 0.0;
+                for (int i = 0; i < n; i++) {
+                    dot += q[i] * x[i];
+                }
+                for (int i = 0; i < n; i++) {
+                    x[i] -= dot * q[i];
+                }
+            }
+        }
+        double inv = 1.0 / norm2(x, n);
+        for (int i = 0; i < n; i++) {
+            x[i] *= inv;
+        }
+        fixSign(x, n);
     }
 
     /** x^T T x for a unit vector x (scaled matrix). */

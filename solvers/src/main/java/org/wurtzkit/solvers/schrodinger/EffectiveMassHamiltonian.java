@@ -70,6 +70,10 @@ public final class EffectiveMassHamiltonian {
     private final double[] inverseSqrtWidth;
 
     private final SymmetricTridiagonalEigen eigen = new SymmetricTridiagonalEigen();
+    /** Hints of the warm-started call in progress (null for a cold call). */
+    private double[] hints;
+    private int hintCount;
+    private double hintRadius;
     private final double[] diagonalWork;
     private double[] valuesWork = new double[0];
     private double[][] vectorsWork = new double[0][];
@@ -286,6 +290,56 @@ public final class EffectiveMassHamiltonian {
     }
 
     /**
+     * Warm-started form of
+     * {@link #belowInto(double[], double, int, double[], double[][])} for a potential that
+     * differs from an earlier one by at most {@code potentialChangeEv} at every node: the earlier
+     * energies, each checked by Sturm counts, bracket the new ones (Weyl's inequality; see
+     * {@link SymmetricTridiagonalEigen#belowInto(double[], double[], double, int, double[],
+     * double[][], double[], int, double)}). A hint that does not hold costs only its two counts;
+     * the states equal the cold call's to round-off.
+     *
+     * @param potentialEv       potential energy at the nodes (eV), finite, length N
+     * @param energyBoundEv     energy bound (eV), not NaN
+     * @param kMax              largest number of states, in {@code [1, N-2]}
+     * @param energiesOut       receives the energies (eV), ascending; length &ge; {@code kMax}
+     * @param wavefunctionsOut  as in {@link #belowInto(double[], double, int, double[], double[][])}
+     * @param previousEnergiesEv earlier energies (eV), ascending; may be the same array as
+     *                          {@code energiesOut} (they are read before it is written)
+     * @param previousCount     number of earlier energies used, in {@code [0, previousEnergiesEv.length]}
+     * @param potentialChangeEv largest {@code |V_new - V_old|} over the nodes (eV), finite, &ge; 0
+     * @return the number of states found, in {@code [0, kMax]}
+     * @throws IllegalArgumentException as the cold form, or on invalid hints
+     */
+    public int belowInto(double[] potentialEv, double energyBoundEv, int kMax, double[] energiesOut,
+            double[][] wavefunctionsOut, double[] previousEnergiesEv, int previousCount,
+            double potentialChangeEv) {
+        if (previousEnergiesEv == null) {
+            throw Require.invalid("previousEnergiesEv", "null", "(a non-null array)");
+        }
+        Require.inRange("previousCount", previousCount, 0, previousEnergiesEv.length);
+        if (!(potentialChangeEv >= 0.0 && potentialChangeEv < Double.POSITIVE_INFINITY)) {
+            throw Require.invalid("potentialChangeEv", potentialChangeEv, "[0, +Infinity) (finite)");
+        }
+        hints = previousEnergiesEv;
+        hintCount = previousCount;
+        hintRadius = potentialChangeEv;
+        try {
+            return belowInto(potentialEv, energyBoundEv, kMax, energiesOut, wavefunctionsOut);
+        } finally {
+            hints = null;
+        }
+    }
+
+    /**
+     * Number of earlier energies whose Weyl bracket did not hold in the last warm-started call.
+     *
+     * @return count, 0 after a cold call
+     */
+    public int rejectedHints() {
+        return eigen.rejectedHints();
+    }
+
+    /**
      * Eigenpairs below the bound into the work arrays, which grow to the number of states found
      * (a Sturm count, O(N)) rather than to {@code kMax}: a generous cap costs no memory.
      */
@@ -296,6 +350,10 @@ public final class EffectiveMassHamiltonian {
             return 0;
         }
         ensureWork(need);
+        if (hints != null) {
+            return eigen.belowInto(diagonalWork, offDiagonal, energyBoundEv, need, valuesWork, vectorsWork,
+                    hints, hintCount, hintRadius);
+        }
         return eigen.belowInto(diagonalWork, offDiagonal, energyBoundEv, need, valuesWork, vectorsWork);
     }
 

@@ -23,6 +23,8 @@ final class QuantumStates {
     private final EffectiveMassHamiltonian[] hamiltonians;
     private final double[][] potential; // [window][local node]
     private final double[][] massWeight; // [window][local node] box width (m) times in-plane mass (m0)
+    /** Whether a window has been solved (its energy row holds hints for a warm update). */
+    private final boolean[] solved;
 
     QuantumStates(Device d) {
         windows = d.windowStart.length;
@@ -35,6 +37,7 @@ final class QuantumStates {
         hamiltonians = new EffectiveMassHamiltonian[windows];
         potential = new double[windows][];
         massWeight = new double[windows][];
+        solved = new boolean[windows];
         for (int w = 0; w < windows; w++) {
             int a = d.windowStart[w];
             int b = d.windowEnd[w];
@@ -62,8 +65,20 @@ final class QuantumStates {
         }
     }
 
-    /** Solves every window for the potential phi (V), electrons and holes. */
+    /** Solves every window for the potential phi (V), electrons and holes, each eigen-solve cold. */
     void update(Device d, double[] phi) {
+        update(d, phi, false);
+    }
+
+    /**
+     * Solves every window for the potential phi (V), electrons and holes. With {@code warm}, a
+     * window solved before starts its electron eigen-solve from its previous energies, bracketed
+     * by the largest change of its potential energy since then (Weyl's inequality; every bracket
+     * is checked by Sturm counts, so a stale one costs two counts and nothing else). The states
+     * agree with a cold update to round-off, not bit for bit; for the same sequence of calls the
+     * results are deterministic.
+     */
+    void update(Device d, double[] phi, boolean warm) {
         if (holes != null) {
             holes.update(d, phi);
         }
@@ -73,9 +88,13 @@ final class QuantumStates {
         for (int w = 0; w < windows; w++) {
             int a = d.windowStart[w];
             double[] v = potential[w];
+            double change = 0.0;
             for (int j = 0; j < v.length; j++) {
-                v[j] = d.nodeEc(a + j) - phi[a + j];
+                double vj = d.nodeEc(a + j) - phi[a + j];
+                change = Math.max(change, Math.abs(vj - v[j]));
+                v[j] = vj;
             }
+            boolean useHints = warm && solved[w] && count[w] > 0 && change < Double.POSITIVE_INFINITY;
             int kMax = energy[w].length;
             double windowBound = bound;
             if (!d.quasiFermiUniform) {
@@ -86,8 +105,11 @@ final class QuantumStates {
                 }
                 windowBound = bound + top;
             }
-            int found = hamiltonians[w].belowInto(v, windowBound, kMax, energy[w], psi[w]);
+            int found = useHints
+                    ? hamiltonians[w].belowInto(v, windowBound, kMax, energy[w], psi[w], energy[w], count[w], change)
+                    : hamiltonians[w].belowInto(v, windowBound, kMax, energy[w], psi[w]);
             count[w] = found;
+            solved[w] = true;
             if (found == kMax && kMax < hamiltonians[w].maxStates()) {
                 limitReached |= energy[w][kMax - 1] < windowBound;
             }
