@@ -124,11 +124,11 @@ public final class SymmetricTridiagonalEigen {
     /** Per eigenvalue: finished (value and vector) by the twisted-factorisation Rayleigh iteration. */
     private boolean[] fast;
     /**
-     * Forward pivots D+ of the twisted factorisations and the ratios e_i/D-_{i+1},
+     * Forward ratios e_i/D+_i of the twisted factorisations and backward ratios e_i/D-_{i+1},
      * entry i of active eigenvalue a at i * (number active) + a; grown on demand to N times the
      * number of eigenvalues iterated together.
      */
-    private double[] plusPivot;
+    private double[] plusRatio;
     private double[] minusRatio;
     /** Per eigenvalue: the bracket that isolated it when the Rayleigh iteration started. */
     private double[] isolatedLower;
@@ -746,7 +746,7 @@ public final class SymmetricTridiagonalEigen {
         double resTol = 16.0 * EPS * tnorm * Math.max(1.0, Math.sqrt(n));
         double roundoff = 2.0 * EPS * tnorm;
         double pm = pivmin;
-        double[] dp = plusPivot;
+        double[] dp = plusRatio;
         double[] um = minusRatio;
         double[] q = rayleighQ;
         double[] g = rayleighGamma;
@@ -761,15 +761,19 @@ public final class SymmetricTridiagonalEigen {
                     qa = -pm;
                 }
                 q[a] = qa;
-                dp[a] = qa;
                 cnt[a] = qa < 0.0 ? 1 : 0;
             }
+            // forward sweep: only the ratios l_i = e_i / D+_i are stored; the backward sweep
+            // recomputes D+_i from l_{i-1} with the same operations (so the same bits), and the
+            // vector's left part needs l_i alone: one division per node fewer per round
             for (int i = 0; i < n - 1; i++) {
                 double ei = e[i];
                 double di = d[i + 1];
-                int next = i * na + na;
+                int base = i * na;
                 for (int a = 0; a < na; a++) {
-                    double qa = di - shift[act[a]] - ei / q[a] * ei;
+                    double l = ei / q[a];
+                    dp[base + a] = l;
+                    double qa = di - shift[act[a]] - l * ei;
                     if (Math.abs(qa) <= pm) {
                         qa = -pm;
                     }
@@ -777,11 +781,12 @@ public final class SymmetricTridiagonalEigen {
                         cnt[a]++;
                     }
                     q[a] = qa;
-                    dp[next + a] = qa;
                 }
             }
             double dl = d[n - 1];
-            int last = (n - 1) * na;
+            for (int a = 0; a < na; a++) {
+                g[a] = q[a]; // D+_{n-1}
+            }
             for (int a = 0; a < na; a++) {
                 int t = act[a];
                 double sigma = shift[t];
@@ -799,27 +804,50 @@ public final class SymmetricTridiagonalEigen {
                     r = -pm;
                 }
                 q[a] = r;
-                g[a] = dp[last + a];
                 tw[a] = n - 1;
             }
-            for (int i = n - 2; i >= 0; i--) {
+            for (int i = n - 2; i >= 1; i--) {
                 double ei = e[i];
                 double di = d[i];
+                double eb = e[i - 1];
                 int base = i * na;
+                int prev = base - na;
                 for (int a = 0; a < na; a++) {
                     double u = ei / q[a];
                     um[base + a] = u;
                     double ue = u * ei;
-                    double gi = dp[base + a] - ue;
+                    double ds = di - shift[act[a]];
+                    double dplus = ds - dp[prev + a] * eb; // D+_i as the forward sweep had it
+                    if (Math.abs(dplus) <= pm) {
+                        dplus = -pm;
+                    }
+                    double gi = dplus - ue;
                     if (Math.abs(gi) < Math.abs(g[a])) {
                         g[a] = gi;
                         tw[a] = i;
                     }
-                    double r = di - shift[act[a]] - ue;
+                    double r = ds - ue;
                     if (Math.abs(r) <= pm) {
                         r = -pm;
                     }
                     q[a] = r;
+                }
+            }
+            {
+                double e0 = e[0];
+                for (int a = 0; a < na; a++) {
+                    double u = e0 / q[a];
+                    um[a] = u;
+                    double ue = u * e0;
+                    double dplus = d0 - shift[act[a]];
+                    if (Math.abs(dplus) <= pm) {
+                        dplus = -pm;
+                    }
+                    double gi = dplus - ue;
+                    if (Math.abs(gi) < Math.abs(g[a])) {
+                        g[a] = gi;
+                        tw[a] = 0;
+                    }
                 }
             }
             int kept = 0;
@@ -842,7 +870,7 @@ public final class SymmetricTridiagonalEigen {
      */
     private int twistedStep(int n, int na, int a, int t, int twist, double gamma, double[] v,
                             double resTol, double roundoff) {
-        double[] dp = plusPivot;
+        double[] dp = plusRatio;
         double[] um = minusRatio;
         // z decays through barriers; entries below NEGLIGIBLE (relative to z_r = 1, far below any
         // tolerance) are set to zero, with the rest of that side, so that no arithmetic reaches
@@ -852,7 +880,7 @@ public final class SymmetricTridiagonalEigen {
         double z = 1.0;
         int i = twist - 1;
         for (; i >= 0; i--) {
-            z = -(e[i] / dp[i * na + a]) * z; // e_i / D+_i: independent of z, so it pipelines
+            z = -dp[i * na + a] * z; // l_i = e_i / D+_i from the forward sweep
             if (Math.abs(z) < NEGLIGIBLE) {
                 break;
             }
@@ -919,8 +947,8 @@ public final class SymmetricTridiagonalEigen {
         if (need > Integer.MAX_VALUE - 8) {
             throw new IllegalStateException("work space of " + need + " entries is too large");
         }
-        if (plusPivot == null || plusPivot.length < need) {
-            plusPivot = new double[(int) need];
+        if (plusRatio == null || plusRatio.length < need) {
+            plusRatio = new double[(int) need];
             minusRatio = new double[(int) need];
         }
     }
