@@ -6,6 +6,7 @@ import java.util.List;
 import org.wurtzkit.bands.BandAlignment;
 import org.wurtzkit.bands.BandEdges;
 import org.wurtzkit.errors.ErrorKind;
+import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.errors.WurtzkitException;
 import org.wurtzkit.material.BandGap;
@@ -179,11 +180,18 @@ public final class Structure {
             BandEdges e = bandEdgesAt(st.top());
             double gap = e.conductionEv() - e.valenceEv();
             String where = "the top of layer \"" + st.layer().name() + "\" (gap " + gap + " eV)";
-            for (InterfaceSheet sh : l) {
-                for (InterfaceStates is : sh.states()) {
-                    Require.inRange("interface-state charge-neutrality level below E_c at " + where + " (eV)",
-                            is.neutralLevelBelowEcEv(), 0, gap);
-                    is.distribution().checkInsideGap(gap, where);
+            for (int k = 0; k < l.size(); k++) {
+                InterfaceSheet sh = l.get(k);
+                for (int j = 0; j < sh.states().size(); j++) {
+                    InterfaceStates is = sh.states().get(j);
+                    try {
+                        Require.inRange("interface-state charge-neutrality level below E_c at " + where + " (eV)",
+                                is.neutralLevelBelowEcEv(), 0, gap);
+                        is.distribution().checkInsideGap(gap, where);
+                    } catch (InvalidParameterException bad) {
+                        throw new InvalidStructurePartException(
+                                new StructurePart(StructurePart.Kind.INTERFACE_STATES, fromTop, k, j), bad);
+                    }
                 }
                 out.add(new PlacedSheet(st.depthTop(), upper, fromTop, gap, sh));
             }
@@ -988,6 +996,10 @@ public final class Structure {
         /**
          * @return the structure
          * @throws WurtzkitException of kind INVALID_STRUCTURE for an empty stack or no top boundary
+         * @throws StructurePartException for surface donors on a free surface above an insulator (part: the
+         *         top boundary)
+         * @throws InvalidStructurePartException for an interface-state level outside the gap of the layer
+         *         below it (part: that layer, sheet and interface-state set)
          */
         public Structure build() {
             if (layers.isEmpty()) {
@@ -999,7 +1011,7 @@ public final class Structure {
                         "no top boundary: call top(TopBoundary.schottky(...)) or top(TopBoundary.freeSurface(...))");
             }
             if (!deposited.isEmpty() && top instanceof TopBoundary.FreeSurface fs && fs.donorDensityPerM2() > 0) {
-                throw new WurtzkitException(ErrorKind.INVALID_STRUCTURE, "the free surface above the insulator \""
+                throw new StructurePartException(StructurePart.topBoundary(), "the free surface above the insulator \""
                         + deposited.get(deposited.size() - 1).name() + "\" has surface donors ("
                         + fs.donorDensityPerM2() + " m^-2), which describe a nitride surface: put states at the"
                         + " nitride's top face with sheetOnTop(...) and use TopBoundary.freeSurface(0, 0)");

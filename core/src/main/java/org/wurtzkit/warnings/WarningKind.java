@@ -64,5 +64,17 @@ public enum WarningKind {
     /** A trade-off has no threshold-voltage band: its front compares stacks of different threshold voltage. */
     NO_THRESHOLD_BAND,
     /** No computed stack of a trade-off lies in its threshold-voltage band: the front is empty. */
-    THRESHOLD_BAND_EMPTY
+    THRESHOLD_BAND_EMPTY,
+    /**
+     * Holes gather within 5 nm under a gate stack (insulator) at the hole quasi-Fermi level the
+     * solve assigned to them (by default the channel's): a steady state, which a measurement faster
+     * than their supply (generation, leakage through the barrier) does not reach.
+     */
+    HOLES_UNDER_GATE_STACK,
+    /**
+     * A model parameter measured or fitted on one kind of sample or interface is applied to another
+     * kind, outside where it was determined (e.g. an interface roughness fitted at AlGaN/GaN applied
+     * at the AlN/GaN interface under an AlN interlayer).
+     */
+    PARAMETER_OUTSIDE_MEASURED_RANGE
 }

@@ -159,6 +159,13 @@ class GateStackTest {
                 .top(TopBoundary.freeSurface(0, 0));
         e = assertThrows(InvalidParameterException.class, cnl::build);
         assertTrue(e.parameter().contains("charge-neutrality level"), e.getMessage());
+        // the error says which sheet and which state set: here the second set of the second sheet on the barrier
+        Structure.Builder second = hemt().sheetOnTop(InterfaceSheet.fixedPerCm2(1e12))
+                .sheetOnTop(new InterfaceSheet(0, List.of(InterfaceStates.uniformPerCm2PerEv(1e12, 1.0),
+                        InterfaceStates.uniformPerCm2PerEv(1e12, 5)))).top(TopBoundary.freeSurface(0, 0));
+        InvalidStructurePartException located = assertThrows(InvalidStructurePartException.class, second::build);
+        assertEquals(new StructurePart(StructurePart.Kind.INTERFACE_STATES, 0, 1, 1), located.part());
+        assertTrue(located.parameter().contains("charge-neutrality level"), located.getMessage());
     }
 
     @Test
@@ -173,6 +180,11 @@ class GateStackTest {
         assertThrows(InvalidParameterException.class, () -> InterfaceSheet.fixedPerCm2(Double.NaN));
         BadInput.checkKind(() -> hemt().deposit(InsulatorLayer.ofNm(Insulators.SIO2, 5))
                 .top(TopBoundary.freeSurface(1.6, 1e13)).build(), ErrorKind.INVALID_STRUCTURE, "surface donors");
+        StructurePartException donors = assertThrows(StructurePartException.class, () -> hemt()
+                .deposit(InsulatorLayer.ofNm(Insulators.SIO2, 5)).top(TopBoundary.freeSurface(1.6, 1e13)).build());
+        assertEquals(StructurePart.topBoundary(), donors.part());
+        assertThrows(InvalidParameterException.class, () -> new StructurePart(StructurePart.Kind.INTERFACE_STATES, -1, 0, 0));
+        assertThrows(InvalidParameterException.class, () -> new StructurePart(StructurePart.Kind.TOP_BOUNDARY, 0, -1, -1));
         assertEquals(List.of(), mis(5).withGateStack(List.of()).gateStack());
     }
 }

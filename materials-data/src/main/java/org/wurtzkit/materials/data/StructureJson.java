@@ -38,6 +38,7 @@ import org.wurtzkit.structure.Layer;
 import org.wurtzkit.structure.LayerMaterial;
 import org.wurtzkit.structure.PlacedSheet;
 import org.wurtzkit.structure.Structure;
+import org.wurtzkit.structure.StructurePart;
 import org.wurtzkit.structure.TopBoundary;
 
 /**
@@ -844,7 +845,68 @@ public final class StructureJson {
                     t.apply(path, gs.get(i).line(), () -> b.deposit(il));
                 }
             }
-            return t.apply("", root.line(), b::build);
+            try {
+                return t.apply("", root.line(), b::build);
+            } catch (StructureFormatException e) {
+                // a check of the whole stack that says which part it concerns: point at that entry
+                if (e.getCause() instanceof StructurePart.Located located) {
+                    throw locate(root, located.part(), (RuntimeException) e.getCause());
+                }
+                throw e;
+            }
+        }
+
+        /**
+         * Points an error found when the whole stack is assembled at the entry it concerns: the interface
+         * states of one sheet (their neutral level, or the level inside their distribution), or the top
+         * boundary (its donor density when given).
+         */
+        private StructureFormatException locate(JsonTree.Obj root, StructurePart part, RuntimeException e) {
+            String path = "";
+            JsonTree.Node at = root;
+            if (part.kind() == StructurePart.Kind.INTERFACE_STATES) {
+                JsonTree.Node layer = element(root.get("layersFromSurface"), part.layerFromTop());
+                JsonTree.Node sheet = layer instanceof JsonTree.Obj lo ? element(lo.get("sheetsOnTop"), part.sheet()) : null;
+                JsonTree.Node states = sheet instanceof JsonTree.Obj so ? element(so.get("states"), part.states()) : null;
+                if (states instanceof JsonTree.Obj st) {
+                    path = "layersFromSurface[" + part.layerFromTop() + "].sheetsOnTop[" + part.sheet() + "].states["
+                            + part.states() + "]";
+                    at = st;
+                    boolean neutral = e instanceof InvalidParameterException ip
+                            && ip.parameter().contains("charge-neutrality");
+                    JsonTree.Member m = st.get(neutral ? "neutralLevelBelowConductionBand" : "distribution");
+                    if (m != null) {
+                        path += "." + m.key();
+                        at = m.value();
+                        if (!neutral && m.value() instanceof JsonTree.Obj d) {
+                            for (JsonTree.Member level : d.members().values()) {
+                                if (level.key().endsWith("BelowConductionBand")) {
+                                    path += "." + level.key();
+                                    at = level.value();
+                                }
+                            }
+                        }
+                    }
+                }
+            } else if (part.kind() == StructurePart.Kind.TOP_BOUNDARY && root.get("top") != null) {
+                JsonTree.Member top = root.get("top");
+                path = "top";
+                at = top.value();
+                if (top.value() instanceof JsonTree.Obj o && o.get("donorDensity") != null) {
+                    path = "top.donorDensity";
+                    at = o.get("donorDensity").value();
+                }
+            }
+            return new StructureFormatException(t.fileName, t.full(path), at.line(),
+                    StructureFormatException.Reason.INVALID_VALUE, e.getMessage(), e);
+        }
+
+        /** {@return element i of the array the member holds, or null} */
+        private static JsonTree.Node element(JsonTree.Member m, int i) {
+            if (m != null && m.value() instanceof JsonTree.Arr a && i >= 0 && i < a.elements().size()) {
+                return a.elements().get(i);
+            }
+            return null;
         }
 
         /**

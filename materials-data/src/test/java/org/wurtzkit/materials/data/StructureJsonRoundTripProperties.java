@@ -235,7 +235,9 @@ class StructureJsonRoundTripProperties {
                 Arbitraries.of(true, false))
                 .as((base, ls, sheetSpecs, gate, model, strainedSplittings) -> {
                     // the layers and choices of a version-1 structure, with version-2 layers on top
-                    Structure.Builder plain = base.toBuilder();
+                    // the same valence-splitting choice as the stack built below: it moves E_v, so the gap the
+                    // interface states are placed in must be read with it
+                    Structure.Builder plain = base.toBuilder().strainShiftsValenceSplittings(strainedSplittings);
                     ls.forEach(plain::grow);
                     Structure noSheets = plain.build();
                     List<Layer> bottomUp = noSheets.layersBottomUp();

@@ -45,6 +45,13 @@ class StructureJsonV2BadInputTest {
             "}"); // 26
 
     private static final String STATE = "layersFromSurface[0].sheetsOnTop[0].states[0]";
+    /** The uniform distribution of the good text (lines 19-20). */
+    private static final String DISTRIBUTION = "\"distribution\": {\"shape\": \"uniform\",\n"
+            + "           \"density\": {\"value\": 1e12, \"unit\": \"cm^-2 eV^-1\"}}";
+    /** A discrete level 6 eV below E_c in its place, the level on a line of its own. */
+    private static final String DISCRETE_6_EV = "\"distribution\": {\"shape\": \"discrete\",\n"
+            + "           \"density\": {\"value\": 1e12, \"unit\": \"cm^-2\"},\n"
+            + "           \"levelBelowConductionBand\": {\"value\": 6, \"unit\": \"eV\"}}";
 
     @Test
     void theGoodTextReads() {
@@ -115,8 +122,32 @@ class StructureJsonV2BadInputTest {
                 () -> StructureJson.reader().read(bad, "gate.json"));
         assertEquals(StructureFormatException.Reason.INVALID_VALUE, e.reason());
         assertTrue(e.problem().contains("charge-neutrality level"), e.problem());
-        assertEquals("(root)", e.keyPath());
-        assertEquals(1, e.line());
+        assertEquals(STATE + ".neutralLevelBelowConductionBand", e.keyPath(), e.getMessage());
+        assertEquals(lineOf(bad, "\"neutralLevelBelowConductionBand\": {\"value\": 6"), e.line(), e.getMessage());
+    }
+
+    @Test
+    void aDiscreteStateOutsideTheGapPointsAtItsLevel() {
+        // the same sheet with a discrete level 6 eV below E_c in its distribution (outside the gap of about 4 eV)
+        String bad = GOOD.replace(DISTRIBUTION, DISCRETE_6_EV);
+        assertTrue(!bad.equals(GOOD));
+        StructureFormatException e = assertThrows(StructureFormatException.class,
+                () -> StructureJson.reader().read(bad, "gate.json"));
+        assertEquals(StructureFormatException.Reason.INVALID_VALUE, e.reason());
+        assertTrue(e.problem().contains("discrete interface-state level"), e.problem());
+        assertEquals(STATE + ".distribution.levelBelowConductionBand", e.keyPath(), e.getMessage());
+        assertEquals(lineOf(bad, "\"levelBelowConductionBand\": {\"value\": 6"), e.line(), e.getMessage());
+    }
+
+    /** {@return the 1-based line of the text's first line that contains the fragment} */
+    private static int lineOf(String text, String fragment) {
+        String[] lines = text.split("\n", -1);
+        for (int i = 0; i < lines.length; i++) {
+            if (lines[i].contains(fragment)) {
+                return i + 1;
+            }
+        }
+        throw new AssertionError("no line holds " + fragment);
     }
 
     @Test
@@ -129,6 +160,8 @@ class StructureJsonV2BadInputTest {
                 () -> StructureJson.reader().read(bad, "gate.json"));
         assertEquals(StructureFormatException.Reason.INVALID_VALUE, e.reason());
         assertTrue(e.problem().contains("sheetOnTop"), e.problem());
+        assertEquals("top.donorDensity", e.keyPath(), e.getMessage());
+        assertEquals(4, e.line(), e.getMessage());
     }
 
     /** Custom materials: the committed golden file, broken one way at a time. */

@@ -25,9 +25,9 @@ import org.wurtzkit.warnings.WarningKind;
  * ({@link #electricField()}) have one value per interval between nodes, at {@link #cellMidpoints()}.
  */
 public final class Solution {
-    /** Depth below a gate stack within which holes are summed for the warning of {@link #toString()} (m). */
+    /** Depth below a gate stack within which holes are summed for the warning {@code HOLES_UNDER_GATE_STACK} (m). */
     static final double HOLE_WATCH_DEPTH = 5e-9;
-    /** Hole sheet under a gate stack above which {@link #toString()} warns (m^-2): 1e10 cm^-2. */
+    /** Hole sheet under a gate stack above which {@link #warnings()} holds {@code HOLES_UNDER_GATE_STACK} (m^-2): 1e10 cm^-2. */
     static final double HOLE_WARNING_PER_M2 = 1e14;
 
     /** Subbands listed one per line by {@link #toString()}; the rest are summed on one line. */
@@ -163,7 +163,8 @@ public final class Solution {
     /**
      * What may make this solution mislead: the structure's own {@link Structure#warnings()}, then a
      * surface hole gas under a free surface, window-bound subbands, window edges inside free
-     * electrons, and a reached subband limit (thresholds: the {@code WARN_...} constants).
+     * electrons, a reached subband limit (thresholds: the {@code WARN_...} constants), and holes
+     * within 5 nm under a gate stack ({@link WarningKind#HOLES_UNDER_GATE_STACK}, above 1e10 cm^-2).
      *
      * @return the warnings, empty when there is none
      */
@@ -556,12 +557,6 @@ public final class Solution {
         }
         sb.append("  ").append(record);
         sb.append(Warning.lines(warnings));
-        if (holesUnderInsulator > HOLE_WARNING_PER_M2) {
-            sb.append("\n  warning: ").append(Decimals.format(Units.perM2ToPerCm2(holesUnderInsulator), "cm^-2"))
-                    .append(" of holes within 5 nm under the gate stack, at the hole quasi-Fermi level of")
-                    .append(" QuasiFermiLevels (by default the channel's): a steady state, which a measurement faster")
-                    .append(" than their supply (generation, leakage through the barrier) does not reach");
-        }
         return sb.toString();
     }
 }

@@ -171,6 +171,9 @@ final class SolutionAssembler {
         checkFinite(structure, potential, ec, ev, n, p, report.donors(), report.acceptors(), charge, field);
         List<Warning> warnings = warnings(d, phi, depth, ec, n, p, windows, subbands, wellSheetDensity,
                 subbandLimitReached);
+        if (under > Solution.HOLE_WARNING_PER_M2) {
+            warnings = withHolesUnderGateStack(warnings, under);
+        }
         List<InterfaceEdges> interfaceEdges = InterfaceEdges.of(d, depth, phi);
         List<WellMinimum> wellMinima = WellMinimum.of(d, depth, phi, nw);
         return new Solution(structure, d.options, record, coldStart, depth, potential, ec, ev, electronFermi,
@@ -243,6 +246,16 @@ final class SolutionAssembler {
             out.add(new Warning(WarningKind.SUBBAND_LIMIT_REACHED,
                     "a quantum window reached the subband limit; its density is too low"));
         }
+        return List.copyOf(out);
+    }
+
+    /** The warnings and, after them, the one about holes within 5 nm under the gate stack. */
+    private static List<Warning> withHolesUnderGateStack(List<Warning> warnings, double under) {
+        List<Warning> out = new ArrayList<>(warnings);
+        out.add(new Warning(WarningKind.HOLES_UNDER_GATE_STACK, Decimals.format(Units.perM2ToPerCm2(under), "cm^-2")
+                + " of holes within 5 nm under the gate stack, at the hole quasi-Fermi level of QuasiFermiLevels"
+                + " (by default the channel's): a steady state, which a measurement faster than their supply"
+                + " (generation, leakage through the barrier) does not reach"));
         return List.copyOf(out);
     }
 

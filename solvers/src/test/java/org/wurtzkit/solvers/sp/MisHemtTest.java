@@ -19,6 +19,7 @@ import org.wurtzkit.structure.TopBoundary;
 import org.wurtzkit.testing.StandardStacks;
 import org.wurtzkit.units.Constants;
 import org.wurtzkit.units.Units;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * MIS-HEMTs (Al2O3 on AlGaN/GaN) and interface states, against checks derived from Gauss's law in
@@ -140,9 +141,13 @@ class MisHemtTest {
     void holesUnderTheInsulatorCarryAWarning() {
         Solution bare = SOLVER.solve(misHemt(10, InterfaceSheet.fixedPerCm2(0), 0.5));
         assertTrue(bare.holesUnderGateStack() > 1e14, "holes " + bare.holesUnderGateStack());
+        assertEquals(1, bare.warnings().stream().filter(w -> w.kind() == WarningKind.HOLES_UNDER_GATE_STACK).count(),
+                bare.warnings().toString());
         assertTrue(bare.toString().contains("of holes within 5 nm under the gate stack"), bare.toString());
         Solution charged = SOLVER.solve(misHemt(10, InterfaceSheet.fixedPerCm2(2.5e13), 0.5));
         assertTrue(charged.holesUnderGateStack() < 1e10, "holes " + charged.holesUnderGateStack());
+        assertTrue(charged.warnings().stream().noneMatch(w -> w.kind() == WarningKind.HOLES_UNDER_GATE_STACK),
+                charged.warnings().toString());
         assertTrue(!charged.toString().contains("holes within"), charged.toString());
     }
 }

@@ -5,6 +5,7 @@ import java.util.Optional;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.Composition;
+import org.wurtzkit.warnings.Warning;
 
 /**
  * Interface roughness with its (Delta, Lambda) chosen by the material on the barrier side of each
@@ -74,9 +75,15 @@ public record InterfaceRoughnessByBarrier(InterfaceRoughness otherwise, Map<Comp
 
     @Override
     public Optional<String> warning(SubbandScattering s) {
+        return typedWarning(s).map(Warning::message);
+    }
+
+    @Override
+    public Optional<Warning> typedWarning(SubbandScattering s) {
         boolean own = hasOwnRoughness(s);
+        InterfaceRoughness r = roughnessFor(s);
         // a barrier with a roughness of its own was set on purpose: only the missing-interface warning remains
-        return roughnessFor(s).warning(s).filter(w -> !own || s.interfaceField() == 0);
+        return r.typedWarning(s).filter(w -> !own || r.force(s) == 0);
     }
 
     private boolean hasOwnRoughness(SubbandScattering s) {

@@ -212,10 +212,13 @@ public final class Mobility {
             // the rough interface: the one nearest the subband's peak (above it for a metal-face channel,
             // below it for an N-face one); the field is averaged on the peak's side
             double iface = -1;
+            int ifaceIndex = -1;
             double xp = x[peak[i]];
-            for (double d : interfaces) {
+            for (int j = 0; j < interfaces.length; j++) {
+                double d = interfaces[j];
                 if (iface < 0 || Math.abs(d - xp) < Math.abs(iface - xp)) {
                     iface = d;
+                    ifaceIndex = j;
                 }
             }
             boolean below = iface >= 0 && xp >= iface;
@@ -242,8 +245,20 @@ public final class Mobility {
                 // cell c is the first whose bottom lies below the interface: the cell just under it
                 barrier = below ? (c > 0 ? cellMaterial[c - 1] : null) : cellMaterial[c];
             }
+            // the node at the rough interface and the conduction-band step across it (band-step field term)
+            int ifaceNode = -1;
+            double step = 0;
+            if (iface >= 0) {
+                ifaceNode = 0;
+                for (int k = 1; k < n; k++) {
+                    if (Math.abs(x[k] - iface) < Math.abs(x[ifaceNode] - iface)) {
+                        ifaceNode = k;
+                    }
+                }
+                step = solution.interfaceEdges().get(ifaceIndex).conductionStepEv() * Constants.ELEMENTARY_CHARGE;
+            }
             SubbandScattering s = new SubbandScattering(t, chan[i], b.inPlaneMass(), b.sheetDensity(), qs, x, psi2,
-                    alloy, fieldEff, barrier, ions, surface, options.quadraturePoints());
+                    alloy, fieldEff, barrier, ifaceNode, step, ions, surface, options.quadraturePoints());
             for (int k = 0; k < mechs.size(); k++) {
                 ScatteringMechanism m = mechs.get(k);
                 double r = m.momentumRelaxationRate(s);
@@ -253,8 +268,7 @@ public final class Mobility {
                             + " and >= 0");
                 }
                 rate[i][k] = r;
-                Optional<String> warn = m.warning(s);
-                warn.ifPresent(text -> warnings.add(new Warning(WarningKind.SCATTERING_MODEL_OUT_OF_VALIDITY, text)));
+                m.typedWarning(s).ifPresent(warnings::add);
             }
             dens[i] = b.sheetDensity();
             mass[i] = b.inPlaneMass() * Constants.ELECTRON_MASS;

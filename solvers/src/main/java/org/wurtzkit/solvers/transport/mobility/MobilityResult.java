@@ -193,7 +193,9 @@ public final class MobilityResult {
     }
 
     /**
-     * The warnings of the models used, typed: {@link org.wurtzkit.warnings.WarningKind#SCATTERING_MODEL_OUT_OF_VALIDITY}
+     * The warnings of the models used, typed: {@link org.wurtzkit.warnings.WarningKind#PARAMETER_OUTSIDE_MEASURED_RANGE}
+     * (interface roughness fitted at AlGaN/GaN applied at a binary barrier),
+     * {@link org.wurtzkit.warnings.WarningKind#SCATTERING_MODEL_OUT_OF_VALIDITY}
      * (a mechanism's own warning, or a subband too close to the Fermi level for the degenerate
      * formulas), {@link org.wurtzkit.warnings.WarningKind#ELECTRONS_LEFT_OUT},
      * {@link org.wurtzkit.warnings.WarningKind#SUBBAND_LIMIT_REACHED} and

@@ -1,6 +1,8 @@
 package org.wurtzkit.solvers.transport.mobility;
 
 import java.util.Optional;
+import org.wurtzkit.warnings.Warning;
+import org.wurtzkit.warnings.WarningKind;
 
 /**
  * One scattering mechanism of a 2DEG: the momentum relaxation rate 1/tau of one subband.
@@ -26,5 +28,17 @@ public interface ScatteringMechanism {
      */
     default Optional<String> warning(SubbandScattering subband) {
         return Optional.empty();
+    }
+
+    /**
+     * The mechanism's warning, typed: by default {@link #warning(SubbandScattering)} as a
+     * {@link WarningKind#SCATTERING_MODEL_OUT_OF_VALIDITY}; a mechanism overrides this to give a more
+     * precise kind (e.g. {@link WarningKind#PARAMETER_OUTSIDE_MEASURED_RANGE}).
+     *
+     * @param subband the subband
+     * @return the typed warning, or empty
+     */
+    default Optional<Warning> typedWarning(SubbandScattering subband) {
+        return warning(subband).map(text -> new Warning(WarningKind.SCATTERING_MODEL_OUT_OF_VALIDITY, text));
     }
 }

@@ -60,6 +60,8 @@ public final class SubbandScattering {
     private final double alloyIntegral;
     private final double interfaceField;
     private final WurtziteMaterial interfaceBarrier;
+    private final double interfaceBandStep;
+    private final double interfaceDensity;
     private final double[] ionSheet;
     private final double surfaceSheet;
     private final double[] u;
@@ -111,7 +113,40 @@ public final class SubbandScattering {
     SubbandScattering(double temperatureK, ChannelParameters channel, double massRelative, double sheetDensity,
             double screening, double[] depth, double[] psiSquared, double[] alloyStrength, double interfaceField,
             WurtziteMaterial interfaceBarrier, double[] ionDensity, double surfaceSheet, int quadraturePoints) {
+        this(temperatureK, channel, massRelative, sheetDensity, screening, depth, psiSquared, alloyStrength,
+                interfaceField, interfaceBarrier, -1, 0, ionDensity, surfaceSheet, quadraturePoints);
+    }
+
+    /**
+     * As the constructor above, with the node of the rough interface and the conduction-band step there
+     * (for the band-step field term of {@link InterfaceRoughness}).
+     *
+     * @param temperatureK      lattice temperature (K)
+     * @param channel           material constants where the subband lives
+     * @param massRelative      in-plane mass (m0)
+     * @param sheetDensity      electrons in the subband (m^-2), &gt; 0
+     * @param screening         screening wave vector q_s (1/m), &ge; 0
+     * @param depth             mesh nodes (m), strictly increasing
+     * @param psiSquared        |psi|^2 per node (1/m)
+     * @param alloyStrength     per node Omega_0 sum x_i x_j U_ij^2 (J^2 m^3), or null for none
+     * @param interfaceField    effective field at the rough interface (V/m), 0 if there is none
+     * @param interfaceBarrier  material on the barrier side of the rough interface, or null if unknown
+     * @param interfaceNode     index of the node at the rough interface, -1 if there is none
+     * @param interfaceBandStep conduction-band step across the rough interface (J, magnitude; 0 if none)
+     * @param ionDensity        ionised impurities per node (m^-3, box-averaged), or null for none
+     * @param surfaceSheet      charged surface states at the first node (m^-2, magnitude)
+     * @param quadraturePoints  nodes of the graded rule, in [12, 1000], used in panels of 6
+     */
+    SubbandScattering(double temperatureK, ChannelParameters channel, double massRelative, double sheetDensity,
+            double screening, double[] depth, double[] psiSquared, double[] alloyStrength, double interfaceField,
+            WurtziteMaterial interfaceBarrier, int interfaceNode, double interfaceBandStep, double[] ionDensity,
+            double surfaceSheet, int quadraturePoints) {
         this.interfaceBarrier = interfaceBarrier;
+        this.interfaceBandStep = Math.abs(Require.finite("interface conduction-band step (J)", interfaceBandStep));
+        if (interfaceNode < -1 || interfaceNode >= depth.length) {
+            throw new InvalidParameterException("interface node", Integer.toString(interfaceNode),
+                    "[-1, " + (depth.length - 1) + "]");
+        }
         this.temperatureK = Require.positive("temperature (K)", temperatureK);
         this.channel = Require.nonNull("channel parameters", channel);
         this.mass = Require.positive("in-plane mass (m0)", massRelative) * Constants.ELECTRON_MASS;
@@ -169,6 +204,7 @@ public final class SubbandScattering {
         }
         psi4 = p4;
         alloyIntegral = alloy;
+        interfaceDensity = interfaceNode < 0 ? 0 : psiSquared[interfaceNode] / norm;
         if (ionDensity != null) {
             ionSheet = new double[n];
             for (int k = 0; k < n; k++) {
@@ -406,6 +442,19 @@ public final class SubbandScattering {
     /** @return the effective field at the rough interface (V/m); 0 if the subband has none */
     public double interfaceField() {
         return interfaceField;
+    }
+
+    /**
+     * @return the magnitude of the conduction-band step across the rough interface (J); 0 if the subband
+     *         has no interface or the caller did not give it
+     */
+    public double interfaceBandStep() {
+        return interfaceBandStep;
+    }
+
+    /** @return |psi|^2 at the rough interface (1/m, normalised to 1 over the mesh); 0 if there is none */
+    public double interfaceDensity() {
+        return interfaceDensity;
     }
 
     /**
