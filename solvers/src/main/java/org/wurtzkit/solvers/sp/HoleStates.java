@@ -25,6 +25,10 @@ final class HoleStates {
     private final EffectiveMassHamiltonian[][] hamiltonians;
     private final double[][] potential; // [window][local node], hole energy of one band (eV)
     private final double[][][] massWeight; // [window][band][local node]
+    /** The potential (V) of each window's last eigen-solve, for the Weyl bracket of a warm update. */
+    private final double[][] lastPhi; // [window][local node]
+    /** Number of energies of the last eigen-solve of each band, the hints of a warm update (0: none). */
+    private final int[][] hintCount; // [window][band]
 
     HoleStates(Device d) {
         windows = d.windowStart.length;
@@ -35,10 +39,13 @@ final class HoleStates {
         hamiltonians = new EffectiveMassHamiltonian[windows][BANDS];
         massWeight = new double[windows][BANDS][];
         potential = new double[windows][];
+        lastPhi = new double[windows][];
+        hintCount = new int[windows][BANDS];
         for (int w = 0; w < windows; w++) {
             int a = d.windowStart[w];
             int e = d.windowEnd[w];
             potential[w] = new double[e - a + 1];
+            lastPhi[w] = new double[e - a + 1];
             double[] z = new double[e - a + 1];
             for (int i = a; i <= e; i++) {
                 z[i - a] = d.x[i];
@@ -73,8 +80,19 @@ final class HoleStates {
         return false;
     }
 
-    /** Solves every window for the potential phi (V); counts stay 0 where no hole state can be occupied. */
+    /** Solves every window for the potential phi (V), each eigen-solve cold; counts stay 0 where no hole state can be occupied. */
     void update(Device d, double[] phi) {
+        update(d, phi, false);
+    }
+
+    /**
+     * Solves every window for the potential phi (V); counts stay 0 where no hole state can be
+     * occupied. With {@code warm}, a band solved before starts from its previous energies,
+     * bracketed by the largest change of phi over the window since that solve (the band offsets
+     * and edges are fixed, so the hole potential energy of every band moves by exactly the change
+     * of phi; Weyl's inequality, checked by Sturm counts). Equal to a cold update to round-off.
+     */
+    void update(Device d, double[] phi, boolean warm) {
         double cut = d.options.subbandCutoffKT() * d.vt;
         double dosUnit = Constants.ELECTRON_MASS * d.kT / (Math.PI * Constants.HBAR * Constants.HBAR);
         for (int w = 0; w < windows; w++) {
@@ -97,13 +115,24 @@ final class HoleStates {
             }
             int len = e - a + 1;
             double[] v = potential[w];
+            double[] last = lastPhi[w];
+            double change = 0.0;
+            for (int j = 0; j < len; j++) {
+                change = Math.max(change, Math.abs(phi[a + j] - last[j]));
+                last[j] = phi[a + j];
+            }
             for (int b = 0; b < BANDS; b++) {
                 for (int j = 0; j < len; j++) {
                     v[j] = phi[a + j] - d.nodeEv(a + j) + d.nodeHoleOffset(b, a + j);
                 }
                 int kMax = energy[w][b].length;
-                int found = hamiltonians[w][b].belowInto(v, bound, kMax, energy[w][b], psi[w][b]);
+                int hints = hintCount[w][b];
+                int found = warm && hints > 0 && change < Double.POSITIVE_INFINITY
+                        ? hamiltonians[w][b].belowInto(v, bound, kMax, energy[w][b], psi[w][b], energy[w][b], hints,
+                                change)
+                        : hamiltonians[w][b].belowInto(v, bound, kMax, energy[w][b], psi[w][b]);
                 count[w][b] = found;
+                hintCount[w][b] = found;
                 for (int k = 0; k < found; k++) {
                     double mxy = 0;
                     for (int j = 0; j < len; j++) {

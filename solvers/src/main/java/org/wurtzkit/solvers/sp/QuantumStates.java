@@ -76,11 +76,11 @@ final class QuantumStates {
      * by the largest change of its potential energy since then (Weyl's inequality; every bracket
      * is checked by Sturm counts, so a stale one costs two counts and nothing else). The states
      * agree with a cold update to round-off, not bit for bit; for the same sequence of calls the
-     * results are deterministic.
+     * results are deterministic. The hole windows ({@link HoleStates}) are warm-started the same way.
      */
     void update(Device d, double[] phi, boolean warm) {
         if (holes != null) {
-            holes.update(d, phi);
+            holes.update(d, phi, warm);
         }
         double bound = d.options.subbandCutoffKT() * d.vt;
         double dosUnit = Constants.ELECTRON_MASS * d.kT / (Math.PI * Constants.HBAR * Constants.HBAR);

@@ -224,9 +224,10 @@ public final class SelfConsistentSolver {
                 d.freezeGateSideSplit();
             }
             d.updateGateSideSplit(phi);
-            // 1. subbands of every window for the current potential
+            // 1. subbands of every window for the current potential; from the second iteration on
+            // each eigen-solve starts from the previous iteration's energies (Weyl brackets)
             try {
-                qs.update(d, phi);
+                qs.update(d, phi, it > 0);
             } catch (EigenSolverException | InvalidParameterException e) {
                 throw eigenFailure(d, phi, it, newtonSteps, history, e);
             }

@@ -140,14 +140,13 @@ final class SolutionAssembler {
         for (int w = 0; w < nw; w++) {
             int a = d.windowStart[w];
             windows[w] = new double[] {d.x[a], d.x[d.windowEnd[w]]};
-            // zero outside the window; each subband overwrites the window part, and Subband copies it
-            double[] full = new double[nn];
             for (int k = 0; k < qs.count[w]; k++) {
-                System.arraycopy(qs.psi[w][k], 0, full, a, qs.psi[w][k].length);
+                // the subband keeps the window's part only (QuantumStates' rows are overwritten by later updates)
+                WindowedWavefunction psi = new WindowedWavefunction(qs.psi[w][k].clone(), a, nn);
                 // occupation with the same first-order shift (phi - ref) as the density of Poisson
                 double occ = SubbandDensity.sheet(d, qs, w, k, phi, ref);
                 wellSheetDensity[w] += occ;
-                bands.add(new Subband(w, k, qs.energy[w][k], full, occ, qs.massXY[w][k]));
+                bands.add(new Subband(w, k, qs.energy[w][k], psi, occ, qs.massXY[w][k]));
             }
         }
         List<Subband> subbands = Collections.unmodifiableList(bands);
@@ -156,12 +155,11 @@ final class SolutionAssembler {
             int a = d.windowStart[w];
             for (int b = 0; b < HoleStates.BANDS; b++) {
                 for (int k = 0; k < qs.holes.count[w][b]; k++) {
-                    double[] full = new double[nn];
-                    System.arraycopy(qs.holes.psi[w][b][k], 0, full, a, qs.holes.psi[w][b][k].length);
+                    WindowedWavefunction psi = new WindowedWavefunction(qs.holes.psi[w][b][k].clone(), a, nn);
                     double occ = qs.holes.sheet(d, w, b, k, phi, ref);
                     double mxy = qs.holes.dos[w][b][k] * Math.PI * Constants.HBAR * Constants.HBAR
                             / (Constants.ELECTRON_MASS * d.kT);
-                    hb.add(new HoleSubband(w, ValenceBands.Kind.values()[b], k, -qs.holes.energy[w][b][k], full, occ, mxy));
+                    hb.add(new HoleSubband(w, ValenceBands.Kind.values()[b], k, -qs.holes.energy[w][b][k], psi, occ, mxy));
                 }
             }
         }
