@@ -72,6 +72,8 @@ public record InterfaceRoughness(double rmsHeight, double correlationLength, Fie
      *
      * @param rmsHeight Delta (m), in [0, 2 nm]
      * @param correlationLength Lambda (m), in [0.1 nm, 100 nm]
+     * @param fieldTerm the field term of the scattering potential, non-null
+     *        (default {@link FieldTerm#MEAN_FIELD})
      */
     public InterfaceRoughness {
         Require.inRange("interface roughness rms height Delta (m)", rmsHeight, 0, 2e-9);
