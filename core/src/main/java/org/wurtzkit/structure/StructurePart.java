@@ -13,7 +13,7 @@ import org.wurtzkit.errors.Require;
  *                     calls for it (0 first); -1 for the top boundary
  * @param states       the interface-state set within that sheet (0 first); -1 for the top boundary
  */
-public record StructurePart(Kind kind, int layerFromTop, int sheet, int states) implements java.io.Serializable {
+public record StructurePart(Kind kind, int layerFromTop, int sheet, int states) {
     /** The parts a whole-structure check can point at. */
     public enum Kind {
         /** One interface-state set of one sheet on the top face of a nitride layer. */
