@@ -72,6 +72,7 @@ public record InterfaceRoughness(double rmsHeight, double correlationLength, Fie
      *
      * @param rmsHeight Delta (m), in [0, 2 nm]
      * @param correlationLength Lambda (m), in [0.1 nm, 100 nm]
+     * @param fieldTerm what stands for e F_eff in the rate; non-null
      */
     public InterfaceRoughness {
         Require.inRange("interface roughness rms height Delta (m)", rmsHeight, 0, 2e-9);
