@@ -9,7 +9,7 @@ import org.wurtzkit.errors.InvalidParameterException;
 public final class InvalidStructurePartException extends InvalidParameterException implements StructurePart.Located {
     private static final long serialVersionUID = 1L;
     /** Where the value belongs. */
-    private final StructurePart part;
+    private final transient StructurePart part;
 
     /**
      * @param part  where in the stack the value belongs

@@ -7,18 +7,13 @@ import org.wurtzkit.errors.Require;
  * lies, so that a reader of stack files can point at the exact entry: the interface states of one sheet on the
  * top face of one layer, or the top boundary.
  *
- * <p>Serializable because the exceptions that carry it are; its serialized form is the four
- * components (a record is serialized component by component), so the Serialized Form page leaves it
- * out.
- *
  * @param kind         what part of the stack
  * @param layerFromTop the nitride layer, counted from the surface (0 = top nitride layer); -1 for the top boundary
  * @param sheet        the sheet on that layer's top face, in the order of {@link Structure.Builder#sheetOnTop}
  *                     calls for it (0 first); -1 for the top boundary
  * @param states       the interface-state set within that sheet (0 first); -1 for the top boundary
- * @serial exclude
  */
-public record StructurePart(Kind kind, int layerFromTop, int sheet, int states) implements java.io.Serializable {
+public record StructurePart(Kind kind, int layerFromTop, int sheet, int states) {
     /** The parts a whole-structure check can point at. */
     public enum Kind {
         /** One interface-state set of one sheet on the top face of a nitride layer. */

@@ -11,7 +11,7 @@ import org.wurtzkit.errors.WurtzkitException;
 public final class StructurePartException extends WurtzkitException implements StructurePart.Located {
     private static final long serialVersionUID = 1L;
     /** Where the inconsistency lies. */
-    private final StructurePart part;
+    private final transient StructurePart part;
 
     /**
      * @param part    where in the stack the inconsistency lies

@@ -165,8 +165,8 @@ public record InterfaceRoughness(double rmsHeight, double correlationLength, Fie
     @Override
     public Optional<String> warning(SubbandScattering s) {
         if (force(s) == 0) {
-            return Optional.of("interface roughness: a subband has no interface near its peak (or no field"
-                    + " there); its roughness rate is 0");
+            return Optional.of("interface roughness: a subband has no interface near its peak (or no "
+                    + (fieldTerm == FieldTerm.MEAN_FIELD ? "field" : "band step") + " there); its roughness rate is 0");
         }
         Optional<WurtziteMaterial> barrier = s.interfaceBarrier();
         if (barrier.isPresent() && isBinary(barrier.get())) {
