@@ -15,7 +15,7 @@ import org.wurtzkit.errors.InvalidParameterException;
  * gives back an equal record; the defaults (no rules) are the empty text. A non-default
  * {@link QuasiFermiLevels.HolesUnderInsulator} adds the item {@code holesUnderInsulator|<choice>}
  * (lower case); a forward-bias rule other than the default adds a last item
- * {@code forward-bias|<rule>} with the rule's name in lower case ({@code none}); defaults write
+ * {@code forward-bias|<rule>} with the rule's name in lower case ({@code gate_side_follows_gate}); defaults write
  * nothing, so the text of the default options stays empty.
  */
 final class QuasiFermiLevelsText {
@@ -56,7 +56,7 @@ final class QuasiFermiLevelsText {
             }
             sb.append(HOLES_UNDER_INSULATOR).append('|').append(q.holesUnderInsulator().name().toLowerCase(Locale.ROOT));
         }
-        if (q.forwardBiasElectrons() != QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE) {
+        if (q.forwardBiasElectrons() != QuasiFermiLevels.ForwardBiasElectrons.NONE) {
             if (sb.length() > 0) {
                 sb.append(';');
             }

@@ -17,19 +17,21 @@ import org.wurtzkit.units.Units;
 
 /**
  * Sheet densities per carrier sheet (issue 12, defect 4) under a forward-biased gate, with both
- * forward-bias rules of {@link QuasiFermiLevels}: the old one (every electron follows the channel),
+ * forward-bias rules of {@link QuasiFermiLevels}: the default (every electron follows the channel),
  * where a parasitic channel forms in the barrier under the gate and the 2DEG saturates, and the
- * default, where the electrons on the gate side of the barrier's conduction-band maximum follow the
+ * opt-in rule, where the electrons on the gate side of the barrier's conduction-band maximum follow the
  * gate.
  */
 class ForwardBiasSheetsTest {
     private static final ParameterSet SET = ParameterSets.defaultSet();
-    /** The forward-bias rule off: electrons follow the channel everywhere (the behaviour before it). */
+    /** The default, set explicitly: electrons follow the channel everywhere. */
     private static final SelfConsistentSolver SOLVER = new SelfConsistentSolver(SolverOptions.defaults()
             .withQuasiFermiLevels(QuasiFermiLevels.defaults().withForwardBiasElectrons(
                     QuasiFermiLevels.ForwardBiasElectrons.NONE)));
-    /** The documented default: gate-side electrons follow a forward-biased gate. */
-    private static final SelfConsistentSolver DEFAULT = new SelfConsistentSolver();
+    /** The opt-in rule: gate-side electrons follow a forward-biased gate. */
+    private static final SelfConsistentSolver GATE_SIDE = new SelfConsistentSolver(SolverOptions.defaults()
+            .withQuasiFermiLevels(QuasiFermiLevels.defaults().withForwardBiasElectrons(
+                    QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE)));
     private static final double PHI_B = 1.0;
     private static final double BARRIER = 25 * Units.NM;
 
@@ -93,9 +95,9 @@ class ForwardBiasSheetsTest {
      * above 0 V; common practice, no source: a self-check of the switch).
      */
     @Test
-    void atZeroAndReverseBiasTheDefaultIsTheOldRuleBitForBit() {
+    void atZeroAndReverseBiasTheGateSideRuleChangesNothingBitForBit() {
         for (double v : new double[] {0, -2}) {
-            Solution a = DEFAULT.solve(hemt(v));
+            Solution a = GATE_SIDE.solve(hemt(v));
             Solution b = SOLVER.solve(hemt(v));
             assertArrayEquals(b.potential(), a.potential(), "potential at " + v + " V");
             assertArrayEquals(b.electronDensity(), a.electronDensity(), "electrons at " + v + " V");
@@ -105,7 +107,7 @@ class ForwardBiasSheetsTest {
     }
 
     /**
-     * The default under forward bias. At the metal the conduction band lies phi_B above the gate's
+     * The opt-in gate-side rule under forward bias. At the metal the conduction band lies phi_B above the gate's
      * Fermi level whatever the bias (the Schottky boundary condition; E. H. Rhoderick and R. H.
      * Williams, Metal-Semiconductor Contacts, 2nd ed., Clarendon Press 1988), so electrons held at
      * the gate's level cannot gather under it: the barrier between the gate and its conduction-band
@@ -118,13 +120,13 @@ class ForwardBiasSheetsTest {
      * capacitance the formula leaves out is about 5 % here).
      */
     @Test
-    void theDefaultHoldsTheGateSideAtTheGateLevelAndTheBarrierStaysAnInsulator() {
+    void theGateSideRuleHoldsTheGateSideAtTheGateLevelAndTheBarrierStaysAnInsulator() {
         double[] biases = {1.25, 1.5, 1.75, 2.0};
         double[] ns = new double[biases.length];
         Solution start = null;
         Solution old15 = SOLVER.solve(hemt(1.5));
         for (int b = 0; b < biases.length; b++) {
-            Solution s = DEFAULT.solve(hemt(biases[b]), start);
+            Solution s = GATE_SIDE.solve(hemt(biases[b]), start);
             start = s;
             assertTrue(s.convergence().iterations() < 40, "the split settles: " + s.convergence());
             ns[b] = s.sheetDensityPerCm2();
@@ -161,16 +163,18 @@ class ForwardBiasSheetsTest {
      */
     @Test
     void theSwitchTravelsWithTheSettings() {
-        SolverOptions off = SOLVER.options();
-        Map<String, String> text = off.settings();
-        assertEquals("forward-bias|none", text.get("quasiFermiLevels"));
-        assertEquals(off, SolverOptions.fromSettings(text));
+        assertEquals(QuasiFermiLevels.ForwardBiasElectrons.NONE, QuasiFermiLevels.defaults().forwardBiasElectrons());
+        assertEquals(SOLVER.options(), SolverOptions.defaults());
+        SolverOptions on = GATE_SIDE.options();
+        Map<String, String> text = on.settings();
+        assertEquals("forward-bias|gate_side_follows_gate", text.get("quasiFermiLevels"));
+        assertEquals(on, SolverOptions.fromSettings(text));
         assertEquals("", SolverOptions.defaults().settings().get("quasiFermiLevels"));
         SolverOptions both = SolverOptions.defaults().withQuasiFermiLevels(QuasiFermiLevels.defaults()
                 .withLayer(Carrier.HOLES, "cap", FermiContact.GATE)
-                .withForwardBiasElectrons(QuasiFermiLevels.ForwardBiasElectrons.NONE));
+                .withForwardBiasElectrons(QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE));
         assertEquals(both, SolverOptions.fromSettings(both.settings()));
-        assertEquals(QuasiFermiLevels.ForwardBiasElectrons.NONE,
+        assertEquals(QuasiFermiLevels.ForwardBiasElectrons.GATE_SIDE_FOLLOWS_GATE,
                 both.quasiFermiLevels().withLayer(Carrier.ELECTRONS, "cap", FermiContact.GATE).forwardBiasElectrons());
     }
 
@@ -180,7 +184,7 @@ class ForwardBiasSheetsTest {
      */
     @Test
     void classicalSolvesApplyTheRuleToo() {
-        SelfConsistentSolver classical = new SelfConsistentSolver(SolverOptions.defaults()
+        SelfConsistentSolver classical = new SelfConsistentSolver(GATE_SIDE.options()
                 .withQuantumWindows(QuantumWindows.none()));
         Solution s = classical.solve(hemt(1.5));
         double[] efn = s.electronFermiLevel();
