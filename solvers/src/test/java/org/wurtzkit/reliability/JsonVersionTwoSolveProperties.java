@@ -1,6 +1,5 @@
 package org.wurtzkit.reliability;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
@@ -23,9 +22,7 @@ import org.wurtzkit.material.ParameterSets;
 import org.wurtzkit.material.Source;
 import org.wurtzkit.material.WurtziteMaterial;
 import org.wurtzkit.materials.data.StructureJson;
-import org.wurtzkit.solvers.sp.NotConvergedException;
 import org.wurtzkit.solvers.sp.SelfConsistentSolver;
-import org.wurtzkit.solvers.sp.Solution;
 import org.wurtzkit.solvers.sp.SolverOptions;
 import org.wurtzkit.strain.CriticalThickness;
 import org.wurtzkit.strain.CriticalThicknessModel;
@@ -125,22 +122,6 @@ class JsonVersionTwoSolveProperties {
         String text = StructureJson.write(s);
         Structure back = StructureJson.reader().read(text, "spec " + spec);
         assertEquals(s, back, spec.toString());
-        Solution a;
-        try {
-            a = SOLVER.solve(s);
-        } catch (NotConvergedException e) {
-            NotConvergedException f = org.junit.jupiter.api.Assertions.assertThrows(NotConvergedException.class,
-                    () -> SOLVER.solve(back));
-            assertEquals(e.getMessage(), f.getMessage());
-            return;
-        }
-        Solution b = SOLVER.solve(back);
-        assertArrayEquals(a.depth(), b.depth());
-        assertArrayEquals(a.potential(), b.potential());
-        assertArrayEquals(a.electronDensity(), b.electronDensity());
-        assertArrayEquals(a.holeDensity(), b.holeDensity());
-        assertArrayEquals(a.interfaceStateCharge(), b.interfaceStateCharge());
-        assertEquals(Double.doubleToRawLongBits(a.sheetDensityPerCm2()), Double.doubleToRawLongBits(b.sheetDensityPerCm2()));
-        assertEquals(a.warnings(), b.warnings());
+        JsonRoundTripSolveProperties.assertSolvesBitForBit(SOLVER, s, back);
     }
 }
