@@ -187,28 +187,7 @@ public final class SpreadResult implements CsvTable {
                 List.of("median", CsvTable.cell(sheet.median()), CsvTable.cell(threshold.median())),
                 List.of("max", CsvTable.cell(sheet.max()), CsvTable.cell(threshold.max())),
                 List.of("count", Integer.toString(sheet.count()), Integer.toString(threshold.count())));
-        Optional<ResultProvenance> p = provenance();
-        return new CsvTable() {
-            @Override
-            public Optional<ResultProvenance> provenance() {
-                return p;
-            }
-
-            @Override
-            public List<Column> columns() {
-                return cols;
-            }
-
-            @Override
-            public int rowCount() {
-                return rows.size();
-            }
-
-            @Override
-            public List<String> row(int row) {
-                return rows.get(row);
-            }
-        };
+        return new RowsTable(cols, rows, provenance());
     }
 
     @Override

@@ -3,6 +3,7 @@ package org.wurtzkit.solvers.workflow;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.DoubleFunction;
 import org.wurtzkit.errors.InvalidParameterException;
 import org.wurtzkit.errors.Require;
 import org.wurtzkit.material.Composition;
@@ -34,33 +35,16 @@ public final class StructureFamilies {
     public static StructureFamily layerThicknessNm(Structure template, String layerName) {
         int index = find(template, layerName);
         Column c = Column.of(layerName + "_thickness", "nm");
-        return new StructureFamily() {
-            @Override
-            public Column parameter() {
-                return c;
+        return new TemplateFamily(c, "StructureFamilies.layerThicknessNm(template, \"" + layerName + "\")",
+                template, nm -> {
+            Require.inRange("thickness of layer \"" + layerName + "\" (nm)", nm, 0, Units.mToNm(Layer.MAX_THICKNESS));
+            Layer old = template.layersBottomUp().get(index);
+            if (nm == 0 && template.layersBottomUp().size() == 1) {
+                throw new InvalidParameterException("thickness of layer \"" + layerName + "\" (nm)", "0",
+                        "(0, " + Units.mToNm(Layer.MAX_THICKNESS) + "] (it is the only layer)");
             }
-
-            @Override
-            public String description() {
-                return "StructureFamilies.layerThicknessNm(template, \"" + layerName + "\")";
-            }
-
-            @Override
-            public Optional<Structure> template() {
-                return Optional.of(template);
-            }
-
-            @Override
-            public Structure at(double nm) {
-                Require.inRange("thickness of layer \"" + layerName + "\" (nm)", nm, 0, Units.mToNm(Layer.MAX_THICKNESS));
-                Layer old = template.layersBottomUp().get(index);
-                if (nm == 0 && template.layersBottomUp().size() == 1) {
-                    throw new InvalidParameterException("thickness of layer \"" + layerName + "\" (nm)", "0",
-                            "(0, " + Units.mToNm(Layer.MAX_THICKNESS) + "] (it is the only layer)");
-                }
-                return rebuild(template, index, nm == 0 ? null : old.withThickness(nm * Units.NM));
-            }
-        };
+            return rebuild(template, index, nm == 0 ? null : old.withThickness(nm * Units.NM));
+        });
     }
 
     /**
@@ -80,30 +64,13 @@ public final class StructureFamilies {
         }
         double indium = alloy.composition().indium();
         Column c = Column.of(layerName + "_al_fraction", "");
-        return new StructureFamily() {
-            @Override
-            public Column parameter() {
-                return c;
-            }
-
-            @Override
-            public String description() {
-                return "StructureFamilies.alFraction(template, \"" + layerName + "\")";
-            }
-
-            @Override
-            public Optional<Structure> template() {
-                return Optional.of(template);
-            }
-
-            @Override
-            public Structure at(double x) {
-                Composition comp = new Composition(x, indium);
-                Layer l = new Layer(old.name(), new LayerMaterial.Alloy(comp), old.thickness(), old.dopants(),
-                        old.deepLevels(), old.deltaSheets(), old.relaxation());
-                return rebuild(template, index, l);
-            }
-        };
+        return new TemplateFamily(c, "StructureFamilies.alFraction(template, \"" + layerName + "\")",
+                template, x -> {
+            Composition comp = new Composition(x, indium);
+            Layer l = new Layer(old.name(), new LayerMaterial.Alloy(comp), old.thickness(), old.dopants(),
+                    old.deepLevels(), old.deltaSheets(), old.relaxation());
+            return rebuild(template, index, l);
+        });
     }
 
     private static int find(Structure template, String layerName) {
@@ -148,31 +115,14 @@ public final class StructureFamilies {
         List<InsulatorLayer> stack = template.gateStack();
         int index = unique(stack, InsulatorLayer::name, "insulator layers", insulatorName);
         Column c = Column.of(insulatorName + "_thickness", "nm");
-        return new StructureFamily() {
-            @Override
-            public Column parameter() {
-                return c;
-            }
-
-            @Override
-            public String description() {
-                return "StructureFamilies.insulatorThicknessNm(template, \"" + insulatorName + "\")";
-            }
-
-            @Override
-            public Optional<Structure> template() {
-                return Optional.of(template);
-            }
-
-            @Override
-            public Structure at(double nm) {
-                Require.inRange("thickness of insulator \"" + insulatorName + "\" (nm)", nm, Double.MIN_VALUE,
-                        Units.mToNm(Layer.MAX_THICKNESS));
-                List<InsulatorLayer> l = new ArrayList<>(stack);
-                l.set(index, stack.get(index).withThickness(nm * Units.NM));
-                return template.withGateStack(l);
-            }
-        };
+        return new TemplateFamily(c, "StructureFamilies.insulatorThicknessNm(template, \"" + insulatorName + "\")",
+                template, nm -> {
+            Require.inRange("thickness of insulator \"" + insulatorName + "\" (nm)", nm, Double.MIN_VALUE,
+                    Units.mToNm(Layer.MAX_THICKNESS));
+            List<InsulatorLayer> l = new ArrayList<>(stack);
+            l.set(index, stack.get(index).withThickness(nm * Units.NM));
+            return template.withGateStack(l);
+        });
     }
 
     /**
@@ -190,32 +140,32 @@ public final class StructureFamilies {
         Layer old = template.layersBottomUp().get(index);
         double full = old.thicknessNm();
         Column c = Column.of(layerName + "_recess_depth", "nm");
-        return new StructureFamily() {
-            @Override
-            public Column parameter() {
-                return c;
+        return new TemplateFamily(c, "StructureFamilies.recessDepthNm(template, \"" + layerName + "\")",
+                template, nm -> {
+            Require.inRange("recess depth into layer \"" + layerName + "\" (nm)", nm, 0, full);
+            if (nm >= full) {
+                throw new InvalidParameterException("recess depth into layer \"" + layerName + "\" (nm)",
+                        Double.toString(nm), "[0, " + full + ") (the layer's thickness; a recess must leave some)");
             }
+            return template.withLayer(index, old.withThickness((full - nm) * Units.NM));
+        });
+    }
 
-            @Override
-            public String description() {
-                return "StructureFamilies.recessDepthNm(template, \"" + layerName + "\")";
-            }
+    /**
+     * A family of this class: its parameter, its factory call in words and its template (so a
+     * result's provenance can rebuild it from data), and the structure for each value.
+     */
+    private record TemplateFamily(Column parameter, String description, Structure base,
+            DoubleFunction<Structure> build) implements StructureFamily {
+        @Override
+        public Optional<Structure> template() {
+            return Optional.of(base);
+        }
 
-            @Override
-            public Optional<Structure> template() {
-                return Optional.of(template);
-            }
-
-            @Override
-            public Structure at(double nm) {
-                Require.inRange("recess depth into layer \"" + layerName + "\" (nm)", nm, 0, full);
-                if (nm >= full) {
-                    throw new InvalidParameterException("recess depth into layer \"" + layerName + "\" (nm)",
-                            Double.toString(nm), "[0, " + full + ") (the layer's thickness; a recess must leave some)");
-                }
-                return template.withLayer(index, old.withThickness((full - nm) * Units.NM));
-            }
-        };
+        @Override
+        public Structure at(double value) {
+            return build.apply(value);
+        }
     }
 
     /**

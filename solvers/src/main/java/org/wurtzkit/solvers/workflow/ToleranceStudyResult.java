@@ -487,7 +487,7 @@ public final class ToleranceStudyResult implements CsvTable {
                     CsvTable.cell(s.min()), CsvTable.cell(s.p05()), CsvTable.cell(s.p25()), CsvTable.cell(s.median()),
                     CsvTable.cell(s.p75()), CsvTable.cell(s.p95()), CsvTable.cell(s.max())));
         }
-        return table(cols, rows, provenance());
+        return new RowsTable(cols, rows, provenance());
     }
 
     /**
@@ -506,32 +506,9 @@ public final class ToleranceStudyResult implements CsvTable {
                         Integer.toString(s.rows())));
             }
         }
-        return table(cols, rows, provenance());
+        return new RowsTable(cols, rows, provenance());
     }
 
-    private static CsvTable table(List<Column> cols, List<List<String>> rows, Optional<ResultProvenance> p) {
-        return new CsvTable() {
-            @Override
-            public Optional<ResultProvenance> provenance() {
-                return p;
-            }
-
-            @Override
-            public List<Column> columns() {
-                return cols;
-            }
-
-            @Override
-            public int rowCount() {
-                return rows.size();
-            }
-
-            @Override
-            public List<String> row(int row) {
-                return rows.get(row);
-            }
-        };
-    }
 
     /**
      * One row per evaluation: {@code evaluation, role, row}, the inputs, the outputs, {@code status}.
